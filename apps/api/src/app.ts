@@ -1,0 +1,100 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import express from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import pg from 'pg';
+import type { Config } from './config/env.js';
+import { configurePassport } from './integrations/passport.js';
+import { csrfProtection } from './middleware/csrf.js';
+import { errorHandler, notFoundHandler } from './middleware/errors.js';
+import { healthRouter } from './routes/health.js';
+import { authRouter } from './routes/auth.js';
+import { bakeDaysRouter } from './routes/bake-days.js';
+
+export const SESSION_COOKIE = 'fryline.sid';
+
+const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
+
+/** Serves a built single-page app under `mount`, falling back to its index.html. */
+function spa(app: express.Express, mount: string, dir: string) {
+  const index = path.join(dir, 'index.html');
+  if (!fs.existsSync(index)) return;
+  app.use(mount, express.static(dir, { index: false, maxAge: '1h', immutable: false }));
+  const fallback: express.RequestHandler = (req, res, next) => {
+    if (req.method !== 'GET' || !req.accepts('html')) return next();
+    res.set('Cache-Control', 'no-cache').sendFile(index);
+  };
+  app.get(mount === '/' ? '/{*splat}' : [mount, `${mount}/{*splat}`], fallback);
+}
+
+/**
+ * Builds the whole HTTP app: API, sign-in, webhooks and the two built front
+ * ends. Only index.ts listens; tests drive this with supertest.
+ */
+export function createApp(config: Config) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.set('query parser', 'extended');
+
+  app.use((_req, res, next) => {
+    res.set({
+      'X-Content-Type-Options': 'nosniff',
+      'Referrer-Policy': 'same-origin',
+      'X-Frame-Options': 'DENY',
+    });
+    next();
+  });
+
+  app.use(healthRouter);
+
+  // Webhooks read the raw body for signature checks: mounted before express.json().
+  // (The payments webhook router is added by the pre-order module.)
+
+  app.use(express.json({ limit: '100kb' }));
+
+  const PgStore = connectPgSimple(session);
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 });
+  app.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: config.SESSION_SECRET,
+      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 600 }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.secureCookies,
+        maxAge: 30 * 24 * 3600 * 1000,
+        path: '/',
+      },
+    }),
+  );
+  const passport = configurePassport(config);
+  app.use(passport.session());
+  app.use(csrfProtection(SESSION_COOKIE));
+
+  app.use(authRouter(passport, SESSION_COOKIE));
+  app.use(bakeDaysRouter);
+
+  app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
+
+  const staticRoot = config.STATIC_DIR ?? path.join(repoRoot, 'apps');
+  spa(app, '/staff', path.join(staticRoot, 'staff/dist'));
+  spa(app, '/', path.join(staticRoot, 'shop/dist'));
+
+  app.use(notFoundHandler);
+  app.use(errorHandler);
+
+  return Object.assign(app, {
+    async closeResources() {
+      await sessionPool.end();
+    },
+  });
+}
+
+export type FrylineApp = ReturnType<typeof createApp>;

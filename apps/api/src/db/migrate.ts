@@ -1,0 +1,27 @@
+import { Umzug, SequelizeStorage } from 'umzug';
+import type { QueryInterface, Sequelize } from 'sequelize';
+
+// Migrations are listed here (not globbed) and imported through this module,
+// so they load the same way under tsx, vitest and a bundler; names are
+// recorded without an extension.
+const migrations = {
+  '0001-core': () => import('./migrations/0001-core.js'),
+} as const;
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug<QueryInterface>({
+    migrations: Object.entries(migrations).map(([name, load]) => ({
+      name,
+      up: async (params) => (await load()).up(params),
+      down: async (params) => (await load()).down?.(params),
+    })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrate(sequelize: Sequelize): Promise<string[]> {
+  const done = await createMigrator(sequelize).up();
+  return done.map((m) => m.name);
+}

@@ -1,0 +1,23 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { AppError } from '../lib/app-error.js';
+
+export const notFoundHandler: RequestHandler = (req, res) => {
+  res.status(404).json({ error: { code: 'not_found', message: `No route for ${req.method} ${req.originalUrl.split("?")[0]}` } });
+};
+
+/** Turns anything thrown into `{ error: { code, message, details } }`; hides internals of the unexpected. */
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  if (err instanceof AppError) {
+    res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details } });
+    return;
+  }
+  const status = typeof err?.status === 'number' ? err.status : typeof err?.statusCode === 'number' ? err.statusCode : 500;
+  if (status >= 400 && status < 500) {
+    // body-parser and friends: bad JSON, body too large
+    const code = err.type === 'entity.parse.failed' ? 'invalid_json' : err.type === 'entity.too.large' ? 'too_large' : 'bad_request';
+    res.status(status).json({ error: { code, message: err.expose ? err.message : 'The request could not be read' } });
+    return;
+  }
+  console.error(`[api] ${req.method} ${req.originalUrl} failed:`, err);
+  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' } });
+};

@@ -1,0 +1,63 @@
+import { Router, type Request, type Response } from 'express';
+import type { PassportStatic } from 'passport';
+import { csrfToken } from '../middleware/csrf.js';
+import { requireUser } from '../middleware/auth.js';
+
+/** Only a same-origin path may be a return address after sign-in. */
+export function safeReturnTo(value: unknown): string {
+  if (typeof value !== 'string' || !value.startsWith('/') || value.startsWith('//') || value.includes('\\')) return '/';
+  return value;
+}
+
+export function authRouter(passport: PassportStatic, cookieName: string) {
+  const router = Router();
+
+  router.get('/auth/google', (req, res, next) => {
+    req.session.returnTo = safeReturnTo(req.query.returnTo);
+    passport.authenticate('google', { scope: ['openid', 'email', 'profile'], prompt: 'select_account' })(req, res, next);
+  });
+
+  router.get('/auth/google/callback', (req, res, next) => {
+    const fail = (code: string) => {
+      // no half-made session survives a failed sign-in
+      req.session.destroy(() => {
+        res.clearCookie(cookieName, { path: '/' });
+        res.redirect(303, `/signin?error=${code}`);
+      });
+    };
+    passport.authenticate('google', (err: (Error & { code?: string }) | null, user: Express.User | false, info?: { message?: string }) => {
+      if (err) return fail(err.code === 'account_conflict' ? 'conflict' : 'failed');
+      if (!user) {
+        if (req.query.error === 'access_denied') return fail('access_denied');
+        return fail(/state/i.test(info?.message ?? '') ? 'state' : 'failed');
+      }
+      const returnTo = req.session.returnTo ?? '/';
+      // passport regenerates the session id here (no session fixation)
+      req.logIn(user, (loginErr) => {
+        if (loginErr) return next(loginErr);
+        res.redirect(303, returnTo);
+      });
+    })(req, res, next);
+  });
+
+  router.post('/auth/logout', (req: Request, res: Response, next) => {
+    req.logout((err) => {
+      if (err) return next(err);
+      req.session.destroy(() => {
+        res.clearCookie(cookieName, { path: '/' });
+        res.status(204).end();
+      });
+    });
+  });
+
+  router.get('/api/csrf', (req, res) => {
+    res.set('Cache-Control', 'no-store').json({ token: csrfToken(req) });
+  });
+
+  router.get('/api/me', requireUser, (req, res) => {
+    const { id, email, name, role } = req.user!;
+    res.set('Cache-Control', 'no-store').json({ id, email, name, role });
+  });
+
+  return router;
+}

@@ -1,0 +1,5 @@
+export * from './roles.js';
+export * from './errors.js';
+export * from './bake-days.js';
+export * from './orders.js';
+export * from './pricing.js';

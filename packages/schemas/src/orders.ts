@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import { boxSizeSchema } from './bake-days.js';
+
+const quantity = z
+  .number({ error: 'Quantity must be a number' })
+  .int('Quantity must be a whole number')
+  .min(1, 'Quantity must be at least 1')
+  .max(100, 'Quantity is too large');
+
+export const orderItemInputSchema = z.strictObject({
+  menuItemId: z.string().uuid('Unknown menu item'),
+  quantity,
+});
+
+export const boxInputSchema = z.strictObject({
+  size: boxSizeSchema,
+  items: z.array(orderItemInputSchema).min(1, 'A box needs at least one item').max(24),
+});
+export type BoxInput = z.infer<typeof boxInputSchema>;
+
+/**
+ * What a customer may send to create an order. Strict: a client-sent price,
+ * status, total or user id is refused, never trusted.
+ */
+export const createOrderSchema = z.strictObject({
+  bakeDayId: z.string().uuid('Unknown bake day'),
+  pickupWindowId: z.string().uuid('Choose a pickup window'),
+  boxes: z.array(boxInputSchema).min(1, 'Add at least one box').max(20, 'At most 20 boxes in one order'),
+});
+export type CreateOrderInput = z.infer<typeof createOrderSchema>;
+
+export const moveOrderSchema = z.strictObject({
+  pickupWindowId: z.string().uuid('Choose a pickup window'),
+});
+
+export const orderStatuses = ['held', 'paid', 'collected', 'no_show', 'cancelled', 'refunded', 'expired'] as const;
+export type OrderStatus = (typeof orderStatuses)[number];
+
+export interface OrderBoxView {
+  size: z.infer<typeof boxSizeSchema>;
+  pieces: number;
+  priceCents: number;
+  items: Array<{ menuItemId: string; name: string; quantity: number; surchargeCents: number; allergens: string[] }>;
+}
+
+export interface OrderView {
+  id: string;
+  status: OrderStatus;
+  subtotalCents: number;
+  taxCents: number;
+  totalCents: number;
+  refundedCents: number;
+  pickupCode: string | null;
+  holdExpiresAt: string | null;
+  checkoutUrl: string | null;
+  pickupWindow: { id: string; startsAt: string; endsAt: string };
+  bakeDay: { id: string; date: string; place: string; address: string; timeZone: string; cutoffAt: string };
+  boxes: OrderBoxView[];
+  createdAt: string;
+  canCancel: boolean;
+}

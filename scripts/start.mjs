@@ -1,0 +1,114 @@
+// `npm start`: installs what is missing, starts a project-local PostgreSQL,
+// migrates, loads the demo, builds the apps, and runs the fakes and the API.
+// Ctrl-C stops everything it started, PostgreSQL included.
+import path from 'node:path';
+import {
+  assertPortsFree, buildApps, ensurePnpm, installDependencies, log, root, SetupError, startChild, waitForHttp, run,
+} from './lib/shell.mjs';
+import { ensurePostgres } from './lib/postgres.mjs';
+
+const env = process.env;
+const num = (name, fallback) => {
+  const value = env[name] ?? String(fallback);
+  if (!/^\d+$/.test(value) || Number(value) > 65535) throw new SetupError(`${name} must be a port number (got ${JSON.stringify(value)})`);
+  return Number(value);
+};
+
+async function main() {
+  const ports = {
+    'Fryline app (PORT)': num('PORT', 3000),
+    'sign-in fake (OAUTH_FAKE_PORT)': num('OAUTH_FAKE_PORT', 3101),
+    'payments fake (PAYMENTS_FAKE_PORT)': num('PAYMENTS_FAKE_PORT', 3102),
+    'mail inbox (MAIL_INBOX_PORT)': num('MAIL_INBOX_PORT', 3103),
+    'SMTP fake (SMTP_PORT)': num('SMTP_PORT', 2525),
+  };
+  const [appPort, oauthPort, paymentsPort, inboxPort, smtpPort] = Object.values(ports);
+  const pgPort = num('PGPORT', 5433);
+  await assertPortsFree(ports);
+
+  const pnpm = ensurePnpm();
+  installDependencies(pnpm);
+  const pg = await ensurePostgres({ dataDir: path.join(root, '.data'), port: pgPort });
+  const children = [];
+  let stopping = false;
+  const stop = async (code = 0) => {
+    if (stopping) return;
+    stopping = true;
+    log('stopping…');
+    for (const child of children) child.kill('SIGTERM');
+    await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
+    if (pg.started) {
+      log('stopping PostgreSQL');
+      pg.stop();
+    }
+    process.exit(code);
+  };
+  process.on('SIGINT', () => stop(0));
+  process.on('SIGTERM', () => stop(0));
+
+  try {
+    const databaseUrl = pg.createDatabase('fryline');
+    const appUrl = env.PUBLIC_URL ?? `http://127.0.0.1:${appPort}`;
+    const shared = {
+      DATABASE_URL: databaseUrl,
+      PORT: String(appPort),
+      PUBLIC_URL: appUrl,
+      OAUTH_URL: `http://127.0.0.1:${oauthPort}`,
+      OAUTH_FAKE_PORT: String(oauthPort),
+      OAUTH_REDIRECT_URIS: `${appUrl}/auth/google/callback`,
+      STRIPE_API_URL: `http://127.0.0.1:${paymentsPort}`,
+      PAYMENTS_FAKE_PORT: String(paymentsPort),
+      PAYMENTS_FAKE_PUBLIC_URL: `http://127.0.0.1:${paymentsPort}`,
+      PAYMENTS_WEBHOOK_URL: `${appUrl}/webhooks/payments`,
+      MAIL_INBOX_PORT: String(inboxPort),
+      SMTP_PORT: String(smtpPort),
+    };
+    log('migrating and loading the demo scenario');
+    run(process.execPath, ['--import', 'tsx', 'seeds/src/setup.ts'], { env: { ...process.env, ...shared } });
+    buildApps(pnpm);
+
+    const tsx = (tag, file) => {
+      const child = startChild(tag, process.execPath, ['--import', 'tsx', file], shared);
+      child.on('exit', (code) => {
+        if (!stopping) {
+          log(`${tag} stopped unexpectedly (exit code ${code}); shutting down`);
+          stop(1);
+        }
+      });
+      children.push(child);
+    };
+    tsx('oauth', 'fakes/oauth/src/main.ts');
+    tsx('payments', 'fakes/payments/src/main.ts');
+    tsx('mail', 'fakes/mail/src/main.ts');
+    tsx('api', 'apps/api/src/index.ts');
+    await waitForHttp(`${appUrl}/api/health`);
+
+    console.log(`
+  Fryline is running.
+
+    Shop            ${appUrl}/
+    Staff           ${appUrl}/staff/
+    Mail inbox      http://127.0.0.1:${inboxPort}/
+    Sign-in fake    http://127.0.0.1:${oauthPort}/
+    Payments fake   http://127.0.0.1:${paymentsPort}/  (test card 4242 4242 4242 4242, any future expiry, any CVC)
+    SMTP            127.0.0.1:${smtpPort}
+    PostgreSQL      ${databaseUrl}
+
+  Demo accounts (choose one on the sign-in page):
+    owner@fryline.test     owner: bake days, menu, staff, refunds, sales
+    baker@fryline.test     baker: production sheet, formula, pickups
+    counter@fryline.test   counter: pickup list
+    customer@fryline.test  customer: shop and own orders
+
+  Press Ctrl-C to stop everything.
+`);
+  } catch (err) {
+    console.error(`\n${err instanceof SetupError ? err.message : err.stack}`);
+    await stop(1);
+  }
+}
+
+main().catch((err) => {
+  console.error(`\n${err instanceof SetupError ? err.message : err.stack}`);
+  process.exit(1);
+});
