@@ -12,6 +12,11 @@ import { errorHandler, notFoundHandler } from './middleware/errors.js';
 import { healthRouter } from './routes/health.js';
 import { authRouter } from './routes/auth.js';
 import { bakeDaysRouter } from './routes/bake-days.js';
+import { ordersRouter } from './routes/orders.js';
+import { waitlistRouter } from './routes/waitlist.js';
+import { webhooksRouter } from './routes/webhooks.js';
+import { staffOrdersRouter } from './routes/staff-orders.js';
+import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -34,6 +39,7 @@ function spa(app: express.Express, mount: string, dir: string) {
  * ends. Only index.ts listens; tests drive this with supertest.
  */
 export function createApp(config: Config) {
+  setContext(config);
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -51,7 +57,7 @@ export function createApp(config: Config) {
   app.use(healthRouter);
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
-  // (The payments webhook router is added by the pre-order module.)
+  app.use(webhooksRouter);
 
   app.use(express.json({ limit: '100kb' }));
 
@@ -80,6 +86,9 @@ export function createApp(config: Config) {
 
   app.use(authRouter(passport, SESSION_COOKIE));
   app.use(bakeDaysRouter);
+  app.use(ordersRouter);
+  app.use(waitlistRouter);
+  app.use(staffOrdersRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -2,12 +2,18 @@ import type { Sequelize } from 'sequelize';
 import type { Config } from '../config/env.js';
 import { createMailTransport } from '../integrations/mailer.js';
 import { relayOutbox } from './outbox-relay.js';
+import { sweepHolds } from './hold-sweeper.js';
+import { queueReminders } from './reminders.js';
 import { every } from './scheduler.js';
 
 /** Background work of one API process; several processes may run side by side. */
 export function startJobs(config: Config, sequelize: Sequelize): () => Promise<void> {
   const transport = createMailTransport(config);
-  const stops = [every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM))];
+  const stops = [
+    every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM)),
+    every('holds', 5_000, () => sweepHolds(new Date())),
+    every('reminders', 60_000, () => queueReminders(new Date())),
+  ];
   return async () => {
     await Promise.all(stops.map((stop) => stop()));
     transport.close();

@@ -163,6 +163,7 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
       id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
       order_id uuid NOT NULL REFERENCES orders(id) ON DELETE RESTRICT,
       provider_refund_id text UNIQUE,
+      request_key text UNIQUE,
       amount_cents integer NOT NULL CHECK (amount_cents > 0),
       reason text NOT NULL,
       requested_by uuid REFERENCES users(id),

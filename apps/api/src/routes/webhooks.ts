@@ -1,0 +1,22 @@
+import express, { Router } from 'express';
+import type Stripe from 'stripe';
+import { AppError } from '../lib/app-error.js';
+import { context } from '../services/context.js';
+import { handlePaymentEvent } from '../services/payment-events.js';
+
+export const webhooksRouter = Router();
+
+/** Payment events: raw body, signature checked by the SDK, applied once. */
+webhooksRouter.post('/webhooks/payments', express.raw({ type: '*/*', limit: '512kb' }), async (req, res) => {
+  const { payments, config } = context();
+  const signature = req.get('stripe-signature');
+  if (!signature || !Buffer.isBuffer(req.body)) throw new AppError('bad_signature', 'Missing signature', 400);
+  let event: Stripe.Event;
+  try {
+    event = payments.webhooks.constructEvent(req.body, signature, config.STRIPE_WEBHOOK_SECRET, 300);
+  } catch {
+    throw new AppError('bad_signature', 'The signature does not match', 400);
+  }
+  const result = await handlePaymentEvent(event);
+  res.json({ received: true, result });
+});

@@ -1,0 +1,57 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { loadConfig, ConfigError } from '../src/config/env.js';
+import { startStack, type Stack } from './support.js';
+
+let stack: Stack;
+beforeAll(async () => {
+  stack = await startStack();
+});
+afterAll(async () => stack.close());
+
+describe('health and error shapes', () => {
+  it('reports the database up', async () => {
+    const res = await request(stack.app).get('/api/health');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ ok: true, db: 'up' });
+  });
+
+  it('answers unknown API routes and bad JSON with the one error shape', async () => {
+    const missing = await request(stack.app).get('/api/nope');
+    expect(missing.status).toBe(404);
+    expect(missing.body.error).toMatchObject({ code: 'not_found' });
+    const bad = await request(stack.app).post('/api/orders').set('content-type', 'application/json').send('{"broken": ');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('invalid_json');
+  });
+
+  it('validates ids in the path before touching the database', async () => {
+    const res = await request(stack.app).get('/api/bake-days/not-a-uuid');
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'invalid', details: { fields: { id: expect.any(String) } } });
+  });
+});
+
+describe('configuration at boot', () => {
+  it('lists every bad variable at once', () => {
+    let error: unknown;
+    try {
+      loadConfig({ PORT: 'eighty', DATABASE_URL: 'mysql://x', STRIPE_SECRET_KEY: 'pk_live_nope', OAUTH_URL: 'not a url' });
+    } catch (err) {
+      error = err;
+    }
+    expect(error).toBeInstanceOf(ConfigError);
+    const problems = (error as ConfigError).problems.join('\n');
+    for (const name of ['PORT', 'DATABASE_URL', 'STRIPE_SECRET_KEY', 'OAUTH_URL']) expect(problems).toContain(name);
+  });
+
+  it('refuses the development session secret in production', () => {
+    expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET/);
+  });
+
+  it('uses the documented defaults', () => {
+    const config = loadConfig({});
+    expect(config).toMatchObject({ PORT: 3000, OAUTH_URL: 'http://127.0.0.1:3101', STRIPE_API_URL: 'http://127.0.0.1:3102', SMTP_PORT: 2525, HOLD_MINUTES: 10 });
+    expect(config.DATABASE_URL).toContain(':5433/');
+  });
+});

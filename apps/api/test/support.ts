@@ -1,0 +1,151 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { startMailFake } from '@fryline/fake-mail';
+import { startOAuthFake } from '@fryline/fake-oauth';
+import { startPaymentsFake } from '@fryline/fake-payments';
+import { connectDatabase, database } from '../src/db/sequelize.js';
+import { loadConfig, type Config } from '../src/config/env.js';
+import { createApp } from '../src/app.js';
+
+export const WEBHOOK_SECRET = 'whsec_api_tests';
+
+const TABLES = [
+  'session', 'audit_log', 'outbox', 'waitlist_entries', 'refunds', 'payment_events', 'order_lines', 'order_boxes', 'orders',
+  'bake_day_boxes', 'bake_day_menu_items', 'menu_items', 'pickup_windows', 'bake_days', 'shop_settings', 'users',
+];
+
+/** Fresh data for each test: every table emptied, the schema kept. */
+export async function resetData() {
+  await database().query(`TRUNCATE ${TABLES.map((t) => `"${t}"`).join(', ')} RESTART IDENTITY CASCADE`);
+}
+
+export type Stack = Awaited<ReturnType<typeof startStack>>;
+
+/**
+ * The app listening on a free port, with the three fakes beside it, as the
+ * start command wires them (only the ports differ).
+ */
+export async function startStack(overrides: Record<string, string> = {}) {
+  connectDatabase(process.env.TEST_DATABASE_URL!);
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const port = (server.address() as AddressInfo).port;
+  const url = `http://127.0.0.1:${port}`;
+  const mail = await startMailFake({ smtpPort: 0, httpPort: 0 });
+  const oauth = await startOAuthFake({
+    port: 0,
+    clients: [{ clientId: 'fryline-test', clientSecret: 'fryline-test-secret', redirectUris: [`${url}/auth/google/callback`] }],
+  });
+  const payments = await startPaymentsFake({ port: 0, webhookUrl: `${url}/webhooks/payments`, webhookSecret: WEBHOOK_SECRET, retryDelaysMs: [100, 200, 400] });
+  const config: Config = loadConfig({
+    NODE_ENV: 'test',
+    PORT: String(port),
+    PUBLIC_URL: url,
+    DATABASE_URL: process.env.TEST_DATABASE_URL,
+    OAUTH_URL: oauth.url,
+    OAUTH_CLIENT_ID: 'fryline-test',
+    OAUTH_CLIENT_SECRET: 'fryline-test-secret',
+    STRIPE_API_URL: payments.url,
+    STRIPE_SECRET_KEY: 'sk_test_api_tests',
+    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+    SMTP_PORT: String(mail.smtpPort),
+    JOBS: 'off',
+    ...overrides,
+  });
+  const app = createApp(config);
+  server.on('request', app);
+  return {
+    url,
+    port,
+    config,
+    app,
+    mail,
+    oauth,
+    payments,
+    async close() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections();
+      await Promise.all([mail.close(), oauth.close(), payments.close()]);
+      await app.closeResources();
+    },
+  };
+}
+
+/** A minimal browser: one cookie jar, redirects followed by hand so each hop can be checked. */
+export class Browser {
+  private cookies = new Map<string, string>();
+
+  constructor(private readonly base: string) {}
+
+  cookieHeader() {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+  }
+
+  hasCookie(name: string) {
+    return this.cookies.has(name);
+  }
+
+  private keep(res: Response) {
+    for (const line of res.headers.getSetCookie()) {
+      const [pair, ...attrs] = line.split(';');
+      const [name, ...rest] = pair!.split('=');
+      const value = rest.join('=');
+      const expired = attrs.some((a) => /^\s*expires=Thu, 01 Jan 1970/i.test(a)) || value === '';
+      if (expired) this.cookies.delete(name!.trim());
+      else this.cookies.set(name!.trim(), value);
+    }
+  }
+
+  async fetch(path: string, init: RequestInit = {}): Promise<Response> {
+    const target = path.startsWith('http') ? path : `${this.base}${path}`;
+    const sameSite = target.startsWith(this.base);
+    const headers = new Headers(init.headers);
+    if (sameSite && this.cookies.size) headers.set('cookie', this.cookieHeader());
+    const res = await fetch(target, { ...init, headers, redirect: 'manual' });
+    if (sameSite) this.keep(res);
+    return res;
+  }
+
+  async csrf(): Promise<string> {
+    const res = await this.fetch('/api/csrf');
+    return ((await res.json()) as { token: string }).token;
+  }
+
+  /** JSON request with the CSRF token, as the apps send it. */
+  async send(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
+    const token = await this.csrf();
+    const res = await this.fetch(path, {
+      method,
+      headers: { 'content-type': 'application/json', 'x-csrf-token': token, ...headers },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    const text = await res.text();
+    return { status: res.status, body: text ? JSON.parse(text) : null };
+  }
+
+  async getJson(path: string) {
+    const res = await this.fetch(path);
+    return { status: res.status, body: await res.json() };
+  }
+}
+
+/**
+ * Signs in through the real flow: the app's /auth/google redirect, the
+ * sign-in fake's chooser form, the callback. Returns where the app sent us.
+ */
+export async function signIn(browser: Browser, email: string, opts: { returnTo?: string; deny?: boolean; tamperState?: boolean; verified?: boolean } = {}) {
+  const start = await browser.fetch(`/auth/google?returnTo=${encodeURIComponent(opts.returnTo ?? '/')}`);
+  if (start.status !== 302) throw new Error(`sign-in start answered ${start.status}`);
+  const authorize = new URL(start.headers.get('location')!);
+  const form = new URLSearchParams(authorize.searchParams);
+  if (opts.deny) form.set('decision', 'deny');
+  else {
+    form.set('email', email);
+    form.set('email_verified', opts.verified === false ? 'false' : 'true');
+  }
+  const chosen = await fetch(`${authorize.origin}/authorize`, { method: 'POST', body: form, redirect: 'manual' });
+  const callback = new URL(chosen.headers.get('location')!);
+  if (opts.tamperState) callback.searchParams.set('state', 'forged-state-value');
+  const done = await browser.fetch(callback.pathname + callback.search);
+  return { status: done.status, location: done.headers.get('location'), callback };
+}
