@@ -82,9 +82,9 @@ export function createApp(config: Config) {
   );
   const passport = configurePassport(config);
   app.use(passport.session());
-  app.use(csrfProtection(SESSION_COOKIE));
+  app.use(csrfProtection(SESSION_COOKIE, config.SESSION_SECRET));
 
-  app.use(authRouter(passport, SESSION_COOKIE));
+  app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);

@@ -14,7 +14,7 @@ beforeEach(async () => {
 });
 
 async function orderBody() {
-  const [day] = await (await fetch(`${stack.url}/api/bake-days`)).json();
+  const [day] = (await (await fetch(`${stack.url}/api/bake-days`)).json()) as any;
   const ring = day.menu.find((m: { kind: string }) => m.kind === 'ring');
   return { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0].id, boxes: [{ size: 'half-dozen', items: [{ menuItemId: ring.id, quantity: 6 }] }] };
 }
@@ -26,7 +26,7 @@ describe('CSRF: a state-changing request with a session cookie must carry the to
     const before = await BakeDay.findAll({ order: [['date', 'ASC']] });
     const res = await browser.fetch('/api/orders', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(await orderBody()) });
     expect(res.status).toBe(403);
-    expect((await res.json()).error.code).toBe('csrf');
+    expect(((await res.json()) as any).error.code).toBe('csrf');
     expect(await Order.count({ where: { status: 'held' } })).toBe(0);
     const after = await BakeDay.findAll({ order: [['date', 'ASC']] });
     expect(after.map((d) => d.ringsRemaining)).toEqual(before.map((d) => d.ringsRemaining));

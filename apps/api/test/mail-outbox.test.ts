@@ -37,9 +37,9 @@ describe('e-mail outbox and relay (SMTP, RFC 5321)', () => {
     await queue('reader@example.test', 'Outbox check');
     const transport = createMailTransport({ SMTP_HOST: '127.0.0.1', SMTP_PORT: stack.mail.smtpPort });
     expect(await relayOutbox(database(), transport, 'Fryline <orders@fryline.test>')).toEqual({ sent: 1, failed: 0 });
-    const list = await (await fetch(`${stack.mail.url}/api/messages`)).json();
+    const list = (await (await fetch(`${stack.mail.url}/api/messages`)).json()) as any;
     expect(list[0]).toMatchObject({ to: ['reader@example.test'], subject: 'Outbox check' });
-    const detail = await (await fetch(`${stack.mail.url}/api/messages/${list[0].id}`)).json();
+    const detail = (await (await fetch(`${stack.mail.url}/api/messages/${list[0].id}`)).json()) as any;
     expect(detail.text.trim()).toBe('Plain text body');
     expect(detail.attachments[0]).toMatchObject({ filename: 'note.txt', size: 16 });
     const row = await OutboxMessage.findOne();

@@ -108,7 +108,7 @@ export class Browser {
 
   async csrf(): Promise<string> {
     const res = await this.fetch('/api/csrf');
-    return ((await res.json()) as { token: string }).token;
+    return ((await res.json()) as any as { token: string }).token;
   }
 
   /** JSON request with the CSRF token, as the apps send it. */
@@ -120,12 +120,12 @@ export class Browser {
       body: body === undefined ? undefined : JSON.stringify(body),
     });
     const text = await res.text();
-    return { status: res.status, body: text ? JSON.parse(text) : null };
+    return { status: res.status, body: (text ? JSON.parse(text) : null) as any };
   }
 
   async getJson(path: string) {
     const res = await this.fetch(path);
-    return { status: res.status, body: await res.json() };
+    return { status: res.status, body: (await res.json()) as any };
   }
 }
 

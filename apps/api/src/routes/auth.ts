@@ -9,7 +9,7 @@ export function safeReturnTo(value: unknown): string {
   return value;
 }
 
-export function authRouter(passport: PassportStatic, cookieName: string) {
+export function authRouter(passport: PassportStatic, cookieName: string, secret: string) {
   const router = Router();
 
   router.get('/auth/google', (req, res, next) => {
@@ -51,7 +51,7 @@ export function authRouter(passport: PassportStatic, cookieName: string) {
   });
 
   router.get('/api/csrf', (req, res) => {
-    res.set('Cache-Control', 'no-store').json({ token: csrfToken(req) });
+    res.set("Cache-Control", "no-store").json({ token: csrfToken(req, secret) });
   });
 
   router.get('/api/me', requireUser, (req, res) => {
