@@ -1,3 +1,4 @@
+import type { AddressInfo } from 'node:net';
 import { loadConfig, ConfigError } from './config/env.js';
 import { connectDatabase, closeDatabase } from './db/sequelize.js';
 import { createApp } from './app.js';
@@ -18,7 +19,10 @@ async function main() {
     }
     process.exit(1);
   });
-  server.on('listening', () => console.log(`Fryline API listening on ${config.publicUrl}`));
+  server.on('listening', () => {
+    const { port } = server.address() as AddressInfo;
+    console.log(`Fryline API listening on http://${config.HOST}:${port} (public address ${config.publicUrl})`);
+  });
 
   const shutdown = async () => {
     server.close();

@@ -1,0 +1,144 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import crypto from 'node:crypto';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { sign } from 'cookie-signature';
+import { QueryTypes } from 'sequelize';
+import { seedDemo } from '@fryline/seeds';
+import { database } from '../src/db/sequelize.js';
+import { BakeDay, User } from '../src/db/models/index.js';
+import { startStack, resetData, type Stack } from './support.js';
+import { openDay } from './order-helpers.js';
+
+// Concurrency check of the capacity counter: many customers at once never get
+// more rings than the bake day has. (Rule under test: one conditional UPDATE
+// per counter plus CHECK (remaining >= 0); no read-then-write.)
+
+const CAPACITY = 100;
+const CLIENTS = 50;
+const REQUESTS = 500;
+
+let stack: Stack;
+let second: ChildProcess | null = null;
+let secondUrl = '';
+
+beforeAll(async () => {
+  stack = await startStack();
+});
+afterAll(async () => {
+  second?.kill('SIGTERM');
+  await stack.close();
+});
+beforeEach(async () => {
+  await resetData();
+  stack.payments.reset();
+  stack.payments.setWebhookEndpoint(null);
+  await seedDemo(new Date());
+});
+
+/** Signed-in customers, made directly as session rows (the sign-in flow has its own tests). */
+async function customers(n: number) {
+  const users = await User.bulkCreate(Array.from({ length: n }, (_, i) => ({ email: `crowd${i}@example.test`, name: `Crowd ${i}`, role: 'customer' as const, emailVerified: true })));
+  const expires = new Date(Date.now() + 3600_000);
+  const sessions = users.map((u) => ({ sid: crypto.randomUUID(), user: u.id }));
+  await database().query(
+    `INSERT INTO "session" (sid, sess, expire) SELECT * FROM unnest(ARRAY[:sids]::varchar[], ARRAY[:sess]::json[], ARRAY[:exp]::timestamp[])`,
+    {
+      replacements: {
+        sids: sessions.map((s) => s.sid),
+        sess: sessions.map((s) => JSON.stringify({ cookie: { originalMaxAge: 3600_000, expires, httpOnly: true, path: '/', sameSite: 'lax' }, passport: { user: s.user }, csrfIssued: true })),
+        exp: sessions.map(() => expires),
+      },
+    },
+  );
+  return sessions.map((s) => `fryline.sid=${encodeURIComponent(`s:${sign(s.sid, stack.config.SESSION_SECRET)}`)}`);
+}
+
+async function crowd(urls: string[]) {
+  const day = await openDay(stack);
+  await BakeDay.update({ ringCapacity: CAPACITY, ringsRemaining: CAPACITY }, { where: { id: day.id } });
+  const cookies = await customers(REQUESTS);
+  const ring = day.menu.find((m) => m.kind === 'ring')!;
+  const tokens = await Promise.all(
+    cookies.map(async (cookie, i) => ((await (await fetch(`${urls[i % urls.length]}/api/csrf`, { headers: { cookie } })).json()) as any).token as string),
+  );
+  const statuses: Record<number, number> = {};
+  let ringsGranted = 0;
+  let next = 0;
+  await Promise.all(
+    Array.from({ length: CLIENTS }, async () => {
+      while (next < REQUESTS) {
+        const i = next++;
+        const size = i % 3 === 0 ? 'dozen' : 'half-dozen';
+        const pieces = size === 'dozen' ? 12 : 6;
+        const res = await fetch(`${urls[i % urls.length]}/api/orders`, {
+          method: 'POST',
+          headers: { cookie: cookies[i]!, 'x-csrf-token': tokens[i]!, 'content-type': 'application/json' },
+          body: JSON.stringify({ bakeDayId: day.id, pickupWindowId: day.pickupWindows[i % 3]!.id, boxes: [{ size, items: [{ menuItemId: ring.id, quantity: pieces }] }] }),
+        });
+        statuses[res.status] = (statuses[res.status] ?? 0) + 1;
+        if (res.status === 201) ringsGranted += pieces;
+        else expect([409]).toContain(res.status);
+      }
+    }),
+  );
+  const [totals] = await database().query<{ remaining: number; held: number; paid: number }>(
+    `SELECT d.rings_remaining AS remaining,
+            COALESCE(SUM(o.rings) FILTER (WHERE o.status = 'held' AND o.holds_capacity), 0)::int AS held,
+            COALESCE(SUM(o.rings) FILTER (WHERE o.status IN ('paid', 'collected', 'no_show') AND o.holds_capacity), 0)::int AS paid
+       FROM bake_days d LEFT JOIN orders o ON o.bake_day_id = d.id
+      WHERE d.id = :id GROUP BY d.id`,
+    { replacements: { id: day.id }, type: QueryTypes.SELECT },
+  );
+  return { statuses, ringsGranted, totals: totals! };
+}
+
+describe(`no oversell: ${REQUESTS} order requests from ${CLIENTS} concurrent clients for ${CAPACITY} rings`, () => {
+  it('one API process: confirmed plus held never exceeds capacity, and capacity = remaining + held + paid', async () => {
+    const { statuses, ringsGranted, totals } = await crowd([stack.url]);
+    expect(statuses[201]).toBeGreaterThan(0);
+    expect(ringsGranted).toBeLessThanOrEqual(CAPACITY);
+    expect(totals.held + totals.paid).toBe(ringsGranted);
+    expect(totals.remaining + totals.held + totals.paid).toBe(CAPACITY);
+    // dozens and half dozens fill 100 exactly or leave less than a half dozen
+    expect(totals.remaining).toBeLessThan(6);
+  });
+
+  it('two API processes sharing the database: the same holds', async () => {
+    const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+    second = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+      cwd: root,
+      env: {
+        ...process.env,
+        NODE_ENV: 'test',
+        PORT: '0',
+        JOBS: 'off',
+        PUBLIC_URL: stack.url,
+        DATABASE_URL: stack.config.DATABASE_URL,
+        SESSION_SECRET: stack.config.SESSION_SECRET,
+        STRIPE_API_URL: stack.config.STRIPE_API_URL,
+        STRIPE_SECRET_KEY: stack.config.STRIPE_SECRET_KEY,
+        STRIPE_WEBHOOK_SECRET: stack.config.STRIPE_WEBHOOK_SECRET,
+        OAUTH_URL: stack.config.OAUTH_URL,
+      },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    secondUrl = await new Promise<string>((resolve, reject) => {
+      let out = '';
+      second!.stdout!.on('data', (chunk) => {
+        out += chunk;
+        const m = /listening on .*?:(\d+)/.exec(out);
+        if (m) resolve(`http://127.0.0.1:${m[1]}`);
+      });
+      second!.stderr!.on('data', (chunk) => (out += chunk));
+      second!.on('exit', (code) => reject(new Error(`second API exited ${code}: ${out}`)));
+    });
+    const { statuses, ringsGranted, totals } = await crowd([stack.url, secondUrl]);
+    expect(statuses[201]).toBeGreaterThan(0);
+    expect(ringsGranted).toBeLessThanOrEqual(CAPACITY);
+    expect(totals.held + totals.paid).toBe(ringsGranted);
+    expect(totals.remaining + totals.held + totals.paid).toBe(CAPACITY);
+    expect(totals.remaining).toBeLessThan(6);
+  });
+});

@@ -1,0 +1,103 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { cutLayout, cutPositions, cutsFromSheet, doughForPieces, rollAndCut } from './cutting.js';
+
+/** Densest packing of equal circles, π/(2√3) = 0.9068996821… (ProofWiki; OEIS A093766). */
+const HEX_BOUND = 0.9068996821;
+
+const sheetArb = fc.record({
+  widthMm: fc.double({ min: 20, max: 700, noNaN: true }),
+  lengthMm: fc.double({ min: 20, max: 700, noNaN: true }),
+  cutterMm: fc.double({ min: 15, max: 120, noNaN: true }),
+  gapMm: fc.double({ min: 0, max: 20, noNaN: true }),
+});
+
+describe('cutsFromSheet', () => {
+  it('never exceeds the hexagonal packing bound π/(2√3) (ProofWiki; OEIS A093766)', () => {
+    expect(Math.PI / (2 * Math.sqrt(3))).toBeCloseTo(HEX_BOUND, 10);
+    fc.assert(
+      fc.property(sheetArb, (sheet) => {
+        const discArea = (Math.PI / 4) * sheet.cutterMm ** 2;
+        expect(cutsFromSheet(sheet) * discArea).toBeLessThanOrEqual(HEX_BOUND * sheet.widthMm * sheet.lengthMm);
+      }),
+    );
+  });
+
+  it('counts real positions: every cut inside the sheet and no two cuts overlapping (arXiv:2403.10530: count, do not multiply)', () => {
+    fc.assert(
+      fc.property(sheetArb, (sheet) => {
+        const pts = cutPositions(sheet);
+        const r = sheet.cutterMm / 2;
+        expect(pts.length).toBe(cutsFromSheet(sheet));
+        for (const p of pts) {
+          expect(p.xMm - r).toBeGreaterThanOrEqual(-1e-6);
+          expect(p.yMm - r).toBeGreaterThanOrEqual(-1e-6);
+          expect(p.xMm + r).toBeLessThanOrEqual(sheet.widthMm + 1e-6);
+          expect(p.yMm + r).toBeLessThanOrEqual(sheet.lengthMm + 1e-6);
+        }
+        let closest = Infinity;
+        for (let i = 0; i < pts.length; i++) {
+          for (let j = i + 1; j < pts.length; j++) {
+            closest = Math.min(closest, Math.hypot(pts[i]!.xMm - pts[j]!.xMm, pts[i]!.yMm - pts[j]!.yMm));
+          }
+        }
+        expect(closest).toBeGreaterThanOrEqual(sheet.cutterMm + sheet.gapMm - 1e-6);
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('takes the better of square and hex: 4 discs of diameter 1 in a 2 × 2 square (square grid), 5 hex rows beat 4 square rows (worked by hand)', () => {
+    expect(cutsFromSheet({ widthMm: 2, lengthMm: 2, cutterMm: 1, gapMm: 0 })).toBe(4);
+    expect(cutLayout({ widthMm: 2, lengthMm: 2, cutterMm: 1, gapMm: 0 }).arrangement).toBe('square');
+    // 4.5 wide: 4 per row either way; 4.5 long: square 4 rows, hex rows 0.866 apart → 5 rows of 4, 4 (shifted), 4, 4, 4.
+    const hex = cutLayout({ widthMm: 4.5, lengthMm: 4.5, cutterMm: 1, gapMm: 0 });
+    expect(hex.arrangement).toBe('hex');
+    expect(hex.count).toBe(20);
+  });
+
+  it('a sheet narrower than the cutter gives nothing', () => {
+    expect(cutsFromSheet({ widthMm: 70, lengthMm: 500, cutterMm: 76, gapMm: 5 })).toBe(0);
+  });
+});
+
+describe('roll and re-roll (about 30 % scrap per roll; re-roll once or twice: trade press, culinary texts)', () => {
+  it('first roll cuts about 70 %, the re-roll cuts about 70 % of the scrap (worked by hand)', () => {
+    // disc = 60 + 10 g; 1000 g dough; 700 g usable → 10 discs; scrap 300 g; re-roll 210 g usable → 3 discs.
+    const r = rollAndCut({ doughGrams: 1000, ringGrams: 60, holeGrams: 10, scrapPercent: 30, rerolls: 1, ringsWanted: 13, extraHolesWanted: 0 });
+    expect(r.rolls.map((x) => x.rings)).toEqual([10, 3]);
+    expect(r.rolls[0]!.scrapGrams).toBeCloseTo(300, 9);
+    expect(r.scrapGrams).toBeCloseTo(90, 9);
+    expect(r.rings).toBe(13);
+    expect(r.holes).toBe(13);
+    expect(r.short).toEqual({ rings: 0, holes: 0 });
+  });
+
+  it('the planned dough always cuts every ring and hole needed, and more pieces never mean less dough', () => {
+    const arb = fc.record({
+      ringGrams: fc.double({ min: 10, max: 120, noNaN: true }),
+      holeGrams: fc.double({ min: 1, max: 30, noNaN: true }),
+      scrapPercent: fc.double({ min: 0, max: 60, noNaN: true }),
+      rerolls: fc.integer({ min: 0, max: 3 }),
+      rings: fc.integer({ min: 0, max: 3000 }),
+      holes: fc.integer({ min: 0, max: 3000 }),
+      moreRings: fc.integer({ min: 0, max: 50 }),
+      moreHoles: fc.integer({ min: 0, max: 50 }),
+    });
+    fc.assert(
+      fc.property(arb, (a) => {
+        const need = doughForPieces(a);
+        const cut = rollAndCut({ ...a, doughGrams: need.doughGrams, ringsWanted: a.rings, extraHolesWanted: need.extraHoles });
+        expect(cut.short).toEqual({ rings: 0, holes: 0 });
+        expect(cut.rings).toBeGreaterThanOrEqual(a.rings);
+        expect(cut.holes).toBeGreaterThanOrEqual(a.holes);
+        const more = doughForPieces({ ...a, rings: a.rings + a.moreRings, holes: a.holes + a.moreHoles });
+        expect(more.doughGrams).toBeGreaterThanOrEqual(need.doughGrams);
+      }),
+    );
+  });
+
+  it('refuses more than a handful of re-rolls', () => {
+    expect(() => rollAndCut({ doughGrams: 1000, ringGrams: 60, holeGrams: 10, scrapPercent: 30, rerolls: 9, ringsWanted: 1, extraHolesWanted: 0 })).toThrow(/re-rolls/);
+  });
+});

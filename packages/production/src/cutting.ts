@@ -1,0 +1,228 @@
+/**
+ * Cutting rings from rolled dough.
+ *
+ * Sheet layouts: discs of the cutter's diameter, `gapMm` apart, entirely
+ * inside a finite rectangular sheet. We count the positions of two real
+ * layouts — a square grid and a hexagonal (staggered rows) layout, each in
+ * both orientations — and take the best. We never multiply the sheet area by
+ * the packing density bound π/(2√3): a finite sheet always falls below it.
+ *
+ * Rolling and re-rolling: each roll cuts at most (1 − scrap) of the dough it
+ * starts with (rotary-cut doughs leave about 30 % to rework); the scraps are
+ * pressed together and rolled again, a baker-set number of times (re-rolled
+ * dough gets tougher, so once or twice at most).
+ */
+import { ProductionInputError, requireInRange, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
+
+const EPS = 1e-9;
+
+export interface Sheet {
+  widthMm: number;
+  lengthMm: number;
+  cutterMm: number;
+  /** Space left between neighbouring cuts. */
+  gapMm: number;
+}
+
+export type CutArrangement = 'square' | 'hex';
+
+export interface CutLayout {
+  count: number;
+  arrangement: CutArrangement;
+  /** True when rows run along the sheet's length instead of its width. */
+  rotated: boolean;
+  /** Centre-to-centre distance within a row. */
+  pitchMm: number;
+  /** Distance between row centre lines. */
+  rowSpacingMm: number;
+  rows: number;
+  /** Discs in odd rows (1st, 3rd, …) and in even rows (shifted half a pitch in the hex layout). */
+  perRow: { odd: number; even: number };
+}
+
+export interface CutPosition {
+  xMm: number;
+  yMm: number;
+}
+
+/** How many centres fit along a span when each disc needs `size` and centres step by `pitch`. */
+function fitAlong(spanMm: number, sizeMm: number, pitchMm: number): number {
+  return spanMm + EPS < sizeMm ? 0 : Math.floor((spanMm - sizeMm) / pitchMm + EPS) + 1;
+}
+
+function layoutFor(across: number, along: number, d: number, pitch: number, arrangement: CutArrangement, rotated: boolean): CutLayout {
+  const rowSpacingMm = arrangement === 'square' ? pitch : (pitch * Math.sqrt(3)) / 2;
+  const rows = fitAlong(along, d, rowSpacingMm);
+  const odd = fitAlong(across, d, pitch);
+  const even = arrangement === 'square' ? odd : fitAlong(across - pitch / 2, d, pitch);
+  const count = rows === 0 ? 0 : Math.ceil(rows / 2) * odd + Math.floor(rows / 2) * even;
+  return { count, arrangement, rotated, pitchMm: pitch, rowSpacingMm, rows, perRow: { odd, even } };
+}
+
+function validateSheet(sheet: Sheet): void {
+  requirePositive('widthMm', sheet.widthMm);
+  requirePositive('lengthMm', sheet.lengthMm);
+  requirePositive('cutterMm', sheet.cutterMm);
+  requireNonNegative('gapMm', sheet.gapMm);
+}
+
+/** The best of the square and hexagonal layouts (both orientations) for this sheet. */
+export function cutLayout(sheet: Sheet): CutLayout {
+  validateSheet(sheet);
+  const pitch = sheet.cutterMm + sheet.gapMm;
+  const candidates = [
+    layoutFor(sheet.widthMm, sheet.lengthMm, sheet.cutterMm, pitch, 'hex', false),
+    layoutFor(sheet.lengthMm, sheet.widthMm, sheet.cutterMm, pitch, 'hex', true),
+    layoutFor(sheet.widthMm, sheet.lengthMm, sheet.cutterMm, pitch, 'square', false),
+  ];
+  return candidates.reduce((best, c) => (c.count > best.count ? c : best));
+}
+
+/** Number of discs that fit in the sheet. */
+export function cutsFromSheet(sheet: Sheet): number {
+  return cutLayout(sheet).count;
+}
+
+/** Centres of the cuts of `cutLayout(sheet)`, in sheet coordinates (x across the width, y along the length). */
+export function cutPositions(sheet: Sheet): CutPosition[] {
+  const layout = cutLayout(sheet);
+  const r = sheet.cutterMm / 2;
+  const positions: CutPosition[] = [];
+  for (let row = 0; row < layout.rows; row++) {
+    const even = row % 2 === 1;
+    const n = even ? layout.perRow.even : layout.perRow.odd;
+    const shift = even && layout.arrangement === 'hex' ? layout.pitchMm / 2 : 0;
+    for (let i = 0; i < n; i++) {
+      const across = r + shift + i * layout.pitchMm;
+      const along = r + row * layout.rowSpacingMm;
+      positions.push(layout.rotated ? { xMm: along, yMm: across } : { xMm: across, yMm: along });
+    }
+  }
+  return positions;
+}
+
+export interface RollSettings {
+  ringGrams: number;
+  holeGrams: number;
+  /** Share of each roll left as scrap to re-roll, percent (about 30). */
+  scrapPercent: number;
+  /** Times the scraps are re-rolled after the first roll (usually 1–2). */
+  rerolls: number;
+}
+
+export interface RollInput extends RollSettings {
+  doughGrams: number;
+  /** Rings the orders need; more are cut as surplus if the dough allows. */
+  ringsWanted: number;
+  /** Holes needed beyond the ring centres, cut with the hole cutter. */
+  extraHolesWanted: number;
+}
+
+export interface RollStep {
+  /** 1 = first roll, 2 = first re-roll, … */
+  roll: number;
+  doughGrams: number;
+  rings: number;
+  extraHoles: number;
+  scrapGrams: number;
+}
+
+export interface RollResult {
+  rolls: RollStep[];
+  rings: number;
+  /** Ring centres (when the cutter has a centre) plus extra holes. */
+  holes: number;
+  extraHoles: number;
+  /** Dough left after the last roll. */
+  scrapGrams: number;
+  /** Rings and extra holes the dough could not give (0 when the dough suffices). */
+  short: { rings: number; holes: number };
+}
+
+function validateRoll(settings: RollSettings): void {
+  requirePositive('ringGrams', settings.ringGrams);
+  requireNonNegative('holeGrams', settings.holeGrams);
+  requireInRange('scrapPercent', settings.scrapPercent, 0, 90);
+  requireWholeNonNegative('rerolls', settings.rerolls);
+  if (settings.rerolls > 5) throw new ProductionInputError('rerolls', 'more than 5 re-rolls makes the dough too tough');
+}
+
+/**
+ * First roll and re-rolls. Each roll: cut the rings still needed, then the
+ * extra holes still needed, then (once the orders are covered) surplus rings
+ * from what is left of the cuttable part; the rest is scrap for the next roll.
+ */
+export function rollAndCut(input: RollInput): RollResult {
+  validateRoll(input);
+  requireNonNegative('doughGrams', input.doughGrams);
+  requireWholeNonNegative('ringsWanted', input.ringsWanted);
+  requireWholeNonNegative('extraHolesWanted', input.extraHolesWanted);
+  if (input.extraHolesWanted > 0 && input.holeGrams === 0) {
+    throw new ProductionInputError('holeGrams', 'extra holes need a hole cutter (holeGrams > 0)');
+  }
+  const disc = input.ringGrams + input.holeGrams;
+  const keep = 1 - input.scrapPercent / 100;
+  let dough = input.doughGrams;
+  let ringsLeft = input.ringsWanted;
+  let holesLeft = input.extraHolesWanted;
+  const rolls: RollStep[] = [];
+  for (let roll = 1; roll <= input.rerolls + 1; roll++) {
+    let usable = dough * keep;
+    let rings = Math.min(ringsLeft, Math.floor(usable / disc + EPS));
+    usable -= rings * disc;
+    const extraHoles = holesLeft > 0 ? Math.min(holesLeft, Math.floor(usable / input.holeGrams + EPS)) : 0;
+    usable -= extraHoles * input.holeGrams;
+    ringsLeft -= rings;
+    holesLeft -= extraHoles;
+    if (ringsLeft === 0 && holesLeft === 0) {
+      const surplus = Math.floor(usable / disc + EPS);
+      rings += surplus;
+      usable -= surplus * disc;
+    }
+    const scrapGrams = Math.max(0, dough - rings * disc - extraHoles * input.holeGrams);
+    rolls.push({ roll, doughGrams: dough, rings, extraHoles, scrapGrams });
+    dough = scrapGrams;
+  }
+  const rings = rolls.reduce((s, r) => s + r.rings, 0);
+  const extraHoles = rolls.reduce((s, r) => s + r.extraHoles, 0);
+  return {
+    rolls,
+    rings,
+    holes: (input.holeGrams > 0 ? rings : 0) + extraHoles,
+    extraHoles,
+    scrapGrams: dough,
+    short: { rings: ringsLeft, holes: holesLeft },
+  };
+}
+
+export interface DoughNeed {
+  doughGrams: number;
+  /** Mass of the pieces the orders need (rings with their centres, plus extra holes). */
+  piecesGrams: number;
+  extraHoles: number;
+  /** Fraction of the dough that ends up cut into pieces at best: 1 − scrap^(rolls). */
+  bestYield: number;
+}
+
+/**
+ * Smallest whole-gram dough that `rollAndCut` provably turns into the pieces:
+ * D = ⌈(M + disc/(1 − s)) / (1 − s^(n+1))⌉, with M the pieces' mass, s the
+ * scrap share and n the re-rolls. Each unfinished roll wastes less than one
+ * disc beyond its scrap share, which the disc/(1 − s) term covers. D grows
+ * with the rings and holes needed, so more orders never mean less dough.
+ */
+export function doughForPieces(settings: RollSettings & { rings: number; holes: number }): DoughNeed {
+  validateRoll(settings);
+  requireWholeNonNegative('rings', settings.rings);
+  requireWholeNonNegative('holes', settings.holes);
+  const disc = settings.ringGrams + settings.holeGrams;
+  const s = settings.scrapPercent / 100;
+  const extraHoles = Math.max(0, settings.holes - settings.rings);
+  if (settings.holes > 0 && settings.holeGrams === 0) {
+    throw new ProductionInputError('holeGrams', 'holes need a hole cutter (holeGrams > 0)');
+  }
+  const piecesGrams = settings.rings * disc + extraHoles * settings.holeGrams;
+  const bestYield = 1 - s ** (settings.rerolls + 1);
+  const doughGrams = piecesGrams === 0 ? 0 : Math.ceil((piecesGrams + disc / (1 - s)) / bestYield);
+  return { doughGrams, piecesGrams, extraHoles, bestYield };
+}

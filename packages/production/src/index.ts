@@ -1,0 +1,14 @@
+export * from './errors.js';
+export * from './units.js';
+export * from './formula.js';
+export * from './pieces.js';
+export * from './cutting.js';
+export * from './fry.js';
+export * from './glaze.js';
+export * from './schedule.js';
+export * from './capacity.js';
+export * from './cost.js';
+export * from './cautions.js';
+export * from './plan.js';
+export * from './defaults.js';
+export { formatInstant, parseInstant, requireTimeZone } from './time.js';

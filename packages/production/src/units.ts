@@ -1,0 +1,88 @@
+/**
+ * Unit helpers. Inside the package masses are grams, lengths millimetres,
+ * temperatures °C and money integer cents; these are the only conversions.
+ * Exact factors (NIST SP 811, NIST Handbook 44 Appendix C):
+ * 1 lb = 453.59237 g, 1 oz = 1/16 lb = 28.349523125 g, 1 in = 25.4 mm,
+ * °C = (°F − 32) / 1.8 and a temperature interval of 1 °F = 5/9 °C.
+ */
+import { ProductionInputError, requireFinite } from './errors.js';
+
+export const GRAMS_PER_POUND = 453.59237;
+export const GRAMS_PER_OUNCE = GRAMS_PER_POUND / 16;
+export const MM_PER_INCH = 25.4;
+
+/** Absolute temperature, °F → °C. */
+export function fToC(fahrenheit: number): number {
+  return (requireFinite('fahrenheit', fahrenheit) - 32) / 1.8;
+}
+
+/** Absolute temperature, °C → °F. */
+export function cToF(celsius: number): number {
+  return requireFinite('celsius', celsius) * 1.8 + 32;
+}
+
+/** Temperature difference (interval), °F → °C: no 32° offset. */
+export function fDeltaToC(fahrenheitDelta: number): number {
+  return requireFinite('fahrenheitDelta', fahrenheitDelta) / 1.8;
+}
+
+/** Temperature difference (interval), °C → °F: no 32° offset. */
+export function cDeltaToF(celsiusDelta: number): number {
+  return requireFinite('celsiusDelta', celsiusDelta) * 1.8;
+}
+
+export function gToOz(grams: number): number {
+  return requireFinite('grams', grams) / GRAMS_PER_OUNCE;
+}
+
+export function ozToG(ounces: number): number {
+  return requireFinite('ounces', ounces) * GRAMS_PER_OUNCE;
+}
+
+export function gToLb(grams: number): number {
+  return requireFinite('grams', grams) / GRAMS_PER_POUND;
+}
+
+export function lbToG(pounds: number): number {
+  return requireFinite('pounds', pounds) * GRAMS_PER_POUND;
+}
+
+export function inToMm(inches: number): number {
+  return requireFinite('inches', inches) * MM_PER_INCH;
+}
+
+export function mmToIn(millimetres: number): number {
+  return requireFinite('millimetres', millimetres) / MM_PER_INCH;
+}
+
+/**
+ * Dollars (or any currency's major unit) → integer cents, rounded to the
+ * nearest cent with halves away from zero. The decimal string is rounded
+ * first so that 1.005 stays 101 rather than falling to 100 in binary.
+ */
+export function dollarsToCents(amount: number): number {
+  requireFinite('amount', amount);
+  const cents = Number((Math.abs(amount) * 100).toFixed(6));
+  return Math.sign(amount) * Math.round(cents);
+}
+
+/** Integer cents → major units (for display only). */
+export function centsToDollars(cents: number): number {
+  requireFinite('cents', cents);
+  if (!Number.isInteger(cents)) throw new ProductionInputError('cents', `must be a whole number of cents (got ${cents})`);
+  return cents / 100;
+}
+
+/**
+ * Rounds a non-integer amount of cents to a whole cent: nearest cent, halves
+ * up (away from zero). Used once, at the end of each cost sum.
+ */
+export function roundCents(cents: number): number {
+  requireFinite('cents', cents);
+  return Math.sign(cents) * Math.round(Math.abs(cents));
+}
+
+/** A temperature in words for the baker's texts, both scales: "188 °C (370 °F)". */
+export function tempInBothScales(celsius: number): string {
+  return `${Math.round(celsius)} °C (${Math.round(cToF(celsius))} °F)`;
+}
