@@ -1,7 +1,8 @@
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
+import { DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS } from '@fryline/production';
 import {
-  database, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
+  database, FormulaVersion, ProductionSettings, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
 } from '@fryline/api/db';
 import { newPickupCode } from '@fryline/api/services/pickup-codes';
 
@@ -27,14 +28,36 @@ const extraCustomers = [
 ];
 
 const A = ['wheat', 'milk', 'eggs'];
+
+/** The stall's glazes: our own recipes, in parts by weight. */
+export const demoGlazes = [
+  { id: 'vanilla-milk-glaze', name: 'Vanilla glaze', gramsPerRing: 14, gramsPerHole: 4, extraPercent: 15, allergens: ['milk'], parts: [{ name: 'Icing sugar', parts: 80 }, { name: 'Whole milk', parts: 18 }, { name: 'Vanilla extract', parts: 2 }] },
+  { id: 'maple-glaze', name: 'Maple glaze', gramsPerRing: 15, gramsPerHole: 4, extraPercent: 15, allergens: ['milk'], parts: [{ name: 'Icing sugar', parts: 72 }, { name: 'Maple syrup', parts: 22 }, { name: 'Whole milk', parts: 6 }] },
+  { id: 'cardamom-sugar', name: 'Cardamom sugar', gramsPerRing: 8, gramsPerHole: 3, extraPercent: 25, parts: [{ name: 'Sugar', parts: 96 }, { name: 'Ground cardamom', parts: 4 }] },
+  { id: 'dark-chocolate', name: 'Dark chocolate dip', gramsPerRing: 16, gramsPerHole: 5, extraPercent: 20, allergens: ['milk', 'soybeans'], parts: [{ name: 'Dark chocolate', parts: 68 }, { name: 'Cream', parts: 32 }] },
+  { id: 'lemon-glaze', name: 'Lemon glaze', gramsPerRing: 14, gramsPerHole: 4, extraPercent: 15, parts: [{ name: 'Icing sugar', parts: 82 }, { name: 'Lemon juice', parts: 16 }, { name: 'Poppy seeds', parts: 2 }] },
+  { id: 'honey-sesame', name: 'Honey glaze with sesame', gramsPerRing: 15, gramsPerHole: 4, extraPercent: 15, allergens: ['sesame'], parts: [{ name: 'Icing sugar', parts: 60 }, { name: 'Honey', parts: 25 }, { name: 'Water', parts: 8 }, { name: 'Toasted sesame', parts: 7 }] },
+  { id: 'cinnamon-sugar', name: 'Cinnamon sugar', gramsPerRing: 8, gramsPerHole: 3, extraPercent: 25, parts: [{ name: 'Sugar', parts: 95 }, { name: 'Ground cinnamon', parts: 5 }] },
+];
+
+/** Prices the stall pays, in cents per kg (our own round figures). */
+const demoPrices = {
+  centsPerKg: {
+    'Bread flour': 130, Water: 0, 'Whole milk': 110, 'Whole eggs': 620, 'Unsalted butter': 1150, Sugar: 160, 'Fine salt': 90,
+    'Vanilla extract': 32000, 'Icing sugar': 260, 'Maple syrup': 2400, 'Ground cardamom': 6000, 'Dark chocolate': 1800, Cream: 650,
+    'Lemon juice': 900, 'Poppy seeds': 1500, Honey: 1300, 'Toasted sesame': 1200, 'Ground cinnamon': 2600,
+  },
+  fryingOilCentsPerKg: 320,
+  oilBakesPerFill: 3,
+};
 export const demoMenu = [
-  { name: 'Vanilla Bean Glaze', flavour: 'Vanilla bean', glaze: 'Vanilla glaze', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Our plain sourdough ring under a thin crackle of vanilla-bean glaze.' },
-  { name: 'Brown Butter Maple', flavour: 'Brown butter', glaze: 'Maple glaze', kind: 'ring', surchargeCents: 50, allergens: A, description: 'Nutty brown-butter dough with a maple glaze.' },
-  { name: 'Cardamom Sugar', flavour: 'Cardamom', glaze: 'Cardamom sugar', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Tossed warm in cardamom sugar.' },
-  { name: 'Dark Chocolate Dip', flavour: 'Plain', glaze: 'Dark chocolate', kind: 'ring', surchargeCents: 50, allergens: [...A, 'soybeans'], description: 'Dipped in dark chocolate (contains soy lecithin).' },
-  { name: 'Lemon Poppy Glaze', flavour: 'Lemon zest', glaze: 'Lemon glaze', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Lemon-zest dough with a sharp lemon glaze and poppy seeds.' },
-  { name: 'Honey Sesame', flavour: 'Plain', glaze: 'Honey glaze with toasted sesame', kind: 'ring', surchargeCents: 75, allergens: [...A, 'sesame'], description: 'Honey glaze and toasted sesame seeds.' },
-  { name: 'Cinnamon Sugar Holes', flavour: 'Plain', glaze: 'Cinnamon sugar', kind: 'hole', surchargeCents: 0, allergens: A, description: 'Doughnut holes rolled in cinnamon sugar.' },
+  { name: 'Vanilla Bean Glaze', glazeRecipeId: 'vanilla-milk-glaze', flavour: 'Vanilla bean', glaze: 'Vanilla glaze', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Our plain sourdough ring under a thin crackle of vanilla-bean glaze.' },
+  { name: 'Brown Butter Maple', glazeRecipeId: 'maple-glaze', flavour: 'Brown butter', glaze: 'Maple glaze', kind: 'ring', surchargeCents: 50, allergens: A, description: 'Nutty brown-butter dough with a maple glaze.' },
+  { name: 'Cardamom Sugar', glazeRecipeId: 'cardamom-sugar', flavour: 'Cardamom', glaze: 'Cardamom sugar', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Tossed warm in cardamom sugar.' },
+  { name: 'Dark Chocolate Dip', glazeRecipeId: 'dark-chocolate', flavour: 'Plain', glaze: 'Dark chocolate', kind: 'ring', surchargeCents: 50, allergens: [...A, 'soybeans'], description: 'Dipped in dark chocolate (contains soy lecithin).' },
+  { name: 'Lemon Poppy Glaze', glazeRecipeId: 'lemon-glaze', flavour: 'Lemon zest', glaze: 'Lemon glaze', kind: 'ring', surchargeCents: 0, allergens: A, description: 'Lemon-zest dough with a sharp lemon glaze and poppy seeds.' },
+  { name: 'Honey Sesame', glazeRecipeId: 'honey-sesame', flavour: 'Plain', glaze: 'Honey glaze with toasted sesame', kind: 'ring', surchargeCents: 75, allergens: [...A, 'sesame'], description: 'Honey glaze and toasted sesame seeds.' },
+  { name: 'Cinnamon Sugar Holes', glazeRecipeId: 'cinnamon-sugar', flavour: 'Plain', glaze: 'Cinnamon sugar', kind: 'hole', surchargeCents: 0, allergens: A, description: 'Doughnut holes rolled in cinnamon sugar.' },
 ] as const;
 
 export const demoBoxes = [
@@ -210,6 +233,28 @@ export async function seedDemo(nowDate: Date = new Date()): Promise<SeedResult> 
         menu.push(row);
       }
       await seedPastWeek(menu, customers, now, transaction);
+    }
+    if (!(await ProductionSettings.findByPk(1, { transaction }))) {
+      const equipment = structuredClone(DEFAULT_PLAN_SETTINGS.equipment);
+      equipment.pot = { diameterMm: 280, oilDepthMm: 51 };
+      equipment.frying = { ...equipment.frying, windowMinutes: 180 };
+      equipment.proofing = { trays: 10, ringsPerTray: 12 };
+      equipment.mixer = { capacityGrams: 5000, mixes: 2 };
+      equipment.fridge = { doughGrams: 12000 };
+      await ProductionSettings.create(
+        {
+          id: 1,
+          equipment,
+          schedule: structuredClone(DEFAULT_PLAN_SETTINGS.schedule),
+          spare: { percent: 5, minimumRings: 2, minimumHoles: 0, glazeId: null },
+          glazes: demoGlazes,
+          prices: demoPrices,
+          roomTempC: 21,
+          updatedBy: null,
+        },
+        { transaction },
+      );
+      await FormulaVersion.create({ version: 1, formula: structuredClone(DEFAULT_FORMULA) as never, note: 'Starting formula', createdBy: null }, { transaction });
     }
 
     const stillOpen = await BakeDay.count({ where: { status: 'published', cutoffAt: { [Op.gt]: nowDate } }, transaction });

@@ -16,6 +16,7 @@ import { ordersRouter } from './routes/orders.js';
 import { waitlistRouter } from './routes/waitlist.js';
 import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
+import { productionRouter } from './routes/production.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -89,6 +90,7 @@ export function createApp(config: Config) {
   app.use(ordersRouter);
   app.use(waitlistRouter);
   app.use(staffOrdersRouter);
+  app.use(productionRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -11,7 +11,7 @@ export const WEBHOOK_SECRET = 'whsec_api_tests';
 
 const TABLES = [
   'session', 'audit_log', 'outbox', 'waitlist_entries', 'refunds', 'payment_events', 'order_lines', 'order_boxes', 'orders',
-  'bake_day_boxes', 'bake_day_menu_items', 'menu_items', 'pickup_windows', 'bake_days', 'shop_settings', 'users',
+  'bake_day_boxes', 'bake_day_menu_items', 'menu_items', 'pickup_windows', 'bake_days', 'formula_versions', 'production_settings', 'shop_settings', 'users',
 ];
 
 /** Fresh data for each test: every table emptied, the schema kept. */

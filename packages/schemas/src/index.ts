@@ -3,3 +3,4 @@ export * from './errors.js';
 export * from './bake-days.js';
 export * from './orders.js';
 export * from './pricing.js';
+export * from './production.js';

@@ -6,6 +6,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 // recorded without an extension.
 const migrations = {
   '0001-core': () => import('./migrations/0001-core.js'),
+  '0002-production': () => import('./migrations/0002-production.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

@@ -21,6 +21,8 @@ export class BakeDay extends Model<InferAttributes<BakeDay>, InferCreationAttrib
   declare ringsRemaining: number;
   declare holesRemaining: number;
   declare notes: CreationOptional<string>;
+  /** The formula version this day's sheet is planned with (set when first planned). */
+  declare formulaVersionId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -44,6 +46,7 @@ export class BakeDay extends Model<InferAttributes<BakeDay>, InferCreationAttrib
         ringsRemaining: { type: DataTypes.INTEGER, allowNull: false },
         holesRemaining: { type: DataTypes.INTEGER, allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        formulaVersionId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

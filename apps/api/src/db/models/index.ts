@@ -14,17 +14,19 @@ import { Refund } from './refund.js';
 import { WaitlistEntry } from './waitlist-entry.js';
 import { OutboxMessage, type StoredAttachment } from './outbox-message.js';
 import { AuditEntry } from './audit-entry.js';
+import { FormulaVersion } from './formula-version.js';
+import { ProductionSettings } from './production-settings.js';
 
 export type { StoredAttachment };
 export {
   User, ShopSettings, BakeDay, PickupWindow, MenuItem, BakeDayBox, BakeDayMenuItem, Order, OrderBox, OrderLine,
-  PaymentEvent, Refund, WaitlistEntry, OutboxMessage, AuditEntry,
+  PaymentEvent, Refund, WaitlistEntry, OutboxMessage, AuditEntry, FormulaVersion, ProductionSettings,
 };
 
 export function initModels(sequelize: Sequelize) {
   for (const model of [
     User, ShopSettings, BakeDay, PickupWindow, MenuItem, BakeDayBox, BakeDayMenuItem, Order, OrderBox, OrderLine,
-    PaymentEvent, Refund, WaitlistEntry, OutboxMessage, AuditEntry,
+    PaymentEvent, Refund, WaitlistEntry, OutboxMessage, AuditEntry, FormulaVersion, ProductionSettings,
   ]) {
     model.initModel(sequelize);
   }

@@ -11,6 +11,8 @@ export class MenuItem extends Model<InferAttributes<MenuItem>, InferCreationAttr
   declare surchargeCents: CreationOptional<number>;
   declare allergens: CreationOptional<string[]>;
   declare photoUrl: CreationOptional<string | null>;
+  /** The glaze recipe (production settings) this item takes; null for plain. */
+  declare glazeRecipeId: CreationOptional<string | null>;
   declare active: CreationOptional<boolean>;
   declare sortOrder: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
@@ -28,6 +30,7 @@ export class MenuItem extends Model<InferAttributes<MenuItem>, InferCreationAttr
         surchargeCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         allergens: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
         photoUrl: { type: DataTypes.TEXT, allowNull: true },
+        glazeRecipeId: { type: DataTypes.TEXT, allowNull: true },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,

@@ -1,0 +1,135 @@
+import { z } from 'zod';
+
+// Forms and the API validate the baker's settings with these schemas; the
+// maths itself lives in @fryline/production and re-checks what it is given.
+
+const positive = (label: string, max: number) =>
+  z.number({ error: `${label} must be a number` }).positive(`${label} must be more than 0`).max(max, `${label} is too large`);
+const nonNegative = (label: string, max: number) =>
+  z.number({ error: `${label} must be a number` }).min(0, `${label} can't be negative`).max(max, `${label} is too large`);
+const whole = (label: string, min: number, max: number) =>
+  z.number({ error: `${label} must be a number` }).int(`${label} must be a whole number`).min(min, `${label} must be at least ${min}`).max(max, `${label} is too large`);
+
+export const ingredientKinds = [
+  'flour', 'water', 'milk', 'egg', 'butter', 'sugar', 'salt', 'starter', 'roux-flour', 'roux-milk', 'flavouring', 'other',
+] as const;
+
+export const formulaIngredientSchema = z.strictObject({
+  name: z.string().trim().min(1, 'Name the ingredient').max(60),
+  percent: nonNegative('Percent', 500),
+  kind: z.enum(ingredientKinds),
+  salted: z.boolean().optional(),
+});
+
+export const formulaSchema = z
+  .strictObject({
+    ingredients: z.array(formulaIngredientSchema).min(1, 'A formula needs ingredients').max(30),
+    starterHydrationPercent: positive('Starter hydration', 300).default(100),
+    rouxLiquidPerFlour: positive('Roux liquid per flour', 20).default(5),
+    starterFeed: z
+      .strictObject({
+        flourPerSeed: positive('Flour per part of seed starter', 20),
+        extraPercent: nonNegative('Extra starter', 100),
+        peakHours: positive('Hours to peak', 24),
+      })
+      .optional(),
+  })
+  .refine((f) => Math.abs(f.ingredients.filter((i) => i.kind === 'flour').reduce((s, i) => s + i.percent, 0) - 100) < 1e-9, {
+    message: 'The flour lines must add up to 100 %',
+    path: ['ingredients'],
+  });
+export type FormulaInput = z.infer<typeof formulaSchema>;
+
+export const saveFormulaSchema = z.strictObject({
+  formula: formulaSchema,
+  note: z.string().trim().max(200).default(''),
+});
+
+export const equipmentSchema = z.strictObject({
+  pot: z.strictObject({ diameterMm: positive('Pot diameter', 1000), oilDepthMm: positive('Oil depth', 300) }),
+  oil: z.strictObject({
+    startC: positive('Oil start temperature', 230),
+    floorC: positive('Lowest oil temperature', 230),
+    densityAt20C: positive('Oil density', 2).optional(),
+    specificHeatJPerGK: positive('Oil specific heat', 10).optional(),
+    smokePointC: positive('Smoke point', 300).optional(),
+  }).refine((o) => o.floorC < o.startC, { message: 'The lowest temperature must be below the start temperature', path: ['floorC'] }),
+  cutter: z.strictObject({ outerMm: positive('Cutter outside', 200), innerMm: nonNegative('Cutter hole', 100) })
+    .refine((c) => c.innerMm < c.outerMm, { message: 'The hole must be smaller than the cutter', path: ['innerMm'] }),
+  rolling: z.strictObject({
+    thicknessMm: positive('Thickness', 60),
+    widthMm: positive('Bench width', 3000),
+    gapMm: nonNegative('Gap', 50),
+    scrapPercent: nonNegative('Scrap', 90),
+    rerolls: whole('Re-rolls', 0, 5),
+    doughDensityGPerCm3: positive('Dough density', 3),
+    measuredRingGrams: positive('Weighed ring', 500).optional(),
+    measuredHoleGrams: positive('Weighed hole', 200).optional(),
+  }),
+  frying: z.strictObject({
+    ringSecondsPerSide: positive('Seconds per side (rings)', 600),
+    holeSecondsPerSide: positive('Seconds per side (holes)', 600),
+    recoveryMinutes: nonNegative('Recovery minutes', 60),
+    windowMinutes: positive('Frying window', 24 * 60),
+    puffFactor: positive('Puff factor', 3).optional(),
+    turnClearanceMm: nonNegative('Turning room', 100).optional(),
+    doughSpecificHeatJPerGK: positive('Dough specific heat', 10).optional(),
+    fatAbsorbedGramsPerDozen: nonNegative('Fat absorbed', 500).optional(),
+    doughTempC: z.number().min(-5).max(45).optional(),
+  }),
+  proofing: z.strictObject({ trays: whole('Trays', 1, 500), ringsPerTray: whole('Rings per tray', 1, 500) }),
+  mixer: z.strictObject({ capacityGrams: positive('Mixer capacity', 100_000), mixes: whole('Mixes', 1, 50) }),
+  fridge: z.strictObject({ doughGrams: positive('Fridge space', 1_000_000) }),
+});
+export type EquipmentInput = z.infer<typeof equipmentSchema>;
+
+export const scheduleStepIds = [
+  'build-starter', 'cook-cool-roux', 'mix', 'bulk-fermentation', 'shape-and-chill', 'cold-retard',
+  'roll-and-cut', 'final-proof', 'heat-oil', 'cool', 'glaze', 'pack',
+] as const;
+
+export const scheduleSchema = z.strictObject({
+  durationsMinutes: z.strictObject(Object.fromEntries(scheduleStepIds.map((s) => [s, whole(`Minutes for ${s}`, 0, 48 * 60)])) as Record<(typeof scheduleStepIds)[number], z.ZodNumber>),
+  bulkReferenceTempC: z.number().min(5).max(40),
+  cutoffMarginMinutes: whole('Cut-off margin', 0, 7 * 24 * 60),
+});
+
+export const spareSchema = z.strictObject({
+  percent: nonNegative('Spare percent', 100),
+  minimumRings: whole('Spare rings', 0, 500).optional(),
+  minimumHoles: whole('Spare holes', 0, 500).optional(),
+  glazeId: z.string().nullable().optional(),
+});
+
+export const glazeRecipeSchema = z.strictObject({
+  id: z.string().regex(/^[a-z0-9-]{2,40}$/, 'Use lower-case letters, digits and dashes'),
+  name: z.string().trim().min(1).max(60),
+  gramsPerRing: nonNegative('Grams per ring', 200),
+  gramsPerHole: nonNegative('Grams per hole', 100),
+  parts: z.array(z.strictObject({ name: z.string().trim().min(1).max(60), parts: positive('Parts', 10_000) })).min(1).max(10),
+  extraPercent: nonNegative('Extra', 200).optional(),
+  allergens: z.array(z.string()).optional(),
+});
+
+export const pricesSchema = z.strictObject({
+  centsPerKg: z.record(z.string(), whole('Price per kg (cents)', 0, 1_000_000)),
+  fryingOilCentsPerKg: whole('Oil price per kg (cents)', 0, 1_000_000),
+  oilBakesPerFill: whole('Bake days per oil fill', 1, 50).optional(),
+});
+
+export const productionSettingsSchema = z.strictObject({
+  equipment: equipmentSchema,
+  schedule: scheduleSchema,
+  spare: spareSchema,
+  glazes: z.array(glazeRecipeSchema).max(30),
+  prices: pricesSchema,
+  roomTempC: z.number().min(5).max(40),
+});
+export type ProductionSettingsInput = z.infer<typeof productionSettingsSchema>;
+
+export const capacityOverrideSchema = z.strictObject({
+  rings: whole('Rings', 0, 10_000),
+  holes: whole('Holes', 0, 10_000),
+  /** Needed to go above what the equipment allows. */
+  acceptAboveEquipment: z.boolean().default(false),
+});
