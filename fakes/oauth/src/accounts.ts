@@ -10,10 +10,10 @@ export interface DemoAccount {
 
 /** Fictional people, one for each role the app knows. Their subs never change. */
 export const DEMO_ACCOUNTS: readonly DemoAccount[] = Object.freeze([
-  { sub: '100000000000000000001', email: 'owner@fryline.test', name: 'Marisol Quade', role: 'Owner: setup and weekly sales' },
-  { sub: '100000000000000000002', email: 'baker@fryline.test', name: 'Theo Brannigan', role: 'Baker: night-before production sheet' },
-  { sub: '100000000000000000003', email: 'counter@fryline.test', name: 'Priya Vantongeren', role: 'Counter: pickup list' },
-  { sub: '100000000000000000004', email: 'customer@fryline.test', name: 'Jonah Ellery-Fisk', role: 'Customer: pre-orders' },
+  { sub: '100000000000000000001', email: 'owner@fryline.test', name: 'Marisol Quenby', role: 'Owner: setup and weekly sales' },
+  { sub: '100000000000000000002', email: 'baker@fryline.test', name: 'Tobias Wrenfield', role: 'Baker: night-before production sheet' },
+  { sub: '100000000000000000003', email: 'counter@fryline.test', name: 'Priya Halloway', role: 'Counter: pickup list' },
+  { sub: '100000000000000000004', email: 'customer@fryline.test', name: 'Dana Ostrander', role: 'Customer: pre-orders' },
 ]);
 
 export interface Person {
