@@ -69,11 +69,14 @@ async function main() {
 
     const tsx = (tag, file) => {
       const child = startChild(tag, process.execPath, ['--import', 'tsx', file], shared);
-      child.on('exit', (code) => {
-        if (!stopping) {
-          log(`${tag} stopped unexpectedly (exit code ${code}); shutting down`);
-          stop(1);
-        }
+      child.on('exit', (code, signal) => {
+        // Ctrl-C reaches the children too; give our own handler a moment to say so
+        setTimeout(() => {
+          if (!stopping) {
+            log(`${tag} stopped unexpectedly (${signal ?? `exit code ${code}`}); shutting down`);
+            stop(1);
+          }
+        }, 200);
       });
       children.push(child);
     };
