@@ -59,3 +59,44 @@ export interface OrderView {
   createdAt: string;
   canCancel: boolean;
 }
+
+/** What POST /api/orders answers: the hold and where to pay for it. */
+export interface CreatedOrder {
+  id: string;
+  status: 'held';
+  totalCents: number;
+  holdExpiresAt: string;
+  checkoutUrl: string;
+}
+
+/** One order as its customer sees it, with the QR code and calendar link once paid. */
+export interface OrderDetail extends OrderView {
+  qrDataUrl: string | null;
+  calendarUrl: string | null;
+}
+
+export const joinWaitlistSchema = z
+  .strictObject({
+    rings: z.number().int('Rings must be a whole number').min(0).max(120, 'At most 120').default(0),
+    holes: z.number().int('Holes must be a whole number').min(0).max(120, 'At most 120').default(0),
+  })
+  .refine((b) => b.rings + b.holes > 0, { message: 'Ask for at least one doughnut', path: ['rings'] });
+export type JoinWaitlistInput = z.infer<typeof joinWaitlistSchema>;
+
+export interface WaitlistEntryView {
+  id: string;
+  bakeDayId: string;
+  rings: number;
+  holes: number;
+  status: 'waiting' | 'offered' | 'claimed' | 'lapsed' | 'left';
+  /** Place in the queue while waiting (1 = next), null otherwise. */
+  position: number | null;
+  offerExpiresAt: string | null;
+}
+
+export interface WaitlistOfferView {
+  bakeDayId: string;
+  rings: number;
+  holes: number;
+  expiresAt: string;
+}

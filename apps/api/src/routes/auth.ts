@@ -19,10 +19,11 @@ export function authRouter(passport: PassportStatic, cookieName: string, secret:
 
   router.get('/auth/google/callback', (req, res, next) => {
     const fail = (code: string) => {
+      const returnTo = req.session.returnTo ?? '/';
       // no half-made session survives a failed sign-in
       req.session.destroy(() => {
         res.clearCookie(cookieName, { path: '/' });
-        res.redirect(303, `/signin?error=${code}`);
+        res.redirect(303, `/signin?error=${code}${returnTo === '/' ? '' : `&returnTo=${encodeURIComponent(returnTo)}`}`);
       });
     };
     passport.authenticate('google', (err: (Error & { code?: string }) | null, user: Express.User | false, info?: { message?: string }) => {

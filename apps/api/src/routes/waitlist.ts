@@ -1,17 +1,13 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { joinWaitlistSchema } from '@fryline/schemas';
 import { currentUser, requireUser } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
 import { getOffer, joinWaitlist, leaveWaitlist, listMyWaitlist } from '../services/waitlist.js';
 
 export const waitlistRouter = Router();
 
-const joinBody = z
-  .strictObject({
-    rings: z.number().int('Rings must be a whole number').min(0).max(120).default(0),
-    holes: z.number().int('Holes must be a whole number').min(0).max(120).default(0),
-  })
-  .refine((b) => b.rings + b.holes > 0, { message: 'Ask for at least one doughnut', path: ['rings'] });
+const joinBody = joinWaitlistSchema;
 
 waitlistRouter.post('/api/bake-days/:id/waitlist', requireUser, validate('params', z.object({ id: z.uuid() })), validate('body', joinBody), async (req, res) => {
   const body = valid<z.infer<typeof joinBody>>(res, 'body');

@@ -1,6 +1,6 @@
 import QRCode from 'qrcode';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
-import type { CreateOrderInput, Me, OrderView } from '@fryline/schemas';
+import type { CreatedOrder, CreateOrderInput, Me, OrderDetail } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
@@ -18,11 +18,6 @@ const orderInclude = [
   { model: PickupWindow, as: 'pickupWindow' },
   { model: BakeDay, as: 'bakeDay' },
 ];
-
-export interface OrderDetail extends OrderView {
-  qrDataUrl: string | null;
-  calendarUrl: string | null;
-}
 
 export async function toOrderView(order: Order, now: Date): Promise<OrderDetail> {
   const day = order.bakeDay!;
@@ -92,14 +87,6 @@ async function insertOrder(user: Me, input: CreateOrderInput, checked: CheckedOr
     await OrderLine.bulkCreate(box.lines.map((l) => ({ ...l, orderBoxId: row.id })), { transaction });
   }
   return order;
-}
-
-export interface CreatedOrder {
-  id: string;
-  status: 'held';
-  totalCents: number;
-  holdExpiresAt: string;
-  checkoutUrl: string;
 }
 
 /**

@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { DateTime } from 'luxon';
-import type { Me } from '@fryline/schemas';
+import type { Me, WaitlistEntryView, WaitlistOfferView } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { BakeDay, User, WaitlistEntry } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
@@ -23,9 +23,19 @@ export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, h
   return { id: entry.id, position, status: entry.status, rings: entry.rings, holes: entry.holes };
 }
 
-export async function listMyWaitlist(user: Me) {
+export async function listMyWaitlist(user: Me): Promise<WaitlistEntryView[]> {
   const entries = await WaitlistEntry.findAll({ where: { userId: user.id, status: { [Op.in]: ['waiting', 'offered'] } }, order: [['createdAt', 'DESC']] });
-  return entries.map((e) => ({ id: e.id, bakeDayId: e.bakeDayId, rings: e.rings, holes: e.holes, status: e.status, offerExpiresAt: e.offerExpiresAt?.toISOString() ?? null }));
+  return Promise.all(
+    entries.map(async (e) => ({
+      id: e.id,
+      bakeDayId: e.bakeDayId,
+      rings: e.rings,
+      holes: e.holes,
+      status: e.status,
+      position: e.status === 'waiting' ? await WaitlistEntry.count({ where: { bakeDayId: e.bakeDayId, status: 'waiting', createdAt: { [Op.lte]: e.createdAt } } }) : null,
+      offerExpiresAt: e.offerExpiresAt?.toISOString() ?? null,
+    })),
+  );
 }
 
 export async function leaveWaitlist(user: Me, id: string) {
@@ -42,7 +52,7 @@ export async function leaveWaitlist(user: Me, id: string) {
   });
 }
 
-export async function getOffer(user: Me, token: string) {
+export async function getOffer(user: Me, token: string): Promise<WaitlistOfferView> {
   const entry = await WaitlistEntry.findOne({ where: { claimToken: token, userId: user.id } });
   if (!entry) throw notFound('Offer');
   if (entry.status !== 'offered' || !entry.offerExpiresAt || entry.offerExpiresAt <= new Date()) {

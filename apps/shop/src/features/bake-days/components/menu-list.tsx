@@ -1,0 +1,32 @@
+import type { BakeDayView } from '@fryline/schemas';
+import { formatCents } from '../../../lib/format';
+import { MenuItemInfo } from '../../../components/menu-item-info';
+
+/** The bake day's boxes and menu, to read (when orders are not open). */
+export function MenuList({ day }: { day: BakeDayView }) {
+  if (day.menu.length === 0) return null;
+  return (
+    <section aria-labelledby="menu-heading" className="flex flex-col gap-4">
+      <h2 id="menu-heading" className="text-xl">
+        On the menu
+      </h2>
+      {day.boxes.length > 0 && (
+        <ul className="flex flex-wrap gap-2" aria-label="Boxes and prices">
+          {day.boxes.map((box) => (
+            <li key={box.size} className="badge badge-plum text-sm">
+              {box.label} ({box.pieces}) · {formatCents(box.priceCents)}
+            </li>
+          ))}
+        </ul>
+      )}
+      <ul className="grid gap-3 sm:grid-cols-2">
+        {day.menu.map((item) => (
+          <li key={item.id} className="card">
+            <MenuItemInfo item={item} headingLevel="h3" />
+            <p className="mt-1 text-xs font-semibold text-muted uppercase">{item.kind === 'hole' ? 'Holes' : 'Rings'}</p>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}

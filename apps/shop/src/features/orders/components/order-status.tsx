@@ -1,0 +1,22 @@
+import type { BoxSize, OrderStatus } from '@fryline/schemas';
+
+const statusBadge: Record<OrderStatus, { label: string; className: string }> = {
+  held: { label: 'Waiting for payment', className: 'badge-warn' },
+  paid: { label: 'Paid · ready for pickup', className: 'badge-ok' },
+  collected: { label: 'Collected', className: 'badge-plum' },
+  no_show: { label: 'Not collected', className: '' },
+  cancelled: { label: 'Cancelled', className: '' },
+  refunded: { label: 'Refunded', className: '' },
+  expired: { label: 'Hold lapsed', className: '' },
+};
+
+export const boxNames: Record<BoxSize, string> = {
+  dozen: 'Dozen',
+  'half-dozen': 'Half dozen',
+  holes: 'Bag of holes',
+};
+
+export function OrderStatusBadge({ status }: { status: OrderStatus }) {
+  const badge = statusBadge[status];
+  return <span className={`badge ${badge.className}`}>{badge.label}</span>;
+}

@@ -1,0 +1,21 @@
+import { Route, Routes } from 'react-router-dom';
+import { sections } from '../config/sections';
+import { StaffLayout } from './layout/staff-layout';
+import { HomeRoute } from './routes/home-route';
+import { SectionRoute } from './routes/section-route';
+import { NotFoundRoute } from './routes/not-found-route';
+
+/** Every section's route exists for every role; the guard explains when one is not theirs. */
+export function AppRoutes() {
+  return (
+    <Routes>
+      <Route element={<StaffLayout />}>
+        <Route index element={<HomeRoute />} />
+        {sections.map((section) => (
+          <Route key={section.path} path={section.path} element={<SectionRoute section={section} />} />
+        ))}
+        <Route path="*" element={<NotFoundRoute />} />
+      </Route>
+    </Routes>
+  );
+}

@@ -1,0 +1,22 @@
+import type { ReactNode } from 'react';
+import { roleNames, type StaffSection } from '../../config/sections';
+import { plannedPages } from '../../config/planned-pages';
+import { PageFrame } from '../../components/page-frame';
+import { PlannedPanel } from '../../components/planned-panel';
+import { RoleGuard } from '../../features/session/components/role-guard';
+import { BakeDaysPage } from '../../features/bake-days/components/bake-days-page';
+
+/** Sections that have a page of their own; the rest show what is planned. */
+const builtPages: Record<string, ReactNode> = {
+  'bake-days': <BakeDaysPage />,
+};
+
+export function SectionRoute({ section }: { section: StaffSection }) {
+  const plan = plannedPages[section.path];
+  const page = builtPages[section.path] ?? (
+    <PageFrame eyebrow={roleNames[section.minRole]} title={section.label} intro={plan?.intro}>
+      {plan && <PlannedPanel plan={plan} />}
+    </PageFrame>
+  );
+  return <RoleGuard minRole={section.minRole}>{page}</RoleGuard>;
+}

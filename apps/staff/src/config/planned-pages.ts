@@ -1,0 +1,95 @@
+/**
+ * What each section not built yet will hold, shown on its page until the
+ * work that brings it arrives. A section leaves this list when it gets a
+ * real page in its own feature folder.
+ */
+export interface PlannedPage {
+  intro: string;
+  arrivesWith: string;
+  will: readonly string[];
+}
+
+export const plannedPages: Record<string, PlannedPage> = {
+  pickups: {
+    intro: "The day's pickup list: find each order in seconds, check it off, and sell what is left to walk-ups.",
+    arrivesWith: 'the counter work',
+    will: [
+      'Every order for the bake day, grouped by pickup window',
+      'Find an order by name or pickup code, or scan its QR code',
+      'Mark an order collected, with undo, or as a no-show',
+      'Sell the surplus to walk-ups',
+      'Keep working through a patchy connection and catch up when it is back',
+    ],
+  },
+  production: {
+    intro: 'One printable sheet for the night before a bake day, worked out from the orders.',
+    arrivesWith: 'the production work',
+    will: [
+      'Totals by flavour and glaze',
+      'Dough target and every ingredient in grams, with a whole number of eggs',
+      'The milk roux (tangzhong) and the starter (levain) build',
+      'How many rings and holes to cut, first roll and re-roll',
+      'Fry batches and how long the frying takes',
+      'How much of each glaze to make',
+      'A clock-time schedule worked back from the first pickup: bulk fermentation, cold retard, final proof, frying',
+      'Units in g or oz, °C or °F',
+    ],
+  },
+  formula: {
+    intro: "The dough formula in baker's percentages, all flour counted as 100 %.",
+    arrivesWith: 'the production work',
+    will: [
+      "Each ingredient's baker's percentage and the dough's hydration",
+      'The starter (levain) share and its own hydration',
+      'The milk roux (tangzhong): how much flour and milk it takes',
+      'The formula scaled to the next bake day’s dough target',
+    ],
+  },
+  'bake-days': {
+    intro: 'Dates, places, pickup windows and capacity.',
+    arrivesWith: "the owner's setup work",
+    will: [
+      'Setting up a bake day: date, place, pickup windows, that day’s menu',
+      'Capacity worked out from the equipment, which you can lower',
+      'When pre-orders open, and the cut-off when the dough must be mixed',
+    ],
+  },
+  menu: {
+    intro: 'What customers can put in a box, and what it costs.',
+    arrivesWith: "the owner's setup work",
+    will: [
+      'Flavour and glaze combinations, for rings and for holes',
+      'The allergens of each item, shown to customers before they pay',
+      'Box sizes (dozen, half dozen, bag of holes), their prices and any extra charge per item',
+    ],
+  },
+  equipment: {
+    intro: "What the kitchen can handle, which sets each bake day's capacity.",
+    arrivesWith: "the owner's setup work",
+    will: [
+      'The frying pot: oil volume and pieces per fry batch',
+      'How long the frying may run on a bake day',
+      'Proofing trays and fridge space for the cold retard',
+      'The mixer and the largest dough it takes',
+    ],
+  },
+  staff: {
+    intro: 'Who can sign in to the staff side, and what each person may do.',
+    arrivesWith: "the owner's setup work",
+    will: [
+      'Everyone on the team with their role: counter, baker or owner',
+      'Adding a person by their Google e-mail address, changing a role, removing access',
+    ],
+  },
+  sales: {
+    intro: 'How each week went, in money and in doughnuts.',
+    arrivesWith: 'the sales report work',
+    will: [
+      'Gross sales, refunds, processing fees and net',
+      'Units sold by flavour, and what sold out',
+      'Sell-through against capacity, and no-shows',
+      'Cost per doughnut and margin',
+      'Charts, and a CSV download',
+    ],
+  },
+};

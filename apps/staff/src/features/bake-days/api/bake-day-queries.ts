@@ -1,0 +1,20 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { BakeDayView } from '@fryline/schemas';
+import { api } from '../../../lib/api-client';
+import { queryRoots } from '../../../lib/query-keys';
+
+export const bakeDayQueries = {
+  /** Upcoming bake days, soonest first; staff want fresh capacity figures. */
+  upcoming: () =>
+    queryOptions({
+      queryKey: [...queryRoots.bakeDays, 'upcoming'] as const,
+      queryFn: () => api.get<BakeDayView[]>('/api/bake-days'),
+      staleTime: 10_000,
+      refetchInterval: 60_000,
+    }),
+};
+
+/** The bake day staff are working towards: the first one not yet done. */
+export function nextBakeDay(days: readonly BakeDayView[]): BakeDayView | undefined {
+  return days.find((day) => day.status !== 'done');
+}

@@ -1,0 +1,1 @@
+export { api, ApiError, isApiError, errorMessage, fetchCurrentUser, putFieldErrors, shouldRetry } from '@fryline/ui/api-client';

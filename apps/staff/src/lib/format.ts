@@ -1,0 +1,9 @@
+export {
+  formatDate,
+  formatClock,
+  formatClockRange,
+  formatDateTime,
+  formatMoment,
+  formatPieces,
+  plural,
+} from '@fryline/ui/format';

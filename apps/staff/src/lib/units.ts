@@ -1,0 +1,82 @@
+/**
+ * How the staff screens show masses, temperatures, volumes and durations.
+ * The maths works in grams and °C; these turn its figures into what the
+ * baker chose to read (g or oz, °C or °F) and back, and nothing else.
+ */
+import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, cToF, fToC } from '@fryline/production';
+
+export type MassUnit = 'g' | 'oz';
+export type TempUnit = 'C' | 'F';
+
+export interface Units {
+  mass: MassUnit;
+  temp: TempUnit;
+}
+
+export const DEFAULT_UNITS: Units = { mass: 'g', temp: 'C' };
+
+/** Litres in one US liquid quart (231 in³ a gallon, 1 in = 25.4 mm). */
+export const LITRES_PER_US_QUART = (231 * 25.4 ** 3) / 1e6 / 4;
+
+const OUNCES_PER_POUND = GRAMS_PER_POUND / GRAMS_PER_OUNCE;
+
+/** Up to `digits` decimals, with trailing zeros dropped: 1.80 → "1.8", 2.00 → "2". */
+export function trimmed(value: number, digits: number): string {
+  const fixed = value.toFixed(digits);
+  return digits > 0 ? fixed.replace(/\.?0+$/, '') : fixed;
+}
+
+/**
+ * Grams as the baker reads them. In grams: whole grams from 10 g up, one
+ * decimal below (salt and flavourings). In ounces: two decimals under 1 oz,
+ * one decimal up to a pound, then "2 lb 3.5 oz".
+ */
+export function formatMass(grams: number, unit: MassUnit): string {
+  if (unit === 'g') return `${grams < 10 ? trimmed(grams, 1) : Math.round(grams).toLocaleString('en-US')} g`;
+  const ounces = grams / GRAMS_PER_OUNCE;
+  if (ounces < 1) return `${ounces.toFixed(2)} oz`;
+  const tenths = Math.round(ounces * 10);
+  if (tenths < OUNCES_PER_POUND * 10) return `${(tenths / 10).toFixed(1)} oz`;
+  const pounds = Math.floor(tenths / (OUNCES_PER_POUND * 10));
+  const rest = (tenths - pounds * OUNCES_PER_POUND * 10) / 10;
+  return `${pounds} lb ${rest.toFixed(1)} oz`;
+}
+
+/** °C into the chosen scale (absolute temperatures, not differences). */
+export function tempToUnit(celsius: number, unit: TempUnit): number {
+  return unit === 'C' ? celsius : cToF(celsius);
+}
+
+/** A temperature typed in the chosen scale, back to °C. */
+export function tempFromUnit(value: number, unit: TempUnit): number {
+  return unit === 'C' ? value : fToC(value);
+}
+
+export function tempSymbol(unit: TempUnit): string {
+  return unit === 'C' ? '°C' : '°F';
+}
+
+/** "190 °C", "374 °F": whole degrees, as a thermometer is read. */
+export function formatTemp(celsius: number, unit: TempUnit): string {
+  return `${Math.round(tempToUnit(celsius, unit))} ${tempSymbol(unit)}`;
+}
+
+/** "3.1 L", with US quarts beside it for someone reading ounces. */
+export function formatVolume(litres: number, massUnit: MassUnit): string {
+  const metric = `${litres.toFixed(1)} L`;
+  return massUnit === 'g' ? metric : `${metric} (${(litres / LITRES_PER_US_QUART).toFixed(1)} US qt)`;
+}
+
+/** "45 min", "4 h", "4 h 59 min": rounded to the nearest minute. */
+export function formatMinutes(minutes: number): string {
+  const whole = Math.round(minutes);
+  const h = Math.floor(whole / 60);
+  const m = whole % 60;
+  if (h === 0) return `${m} min`;
+  return m === 0 ? `${h} h` : `${h} h ${m} min`;
+}
+
+/** A baker's percentage or a share: "1.8 %", "51.2 %". */
+export function formatPercent(percent: number, digits = 1): string {
+  return `${trimmed(percent, digits)} %`;
+}

@@ -1,0 +1,17 @@
+import { defineConfig, loadEnv } from 'vite';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+import { apiProxy, sideEffectFreeSource, uiAlias } from '../../packages/ui/src/vite-shared.ts';
+
+// Served by the API under /staff/; the shop has the site root.
+export default defineConfig(({ mode }) => {
+  const proxy = apiProxy(loadEnv(mode, import.meta.dirname, 'FRYLINE_').FRYLINE_API_URL);
+  return {
+    base: '/staff/',
+    plugins: [react(), tailwindcss()],
+    resolve: { alias: uiAlias },
+    build: { outDir: 'dist', rolldownOptions: { treeshake: { moduleSideEffects: sideEffectFreeSource } } },
+    server: { port: 5174, strictPort: true, proxy },
+    preview: { proxy },
+  };
+});
