@@ -1,19 +1,10 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { User, OutboxMessage } from '../src/db/models/index.js';
 import { database } from '../src/db/sequelize.js';
-import { seedDemo } from '@fryline/seeds';
-import { Browser, resetData, signIn, startStack, type Stack } from './support.js';
+import { Browser, signIn, useStack } from './support.js';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
-beforeEach(async () => {
-  await resetData();
-  await seedDemo(new Date());
-});
+const stack = useStack();
 
 describe('sign-in through the provider (OAuth 2.0 authorization code + PKCE, RFC 6749 / RFC 7636)', () => {
   for (const [email, role] of [

@@ -1,17 +1,8 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { seedDemo } from '@fryline/seeds';
+import { describe, expect, it } from 'vitest';
 import { BakeDay, Order } from '../src/db/models/index.js';
-import { Browser, resetData, signIn, startStack, type Stack } from './support.js';
+import { Browser, signIn, useStack } from './support.js';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
-beforeEach(async () => {
-  await resetData();
-  await seedDemo(new Date());
-});
+const stack = useStack();
 
 async function orderBody() {
   const [day] = (await (await fetch(`${stack.url}/api/bake-days`)).json()) as any;

@@ -1,13 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { loadConfig, ConfigError } from '../src/config/env.js';
-import { startStack, type Stack } from './support.js';
+import { useStack } from './support.js';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
+const stack = useStack({ demo: false });
 
 describe('health and error shapes', () => {
   it('reports the database up', async () => {

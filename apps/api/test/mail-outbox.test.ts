@@ -1,20 +1,12 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { database } from '../src/db/sequelize.js';
 import { OutboxMessage } from '../src/db/models/index.js';
 import { enqueueMail } from '../src/services/outbox.js';
 import { relayOutbox, backoffSeconds } from '../src/jobs/outbox-relay.js';
 import { createMailTransport } from '../src/integrations/mailer.js';
-import { resetData, startStack, type Stack } from './support.js';
+import { useStack } from './support.js';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
-beforeEach(async () => {
-  await resetData();
-  stack.mail.clear();
-});
+const stack = useStack({ demo: false });
 
 async function queue(to: string, subject: string) {
   await database().transaction((transaction) =>

@@ -2,13 +2,12 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { sign } from 'cookie-signature';
 import { QueryTypes } from 'sequelize';
-import { seedDemo } from '@fryline/seeds';
 import { database } from '../src/db/sequelize.js';
 import { BakeDay, User } from '../src/db/models/index.js';
-import { startStack, resetData, type Stack } from './support.js';
+import { useStack } from './support.js';
 import { openDay } from './order-helpers.js';
 
 // Concurrency check of the capacity counter: many customers at once never get
@@ -19,22 +18,16 @@ const CAPACITY = 100;
 const CLIENTS = 50;
 const REQUESTS = 500;
 
-let stack: Stack;
+const stack = useStack();
 let second: ChildProcess | null = null;
 let secondUrl = '';
 
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => {
+afterAll(() => {
   second?.kill('SIGTERM');
-  await stack.close();
 });
-beforeEach(async () => {
-  await resetData();
-  stack.payments.reset();
+beforeEach(() => {
+  // no webhooks: these orders stay on hold
   stack.payments.setWebhookEndpoint(null);
-  await seedDemo(new Date());
 });
 
 /** Signed-in customers, made directly as session rows (the sign-in flow has its own tests). */

@@ -1,26 +1,17 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { PNG } from 'pngjs';
 import jsQR from 'jsqr';
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
-import { seedDemo } from '@fryline/seeds';
 import { BakeDay, Order, OutboxMessage, PickupWindow } from '../src/db/models/index.js';
 import { PICKUP_CODE_ALPHABET } from '../src/services/pickup-codes.js';
 import { context } from '../src/services/context.js';
-import { Browser, resetData, signIn, startStack, type Stack } from './support.js';
+import { Browser, signIn, useStack } from './support.js';
 import { CARD_OK, deliverMail, halfDozen, mixedDozen, openDay, orderAndPay, remaining, sessionIdOf } from './order-helpers.js';
 
-let stack: Stack;
+const stack = useStack();
 let customer: Browser;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
 beforeEach(async () => {
-  await resetData();
-  stack.payments.reset();
-  stack.mail.clear();
-  await seedDemo(new Date());
   customer = new Browser(stack.url);
   await signIn(customer, 'customer@fryline.test');
 });

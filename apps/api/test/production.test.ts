@@ -1,20 +1,12 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { seedDemo } from '@fryline/seeds';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay } from '../src/db/models/index.js';
-import { Browser, resetData, signIn, startStack, type Stack } from './support.js';
+import { Browser, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay } from './order-helpers.js';
 
-let stack: Stack;
+const stack = useStack();
 let baker: Browser;
 let owner: Browser;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
 beforeEach(async () => {
-  await resetData();
-  stack.payments.reset();
-  await seedDemo(new Date());
   baker = new Browser(stack.url);
   await signIn(baker, 'baker@fryline.test');
   owner = new Browser(stack.url);

@@ -1,20 +1,12 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { seedDemo } from '@fryline/seeds';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay, Order, OutboxMessage, Refund, WaitlistEntry } from '../src/db/models/index.js';
-import { Browser, resetData, signIn, startStack, type Stack } from './support.js';
+import { Browser, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay, remaining } from './order-helpers.js';
 
-let stack: Stack;
+const stack = useStack();
 let customer: Browser;
 let owner: Browser;
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
 beforeEach(async () => {
-  await resetData();
-  stack.payments.reset();
-  await seedDemo(new Date());
   customer = new Browser(stack.url);
   await signIn(customer, 'customer@fryline.test');
   owner = new Browser(stack.url);

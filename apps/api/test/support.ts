@@ -1,3 +1,5 @@
+import { afterAll, beforeAll, beforeEach } from 'vitest';
+import { seedDemo } from '@fryline/seeds';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { startMailFake } from '@fryline/fake-mail';
@@ -148,4 +150,30 @@ export async function signIn(browser: Browser, email: string, opts: { returnTo?:
   if (opts.tamperState) callback.searchParams.set('state', 'forged-state-value');
   const done = await browser.fetch(callback.pathname + callback.search);
   return { status: done.status, location: done.headers.get('location'), callback };
+}
+
+/**
+ * Starts the stack once for a test file and gives every test fresh data:
+ * tables emptied, the fakes reset, and (unless `demo: false`) the demo
+ * scenario loaded. Returns the stack through a proxy, usable once the
+ * file's beforeAll has run.
+ */
+export function useStack(opts: { demo?: boolean } = {}): Stack {
+  let current: Stack | null = null;
+  beforeAll(async () => {
+    current = await startStack();
+  });
+  afterAll(async () => current?.close());
+  beforeEach(async () => {
+    await resetData();
+    current!.payments.reset();
+    current!.mail.clear();
+    if (opts.demo !== false) await seedDemo(new Date());
+  });
+  return new Proxy({} as Stack, {
+    get(_target, key) {
+      if (!current) throw new Error('the stack starts in beforeAll');
+      return current[key as keyof Stack];
+    },
+  });
 }

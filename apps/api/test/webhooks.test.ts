@@ -1,30 +1,21 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import Stripe from 'stripe';
-import { seedDemo } from '@fryline/seeds';
 import { Order, OutboxMessage, PaymentEvent } from '../src/db/models/index.js';
 import { sweepHolds } from '../src/jobs/hold-sweeper.js';
 import { releaseOrder } from '../src/services/capacity.js';
 import { database } from '../src/db/sequelize.js';
 import { context } from '../src/services/context.js';
 import { BakeDay } from '../src/db/models/index.js';
-import { Browser, resetData, signIn, startStack, WEBHOOK_SECRET, type Stack } from './support.js';
+import { Browser, WEBHOOK_SECRET, signIn, useStack } from './support.js';
 import { CARD_OK, halfDozen, mixedDozen, openDay, remaining, sessionIdOf } from './order-helpers.js';
 
-let stack: Stack;
+const stack = useStack();
 let customer: Browser;
 const sdk = new Stripe('sk_test_reference_only');
 
-beforeAll(async () => {
-  stack = await startStack();
-});
-afterAll(async () => stack.close());
 beforeEach(async () => {
-  await resetData();
-  stack.payments.reset();
-  stack.payments.resetDeliveryMode();
-  await seedDemo(new Date());
   customer = new Browser(stack.url);
   await signIn(customer, 'customer@fryline.test');
 });
