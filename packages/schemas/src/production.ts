@@ -133,3 +133,15 @@ export const capacityOverrideSchema = z.strictObject({
   /** Needed to go above what the equipment allows. */
   acceptAboveEquipment: z.boolean().default(false),
 });
+
+/** What the production sheet route says about the numbers it worked out. */
+export interface PlanMeta {
+  bakeDay: { id: string; date: string; place: string; timeZone: string; cutoffAt: string; capacity: { rings: number; holes: number } };
+  ordersCounted: number;
+  paidOrders: number;
+  heldOrders: number;
+  computedAt: string;
+  formula: { id: string | null; version: number; note: string };
+  latestFormulaVersion: number;
+  menu: Array<{ id: string; name: string; kind: string; glaze: string; glazeRecipeId: string | null }>;
+}

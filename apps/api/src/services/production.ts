@@ -4,7 +4,7 @@ import {
   DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, ProductionInputError, planBake,
   type BakePlan, type BoxOffer, type Formula, type OrderLine, type PlanBakeInput,
 } from '@fryline/production';
-import type { FormulaInput, ProductionSettingsInput } from '@fryline/schemas';
+import type { FormulaInput, PlanMeta, ProductionSettingsInput } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { BakeDay, BakeDayBox, FormulaVersion, MenuItem, PickupWindow, ProductionSettings } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
@@ -100,16 +100,7 @@ function planInput(
 
 export interface PlanResponse {
   plan: BakePlan;
-  meta: {
-    bakeDay: { id: string; date: string; place: string; timeZone: string; cutoffAt: string; capacity: { rings: number; holes: number } };
-    ordersCounted: number;
-    paidOrders: number;
-    heldOrders: number;
-    computedAt: string;
-    formula: { id: string | null; version: number; note: string };
-    latestFormulaVersion: number;
-    menu: Array<{ id: string; name: string; kind: string; glaze: string; glazeRecipeId: string | null }>;
-  };
+  meta: PlanMeta;
 }
 
 interface LineRow {
