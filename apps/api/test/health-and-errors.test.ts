@@ -1,3 +1,6 @@
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { loadConfig, ConfigError } from '../src/config/env.js';
@@ -25,6 +28,46 @@ describe('health and error shapes', () => {
     const res = await request(stack.app).get('/api/bake-days/not-a-uuid');
     expect(res.status).toBe(400);
     expect(res.body.error).toMatchObject({ code: 'invalid', details: { fields: { id: expect.any(String) } } });
+  });
+});
+
+describe('health with the database down', () => {
+  it('answers 503 { ok: false, db: "down" } from an API whose database is unreachable', async () => {
+    const child = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+      cwd: path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..'),
+      // port 9 (discard) on loopback: nothing listens there
+      env: { ...process.env, PORT: '0', JOBS: 'off', DATABASE_URL: 'postgres://postgres@127.0.0.1:9/nowhere' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    try {
+      const url = await new Promise<string>((resolve, reject) => {
+        let out = '';
+        child.stdout!.on('data', (chunk) => {
+          out += chunk;
+          const m = /listening on (http:\/\/[^\s]+)/.exec(out);
+          if (m) resolve(m[1]!);
+        });
+        child.on('exit', (code) => reject(new Error(`API exited ${code}`)));
+      });
+      const res = await fetch(`${url}/api/health`);
+      expect(res.status).toBe(503);
+      expect(await res.json()).toEqual({ ok: false, db: 'down' });
+    } finally {
+      child.kill('SIGTERM');
+    }
+  });
+
+  it('stops at boot listing every bad setting', async () => {
+    const child = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+      cwd: path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..'),
+      env: { ...process.env, PORT: 'abc', SMTP_PORT: '99999', STRIPE_WEBHOOK_SECRET: 'nope' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let err = '';
+    child.stderr!.on('data', (chunk) => (err += chunk));
+    const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
+    expect(code).toBe(1);
+    for (const name of ['PORT', 'SMTP_PORT', 'STRIPE_WEBHOOK_SECRET']) expect(err).toContain(name);
   });
 });
 

@@ -1,5 +1,6 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay, Order, OutboxMessage, Refund, WaitlistEntry } from '../src/db/models/index.js';
+import { lapseOffers, OFFER_MINUTES } from '../src/services/waitlist.js';
 import { Browser, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay, remaining } from './order-helpers.js';
 
@@ -100,5 +101,24 @@ describe('waitlist', () => {
     // a claim link works once
     const again = await waiting.getJson(`/api/waitlist/claims/${token}`);
     expect(again.status).toBe(409);
+  });
+
+  it('an offer nobody claims lapses and its pieces go to the next in line', async () => {
+    const day = await openDay(stack);
+    await BakeDay.update({ ringsRemaining: 6 }, { where: { id: day.id } });
+    const { order } = await orderAndPay(stack, customer, halfDozen(day));
+    const first = new Browser(stack.url);
+    await signIn(first, 'first.in.line@example.test');
+    const second = new Browser(stack.url);
+    await signIn(second, 'second.in.line@example.test');
+    const a = await first.send('POST', `/api/bake-days/${day.id}/waitlist`, { rings: 6 });
+    const b = await second.send('POST', `/api/bake-days/${day.id}/waitlist`, { rings: 6 });
+    expect(b.body.position).toBe(2);
+    await customer.send('POST', `/api/orders/${order.id}/cancel`);
+    expect((await WaitlistEntry.findByPk(a.body.id))!.status).toBe('offered');
+    expect(await lapseOffers(new Date(Date.now() + (OFFER_MINUTES + 1) * 60_000))).toBe(1);
+    expect((await WaitlistEntry.findByPk(a.body.id))!.status).toBe('lapsed');
+    expect((await WaitlistEntry.findByPk(b.body.id))!.status).toBe('offered');
+    expect((await remaining(day.id)).rings).toBe(0);
   });
 });

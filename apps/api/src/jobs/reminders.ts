@@ -7,7 +7,7 @@ export async function queueReminders(now: Date): Promise<number> {
   const due = await database().query<{ id: string }>(
     `SELECT o.id FROM orders o JOIN pickup_windows w ON w.id = o.pickup_window_id
       WHERE o.status = 'paid'
-        AND w.starts_at > :now AND w.starts_at <= :now + interval '24 hours'
+        AND w.starts_at > CAST(:now AS timestamptz) AND w.starts_at <= CAST(:now AS timestamptz) + interval '24 hours'
         AND NOT EXISTS (SELECT 1 FROM outbox m WHERE m.dedupe_key = 'reminder:' || o.id::text)
       LIMIT 200`,
     { replacements: { now }, type: QueryTypes.SELECT },
