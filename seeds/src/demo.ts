@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
-import { DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS } from '@fryline/production';
+import { DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, planBake, type Formula } from '@fryline/production';
 import {
   database, FormulaVersion, ProductionSettings, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
 } from '@fryline/api/db';
@@ -117,14 +117,28 @@ function upcomingMarketDays(now: DateTime, count: number): DateTime[] {
   return days;
 }
 
-function openPlan(date: DateTime, now: DateTime): DayPlan {
-  return {
-    date,
-    status: 'published',
-    ordersOpenAt: now.minus({ days: 3 }).toJSDate(),
-    // the dough is mixed the afternoon before: orders close at noon the day before
-    cutoffAt: date.minus({ days: 1 }).set({ hour: 12 }).toJSDate(),
-  };
+/**
+ * Orders close when the schedule says: the bake's first step (building the
+ * starter), worked back from the first pickup for a full day's dough, less
+ * the baker's margin.
+ */
+function openPlan(date: DateTime, now: DateTime, settings: ProductionSettings, formula: Formula): DayPlan {
+  const firstPickup = date.set({ hour: Number(WINDOWS[0]![0]!.slice(0, 2)), minute: 0 });
+  const plan = planBake({
+    orders: [{ menuItemId: 'full-day', name: 'A full day', kind: 'ring', glaze: null, quantity: 120 }],
+    spare: settings.spare,
+    formula,
+    equipment: settings.equipment,
+    schedule: settings.schedule,
+    roomTempC: settings.roomTempC,
+    firstPickupStartsAt: firstPickup.toISO()!,
+    timeZone: DEMO_TIME_ZONE,
+    now: now.toISO()!,
+    prices: settings.prices,
+    glazes: settings.glazes,
+    allergens: { dough: DEFAULT_DOUGH_ALLERGENS },
+  });
+  return { date, status: 'published', ordersOpenAt: now.minus({ days: 3 }).toJSDate(), cutoffAt: new Date(plan.preorderCutoffAt) };
 }
 
 async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, transaction: Transaction) {
@@ -261,8 +275,10 @@ export async function seedDemo(nowDate: Date = new Date()): Promise<SeedResult> 
     let createdBakeDays = 0;
     if (stillOpen === 0) {
       const menu = await MenuItem.findAll({ where: { active: true }, transaction });
+      const settings = (await ProductionSettings.findByPk(1, { transaction }))!;
+      const formula = (await FormulaVersion.findOne({ order: [['version', 'DESC']], transaction }))!.formula as Formula;
       for (const date of upcomingMarketDays(now, 2)) {
-        await createBakeDay(openPlan(date, now), menu, transaction);
+        await createBakeDay(openPlan(date, now, settings, formula), menu, transaction);
         createdBakeDays += 1;
       }
     }

@@ -21,30 +21,6 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Keep working through a patchy connection and catch up when it is back',
     ],
   },
-  production: {
-    intro: 'One printable sheet for the night before a bake day, worked out from the orders.',
-    arrivesWith: 'the production work',
-    will: [
-      'Totals by flavour and glaze',
-      'Dough target and every ingredient in grams, with a whole number of eggs',
-      'The milk roux (tangzhong) and the starter (levain) build',
-      'How many rings and holes to cut, first roll and re-roll',
-      'Fry batches and how long the frying takes',
-      'How much of each glaze to make',
-      'A clock-time schedule worked back from the first pickup: bulk fermentation, cold retard, final proof, frying',
-      'Units in g or oz, °C or °F',
-    ],
-  },
-  formula: {
-    intro: "The dough formula in baker's percentages, all flour counted as 100 %.",
-    arrivesWith: 'the production work',
-    will: [
-      "Each ingredient's baker's percentage and the dough's hydration",
-      'The starter (levain) share and its own hydration',
-      'The milk roux (tangzhong): how much flour and milk it takes',
-      'The formula scaled to the next bake day’s dough target',
-    ],
-  },
   'bake-days': {
     intro: 'Dates, places, pickup windows and capacity.',
     arrivesWith: "the owner's setup work",
@@ -61,16 +37,6 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Flavour and glaze combinations, for rings and for holes',
       'The allergens of each item, shown to customers before they pay',
       'Box sizes (dozen, half dozen, bag of holes), their prices and any extra charge per item',
-    ],
-  },
-  equipment: {
-    intro: "What the kitchen can handle, which sets each bake day's capacity.",
-    arrivesWith: "the owner's setup work",
-    will: [
-      'The frying pot: oil volume and pieces per fry batch',
-      'How long the frying may run on a bake day',
-      'Proofing trays and fridge space for the cold retard',
-      'The mixer and the largest dough it takes',
     ],
   },
   staff: {

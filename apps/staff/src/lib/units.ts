@@ -20,9 +20,19 @@ export const LITRES_PER_US_QUART = (231 * 25.4 ** 3) / 1e6 / 4;
 
 const OUNCES_PER_POUND = GRAMS_PER_POUND / GRAMS_PER_OUNCE;
 
+/**
+ * Rounds to `digits` decimals as written, halves up: 5.55 → 5.6 (toFixed
+ * alone gives 5.5, because 5.55 is stored as 5.5499…).
+ */
+export function roundTo(value: number, digits: number): number {
+  const text = String(value);
+  if (/e/i.test(text)) return Math.round(value * 10 ** digits) / 10 ** digits; // tiny or huge: no halves to worry about
+  return Number(`${Math.round(Number(`${text}e${digits}`))}e-${digits}`);
+}
+
 /** Up to `digits` decimals, with trailing zeros dropped: 1.80 → "1.8", 2.00 → "2". */
 export function trimmed(value: number, digits: number): string {
-  const fixed = value.toFixed(digits);
+  const fixed = roundTo(value, digits).toFixed(digits);
   return digits > 0 ? fixed.replace(/\.?0+$/, '') : fixed;
 }
 
@@ -34,7 +44,7 @@ export function trimmed(value: number, digits: number): string {
 export function formatMass(grams: number, unit: MassUnit): string {
   if (unit === 'g') return `${grams < 10 ? trimmed(grams, 1) : Math.round(grams).toLocaleString('en-US')} g`;
   const ounces = grams / GRAMS_PER_OUNCE;
-  if (ounces < 1) return `${ounces.toFixed(2)} oz`;
+  if (ounces < 1) return `${roundTo(ounces, 2).toFixed(2)} oz`;
   const tenths = Math.round(ounces * 10);
   if (tenths < OUNCES_PER_POUND * 10) return `${(tenths / 10).toFixed(1)} oz`;
   const pounds = Math.floor(tenths / (OUNCES_PER_POUND * 10));
@@ -63,8 +73,8 @@ export function formatTemp(celsius: number, unit: TempUnit): string {
 
 /** "3.1 L", with US quarts beside it for someone reading ounces. */
 export function formatVolume(litres: number, massUnit: MassUnit): string {
-  const metric = `${litres.toFixed(1)} L`;
-  return massUnit === 'g' ? metric : `${metric} (${(litres / LITRES_PER_US_QUART).toFixed(1)} US qt)`;
+  const metric = `${roundTo(litres, 1).toFixed(1)} L`;
+  return massUnit === 'g' ? metric : `${metric} (${roundTo(litres / LITRES_PER_US_QUART, 1).toFixed(1)} US qt)`;
 }
 
 /** "45 min", "4 h", "4 h 59 min": rounded to the nearest minute. */

@@ -5,10 +5,16 @@ import { PageFrame } from '../../components/page-frame';
 import { PlannedPanel } from '../../components/planned-panel';
 import { RoleGuard } from '../../features/session/components/role-guard';
 import { BakeDaysPage } from '../../features/bake-days/components/bake-days-page';
+import { EquipmentPage } from '../../features/equipment/components/equipment-page';
+import { FormulaPage } from '../../features/formula/components/formula-page';
+import { ProductionPage } from '../../features/production/components/production-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
   'bake-days': <BakeDaysPage />,
+  production: <ProductionPage />,
+  formula: <FormulaPage />,
+  equipment: <EquipmentPage />,
 };
 
 export function SectionRoute({ section }: { section: StaffSection }) {

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { bakeDayQueries } from '../api/bake-day-queries';
+import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
 import { formatDate, formatMoment } from '../../../lib/format';
 import { ErrorState, LoadingState } from '../../../components/status';
 import { BakeDayStatusBadge } from './status-badge';

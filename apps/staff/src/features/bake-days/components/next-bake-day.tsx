@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeDayView } from '@fryline/schemas';
-import { bakeDayQueries, nextBakeDay } from '../api/bake-day-queries';
+import { bakeDayQueries, nextBakeDay } from '../../../lib/queries/bake-day-queries';
 import { formatClockRange, formatDate, formatMoment, formatPieces } from '../../../lib/format';
 import { ErrorState, LoadingState } from '../../../components/status';
 import { BakeDayStatusBadge } from './status-badge';

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { BakeDayView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
-import { queryRoots } from '../../../lib/query-keys';
+import { api } from '../api-client';
+import { queryRoots } from '../query-keys';
 
 export const bakeDayQueries = {
   /** Upcoming bake days, soonest first; staff want fresh capacity figures. */

@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ProductionSettingsInput } from '@fryline/schemas';
+import { api } from '../../../lib/api-client';
+import { productionRoot } from '../../../lib/queries/production-queries';
+import type { ProductionSettingsView } from '../../../lib/queries/settings-queries';
+
+/** Saves the kitchen's settings (owner only); capacity and every sheet are worked out again. */
+export function useSaveSettings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (settings: ProductionSettingsInput) => api.put<ProductionSettingsView>('/api/production/settings', settings),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: productionRoot }),
+  });
+}

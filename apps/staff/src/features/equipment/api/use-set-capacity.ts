@@ -1,0 +1,27 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import type { Capacity } from '@fryline/production';
+import type { capacityOverrideSchema } from '@fryline/schemas';
+import { api } from '../../../lib/api-client';
+import { queryRoots } from '../../../lib/query-keys';
+
+export interface CapacitySet {
+  rings: number;
+  holes: number;
+  remaining: { rings: number; holes: number };
+  derived: Capacity;
+}
+
+/**
+ * Sets one bake day's capacity. Above what the equipment allows the server
+ * answers 409 `above_equipment` until `acceptAboveEquipment` is sent; below
+ * what is already sold, 409 `below_sold`.
+ */
+export function useSetCapacity(bakeDayId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: z.output<typeof capacityOverrideSchema>) =>
+      api.post<CapacitySet>(`/api/bake-days/${encodeURIComponent(bakeDayId)}/capacity`, body),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryRoots.bakeDays }),
+  });
+}

@@ -1,0 +1,57 @@
+import { useQuery } from '@tanstack/react-query';
+import type { CostPlan } from '@fryline/production';
+import { formatCents } from '@fryline/schemas';
+import { formatPercent } from '../../../lib/units';
+import { settingsQueries } from '../../../lib/queries/settings-queries';
+import { cell, num, SheetSection, TableHead } from './sheet-section';
+
+/** What a ring, a hole and each box cost to make, and the margin (owner only). */
+export function CostSection({ cost }: { cost: CostPlan }) {
+  const settings = useQuery(settingsQueries.current());
+  const glazeNames = new Map(settings.data?.glazes.map((g) => [g.id, g.name]));
+  return (
+    <SheetSection id="cost" title="Cost and margin" screenOnly>
+      <table className="w-full">
+        <caption className="sr-only">Cost per piece</caption>
+        <TableHead columns={['Per piece', num('Ring'), num('Hole')]} />
+        <tbody>
+          {cost.perPiece.map((piece) => (
+            <tr key={piece.glazeId ?? 'plain'}>
+              <th scope="row" className={cell.row}>
+                {piece.glazeId === null ? 'Plain' : glazeNames.get(piece.glazeId) ?? piece.glazeId}
+              </th>
+              <td className={cell.num}>{formatCents(piece.ringCents)}</td>
+              <td className={cell.num}>{formatCents(piece.holeCents)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {cost.boxes.length > 0 && (
+        <table className="w-full">
+          <caption className="sr-only">Margin per box</caption>
+          <TableHead columns={['Box', num('Price'), num('Cost'), num('Margin')]} />
+          <tbody>
+            {cost.boxes.map((box) => (
+              <tr key={box.id}>
+                <th scope="row" className={cell.row}>
+                  {box.name}
+                </th>
+                <td className={cell.num}>{formatCents(box.priceCents)}</td>
+                <td className={cell.num}>{formatCents(box.costCents)}</td>
+                <td className={cell.num}>
+                  {formatCents(box.marginCents)}
+                  {box.marginPercent !== null && (
+                    <span className="block text-sm text-muted">{formatPercent(box.marginPercent, 0)}</span>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      <p className="text-sm text-muted">
+        Box costs count plain pieces. Tonight’s dough costs {formatCents(cost.doughCents)}. {cost.rounding}
+      </p>
+    </SheetSection>
+  );
+}

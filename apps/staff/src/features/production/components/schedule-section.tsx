@@ -1,0 +1,31 @@
+import type { TimelineStep } from '@fryline/production';
+import { formatMinutes } from '../../../lib/units';
+import { scheduleRows } from '../model/sheet';
+import { cell, SheetSection, TableHead } from './sheet-section';
+
+/** The clock-time schedule, worked back from the first pickup, in the bake day's time zone. */
+export function ScheduleSection({ timeline, timeZone }: { timeline: readonly TimelineStep[]; timeZone: string }) {
+  return (
+    <SheetSection id="schedule" title="Schedule" wide>
+      <table className="w-full">
+        <caption className="sr-only">Schedule, in the bake day’s local time</caption>
+        <TableHead columns={['When', 'Step, and what to look for']} screenOnly />
+        <tbody>
+          {scheduleRows(timeline, timeZone).map((row) => (
+            <tr key={row.step}>
+              <td className={`${cell.text} tabular-nums`}>
+                <span className="sheet-when block font-extrabold whitespace-nowrap">{row.starts}</span>
+                <span className="sheet-note block text-sm whitespace-nowrap text-muted">to {row.ends}</span>
+                <span className="sheet-note block text-sm whitespace-nowrap text-muted">{formatMinutes(row.minutes)}</span>
+              </td>
+              <th scope="row" className={`${cell.text} text-left font-normal`}>
+                <span className="sheet-step block font-extrabold">{row.title}</span>
+                <span className="sheet-look block text-sm">{row.lookFor}</span>
+              </th>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </SheetSection>
+  );
+}

@@ -1,0 +1,23 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { Capacity } from '@fryline/production';
+import type { ProductionSettingsInput } from '@fryline/schemas';
+import { api } from '../api-client';
+import { productionRoot } from './production-queries';
+
+/** The kitchen's settings as stored; updatedAt is null until the owner first saves. */
+export type ProductionSettingsView = ProductionSettingsInput & { updatedAt: string | null };
+
+export const settingsQueries = {
+  current: () =>
+    queryOptions({
+      queryKey: [...productionRoot, 'settings'] as const,
+      queryFn: () => api.get<ProductionSettingsView>('/api/production/settings'),
+      staleTime: 60_000,
+    }),
+  /** What the equipment can make in a bake day, and which piece of kit limits it. */
+  capacity: () =>
+    queryOptions({
+      queryKey: [...productionRoot, 'capacity'] as const,
+      queryFn: () => api.get<Capacity>('/api/production/capacity'),
+    }),
+};
