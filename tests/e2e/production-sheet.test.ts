@@ -1,0 +1,89 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openBrowser, chooseAccount } from '../support/browser.js';
+
+const { appUrl } = inject('stack');
+let browser: Awaited<ReturnType<typeof openBrowser>>;
+
+beforeAll(async () => {
+  browser = await openBrowser({ width: 1024, height: 1300 });
+});
+afterAll(async () => browser.close());
+
+const OUNCE_G = 28.349523125; // NIST SP 811: 1 oz = 28.349523125 g
+
+describe("the baker's night-before sheet", () => {
+  it('a baker opens the production sheet, switches units, and the formula page saves a new version', async () => {
+    const { page, context } = browser;
+    // a customer holds a dozen, so tonight's sheet has something to make
+    await page.goto(`${appUrl}/`);
+    await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
+    await chooseAccount(page, 'sheet.customer@example.test');
+    await page.getByRole('heading', { name: /upcoming bake days/i }).waitFor();
+    const days = (await (await page.request.get(`${appUrl}/api/bake-days`)).json()) as Array<{ id: string; status: string; pickupWindows: Array<{ id: string }>; menu: Array<{ id: string; kind: string }> }>;
+    const day = days.find((d) => d.status === 'open')!;
+    const ring = day.menu.find((m) => m.kind === 'ring')!;
+    const { token } = (await (await page.request.get(`${appUrl}/api/csrf`)).json()) as { token: string };
+    const held = await page.request.post(`${appUrl}/api/orders`, {
+      headers: { 'x-csrf-token': token },
+      data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0]!.id, boxes: [{ size: 'dozen', items: [{ menuItemId: ring.id, quantity: 12 }] }] },
+    });
+    expect(held.status()).toBe(201);
+    await context.clearCookies();
+
+    await page.goto(`${appUrl}/staff/`);
+    await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
+    await chooseAccount(page, 'baker@fryline.test');
+    await page.getByRole('heading', { name: /Baker — tonight's bake/ }).waitFor();
+
+    await page.getByRole('link', { name: /^production sheet$/i }).first().click();
+    await page.getByRole('heading', { name: /^Production sheet — / }).waitFor();
+    await page.getByText(/Counts 1 order \(0 paid, 1 on hold\)/).waitFor();
+    for (const section of ['Counts', 'Dough', 'Milk roux', 'Starter build', 'Cutting', 'Frying', 'Glaze', 'Schedule']) {
+      await page.getByRole('heading', { name: section, exact: true }).waitFor();
+    }
+    // cautions are on the sheet
+    const cautions = page.getByRole('complementary', { name: /safety and selling/i });
+    await expect.poll(async () => (await cautions.textContent()) ?? '').toMatch(/water/i);
+    await expect.poll(async () => (await cautions.textContent()) ?? '').toMatch(/local/i);
+
+    // grams to ounces: the flour line converts at exactly 28.349523125 g per ounce
+    const mixer = page.getByRole('table').filter({ hasText: /bread flour/i }).first();
+    const flourRow = mixer.getByRole('row').filter({ hasText: /bread flour/i }).first();
+    const gramsText = (await flourRow.textContent()) ?? '';
+    const grams = Number(/([\d,]+(?:\.\d+)?)\s*g\b/.exec(gramsText)![1]!.replace(/,/g, ''));
+    await page.getByRole('radio', { name: /^oz$/ }).check({ force: true }); // a visually hidden radio under a styled label
+    await expect.poll(async () => (await flourRow.textContent()) ?? '').toMatch(/oz/);
+    // shown as pounds and ounces, e.g. "1 lb 3.7 oz" (1 lb = 16 oz)
+    const [, lb, oz] = /(?:(\d+)\s*lb\s*)?([\d.]+)\s*oz/.exec((await flourRow.textContent()) ?? '')!;
+    const ounces = Number(lb ?? 0) * 16 + Number(oz);
+    expect(Math.abs(ounces * OUNCE_G - grams)).toBeLessThan(OUNCE_G * 0.1);
+
+    // temperatures to °F: the roux cooks to 65 °C = 149 °F (NIST conversion)
+    await page.getByRole('radio', { name: /°F/ }).check({ force: true });
+    await page.getByText(/149\s*°F/).first().waitFor();
+
+    // formula: a new version is saved, and already-planned days keep theirs
+    await page.getByRole('link', { name: /^formula$/i }).first().click();
+    await page.getByRole('heading', { name: 'Ingredients' }).waitFor();
+    await page.getByLabel(/note for this version/i).fill('Less sugar for the spring menu');
+    await page.getByRole('button', { name: /save new version/i }).click();
+    await page.getByText(/Saved as version 2\. Bake days already planned keep their version\./).waitFor();
+
+    await page.getByRole('link', { name: /^production sheet$/i }).first().click();
+    await page.getByRole('button', { name: /switch this bake day to version 2/i }).waitFor();
+  });
+
+  it('the counter cannot open the sheet', async () => {
+    const { context } = browser;
+    await context.clearCookies();
+    const page = await context.newPage();
+    await page.goto(`${appUrl}/staff/`);
+    await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
+    await chooseAccount(page, 'counter@fryline.test');
+    await page.getByRole('heading', { name: /Counter — pickups/ }).waitFor();
+    expect(await page.getByRole('link', { name: /^production sheet$/i }).count()).toBe(0);
+    await page.goto(`${appUrl}/staff/production`);
+    await page.getByText(/not part of your role/i).first().waitFor();
+    await page.close();
+  });
+});
