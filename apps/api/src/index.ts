@@ -24,7 +24,11 @@ async function main() {
     console.log(`Fryline API listening on http://${config.HOST}:${port} (public address ${config.publicUrl})`);
   });
 
+  let closing = false;
   const shutdown = async () => {
+    // Ctrl-C reaches us directly and again through the start command: close once
+    if (closing) return;
+    closing = true;
     server.close();
     await stopJobs();
     await app.closeResources();
