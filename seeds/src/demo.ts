@@ -138,7 +138,10 @@ function openPlan(date: DateTime, now: DateTime, settings: ProductionSettings, f
     glazes: settings.glazes,
     allergens: { dough: DEFAULT_DOUGH_ALLERGENS },
   });
-  return { date, status: 'published', ordersOpenAt: now.minus({ days: 3 }).toJSDate(), cutoffAt: new Date(plan.preorderCutoffAt) };
+  // a cut-off customers can read: rounded down to the quarter hour
+  const cutoff = DateTime.fromISO(plan.preorderCutoffAt).setZone(DEMO_TIME_ZONE).startOf('minute');
+  const cutoffAt = cutoff.minus({ minutes: cutoff.minute % 15 }).toJSDate();
+  return { date, status: 'published', ordersOpenAt: now.minus({ days: 3 }).toJSDate(), cutoffAt };
 }
 
 async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, transaction: Transaction) {
