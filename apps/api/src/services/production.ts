@@ -210,6 +210,8 @@ export async function pinFormula(userId: string, bakeDayId: string, formulaVersi
   });
 }
 
+const limitWords: Record<string, string> = { fry: 'frying time', 'proofing-trays': 'proofing trays', mixer: 'the mixer', fridge: 'fridge space' };
+
 /** What the equipment can make in a day, and what limits it. */
 export async function equipmentCapacity() {
   const settings = await getProductionSettings();
@@ -223,7 +225,7 @@ export async function equipmentCapacity() {
 export async function setBakeDayCapacity(userId: string, bakeDayId: string, rings: number, holes: number, acceptAboveEquipment: boolean) {
   const derived = await equipmentCapacity();
   if (rings > derived.pieces && !acceptAboveEquipment) {
-    throw new AppError('above_equipment', `Your equipment makes about ${derived.pieces} rings a day (limited by ${derived.limitedBy}). Confirm to set ${rings} anyway.`, 409, {
+    throw new AppError('above_equipment', `Your equipment makes about ${derived.pieces} rings a day (limited by ${limitWords[derived.limitedBy] ?? derived.limitedBy}). Confirm to set ${rings} anyway.`, 409, {
       derived,
     });
   }
