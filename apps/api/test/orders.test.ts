@@ -3,7 +3,7 @@ import { PNG } from 'pngjs';
 import jsQR from 'jsqr';
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
-import { BakeDay, Order, OutboxMessage, PickupWindow } from '../src/db/models/index.js';
+import { BakeDay, Order, OutboxMessage, PickupWindow, ShopSettings } from '../src/db/models/index.js';
 import { PICKUP_CODE_ALPHABET } from '../src/services/pickup-codes.js';
 import { context } from '../src/services/context.js';
 import { Browser, signIn, useStack } from './support.js';
@@ -65,6 +65,19 @@ describe('placing an order', () => {
     const closed = await customer.send('POST', '/api/orders', halfDozen(day));
     expect(closed.status).toBe(409);
     expect(closed.body.error.code).toBe('closed');
+  });
+
+  it('adds sales tax when the owner sets it added, and sends it to checkout as its own line', async () => {
+    await ShopSettings.update({ taxMode: 'added', taxRateBp: 825 }, { where: { id: 1 } });
+    const day = await openDay(stack);
+    const res = await customer.send('POST', '/api/orders', mixedDozen(day));
+    const rings = day.menu.filter((m) => m.kind === 'ring');
+    const subtotal = 3000 + 6 * rings[0]!.surchargeCents + 6 * rings[1]!.surchargeCents;
+    // 8.25 % rounded half up to the cent (worked by hand)
+    expect(res.body.totalCents).toBe(subtotal + Math.floor((2 * subtotal * 825 + 10_000) / 20_000));
+    const items = await context().payments.checkout.sessions.listLineItems(sessionIdOf(res.body.checkoutUrl));
+    expect(items.data.map((i) => i.description)).toContain('Sales tax');
+    expect(items.data.reduce((sum, i) => sum + i.amount_total, 0)).toBe(res.body.totalCents);
   });
 
   it('allows one hold per customer and bake day', async () => {
