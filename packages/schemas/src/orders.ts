@@ -100,3 +100,24 @@ export interface WaitlistOfferView {
   holes: number;
   expiresAt: string;
 }
+
+/** One order as the staff see it in a bake day's list. */
+export interface StaffOrderView {
+  id: string;
+  status: OrderStatus;
+  customer: { name: string; email: string };
+  pickupCode: string | null;
+  pickupWindow: { id: string; startsAt: string; endsAt: string };
+  totalCents: number;
+  refundedCents: number;
+  paidAt: string | null;
+  rings: number;
+  holes: number;
+  boxes: Array<{ size: z.infer<typeof boxSizeSchema>; items: Array<{ name: string; quantity: number }> }>;
+}
+
+export const refundRequestSchema = z.strictObject({
+  amountCents: z.number().int('Amount must be whole cents').min(1, 'Amount must be at least 1 cent'),
+  reason: z.string().trim().min(1, 'Give a reason').max(200),
+});
+export type RefundRequest = z.infer<typeof refundRequestSchema>;

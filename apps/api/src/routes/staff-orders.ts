@@ -2,14 +2,17 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
+import { refundRequestSchema } from '@fryline/schemas';
 import { refundOrder } from '../services/refunds.js';
+import { listBakeDayOrders } from '../services/staff-orders.js';
 import { AppError } from '../lib/app-error.js';
 
 export const staffOrdersRouter = Router();
 
-const refundBody = z.strictObject({
-  amountCents: z.number().int('Amount must be whole cents').min(1, 'Amount must be at least 1 cent'),
-  reason: z.string().trim().min(1, 'Give a reason').max(200),
+const refundBody = refundRequestSchema;
+
+staffOrdersRouter.get('/api/staff/bake-days/:id/orders', requireRole('counter'), validate('params', z.object({ id: z.uuid('Unknown bake day') })), async (_req, res) => {
+  res.set('Cache-Control', 'no-store').json(await listBakeDayOrders(valid<{ id: string }>(res, 'params').id));
 });
 
 staffOrdersRouter.post(
