@@ -24,6 +24,14 @@ describe('health and error shapes', () => {
     expect(bad.body.error.code).toBe('invalid_json');
   });
 
+  it('sends a same-origin content security policy and no framing', async () => {
+    const res = await request(stack.app).get('/api/health');
+    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+    expect(res.headers['content-security-policy']).toContain("frame-ancestors 'none'");
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['x-powered-by']).toBeUndefined();
+  });
+
   it('validates ids in the path before touching the database', async () => {
     const res = await request(stack.app).get('/api/bake-days/not-a-uuid');
     expect(res.status).toBe(400);
