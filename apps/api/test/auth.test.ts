@@ -27,6 +27,14 @@ describe('sign-in through the provider (OAuth 2.0 authorization code + PKCE, RFC
     });
   }
 
+  it('sets the session cookie HttpOnly and SameSite=Lax (not Secure over plain http)', async () => {
+    const res = await fetch(`${stack.url}/api/csrf`);
+    const cookie = res.headers.getSetCookie().find((c) => c.startsWith('fryline.sid='))!;
+    expect(cookie).toMatch(/; HttpOnly/i);
+    expect(cookie).toMatch(/; SameSite=Lax/i);
+    expect(cookie).not.toMatch(/; Secure/i);
+  });
+
   it('regenerates the session id at sign-in (no session fixation)', async () => {
     const browser = new Browser(stack.url);
     await browser.fetch('/api/csrf');
