@@ -27,4 +27,16 @@ describe("a bake day's order list for the staff", () => {
 
     expect((await paying.getJson(`/api/staff/bake-days/${day.id}/orders`)).status).toBe(403);
   });
+
+  it("lists recent past bake days for the staff, with last week's orders in their states", async () => {
+    const counter = new Browser(stack.url);
+    await signIn(counter, 'counter@fryline.test');
+    const past = await counter.getJson('/api/staff/bake-days/past');
+    expect(past.status).toBe(200);
+    expect(past.body).toHaveLength(1);
+    expect(past.body[0].status).toBe('done');
+    const orders = await counter.getJson(`/api/staff/bake-days/${past.body[0].id}/orders`);
+    const statuses = new Set(orders.body.map((o: any) => o.status));
+    for (const s of ['collected', 'no_show', 'refunded', 'cancelled']) expect(statuses).toContain(s);
+  });
 });

@@ -75,8 +75,13 @@ function fetchCsrfToken(): Promise<string> {
   return csrfToken;
 }
 
-async function send(method: Method, path: string, body?: unknown, token?: string): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+/** Extra request headers, e.g. an Idempotency-Key. */
+export interface RequestOptions {
+  headers?: Record<string, string>;
+}
+
+async function send(method: Method, path: string, body?: unknown, token?: string, extra: RequestOptions = {}): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json', ...extra.headers };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (token !== undefined) headers['X-CSRF-Token'] = token;
   let res: Response;
@@ -130,21 +135,21 @@ async function toApiError(res: Response): Promise<ApiError> {
   });
 }
 
-async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
-  if (method === 'GET') return (await readBody<T>(await send(method, path))) as T;
+async function request<T>(method: Method, path: string, body?: unknown, options: RequestOptions = {}): Promise<T> {
+  if (method === 'GET') return (await readBody<T>(await send(method, path, undefined, undefined, options))) as T;
   try {
-    return (await readBody<T>(await send(method, path, body, await fetchCsrfToken()))) as T;
+    return (await readBody<T>(await send(method, path, body, await fetchCsrfToken(), options))) as T;
   } catch (error) {
     if (!(isApiError(error, 'csrf') && error.status === 403)) throw error;
     // The session's token changed (for example after signing in): fetch a new one and retry once.
     csrfToken = null;
-    return (await readBody<T>(await send(method, path, body, await fetchCsrfToken()))) as T;
+    return (await readBody<T>(await send(method, path, body, await fetchCsrfToken(), options))) as T;
   }
 }
 
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
-  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) => request<T>('POST', path, body ?? {}, options),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
   delete: <T = void>(path: string) => request<T>('DELETE', path),

@@ -72,6 +72,14 @@ export async function listUpcoming(now: Date): Promise<BakeDayView[]> {
   return views.filter((v) => v.status !== 'done');
 }
 
+/** For the staff: recent past bake days (newest first), drafts included, within `days` days. */
+export async function listPast(now: Date, days = 60): Promise<BakeDayView[]> {
+  const from = DateTime.fromJSDate(now).minus({ days }).toISODate()!;
+  const rows = await BakeDay.findAll({ where: { date: { [Op.gte]: from } }, include, order: [['date', 'DESC']] });
+  const views = await Promise.all(rows.map((d) => toView(d, now)));
+  return views.filter((v) => v.status === 'done');
+}
+
 export async function getBakeDay(id: string, now: Date): Promise<BakeDayView> {
   const day = await BakeDay.findByPk(id, { include });
   if (!day || day.status === 'draft') throw notFound('Bake day');

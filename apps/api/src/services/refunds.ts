@@ -1,4 +1,4 @@
-import type { Me } from '@fryline/schemas';
+import { formatCents, type Me } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { Order, Refund } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
@@ -38,8 +38,8 @@ export async function refundOrder(owner: Me, orderId: string, amountCents: numbe
     }
     const left = order.totalCents - order.refundedCents;
     if (amountCents > left) {
-      throw new AppError('over_refund', `At most ${left} cents can still be refunded on this order`, 400, {
-        fields: { amountCents: `At most ${(left / 100).toFixed(2)} can still be refunded` },
+      throw new AppError('over_refund', `At most ${formatCents(left)} can still be refunded on this order`, 400, {
+        fields: { amountCents: `At most ${formatCents(left)} can still be refunded` },
       });
     }
     const row = await refundPayment(order, amountCents, 'requested_by_customer', requestKey, owner.id, transaction, reason);

@@ -4,6 +4,7 @@ import { StaffLayout } from './layout/staff-layout';
 import { HomeRoute } from './routes/home-route';
 import { SectionRoute } from './routes/section-route';
 import { NotFoundRoute } from './routes/not-found-route';
+import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */
 export function AppRoutes() {
@@ -14,6 +15,7 @@ export function AppRoutes() {
         {sections.map((section) => (
           <Route key={section.path} path={section.path} element={<SectionRoute section={section} />} />
         ))}
+        <Route path="bake-days/:bakeDayId" element={<BakeDayOrdersRoute />} />
         <Route path="*" element={<NotFoundRoute />} />
       </Route>
     </Routes>

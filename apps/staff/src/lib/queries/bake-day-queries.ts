@@ -12,6 +12,13 @@ export const bakeDayQueries = {
       staleTime: 10_000,
       refetchInterval: 60_000,
     }),
+  /** Bake days of the last weeks, newest first: for late refunds and no-shows. */
+  past: () =>
+    queryOptions({
+      queryKey: [...queryRoots.bakeDays, 'past'] as const,
+      queryFn: () => api.get<BakeDayView[]>('/api/staff/bake-days/past'),
+      staleTime: 60_000,
+    }),
 };
 
 /** The bake day staff are working towards: the first one not yet done. */

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
 import { formatDate, formatMoment } from '../../../lib/format';
@@ -5,7 +6,7 @@ import { ErrorState, LoadingState } from '../../../components/status';
 import { BakeDayStatusBadge } from './status-badge';
 import { CapacityMeter } from './capacity-meter';
 
-/** Upcoming bake days with what is left of their capacity. */
+/** Upcoming bake days with what is left of their capacity; each date opens that day's orders. */
 export function CapacityTable({ caption = 'Upcoming bake days' }: { caption?: string }) {
   const days = useQuery(bakeDayQueries.upcoming());
 
@@ -46,7 +47,13 @@ export function CapacityTable({ caption = 'Upcoming bake days' }: { caption?: st
           {days.data.map((day) => (
             <tr key={day.id} className="border-b border-line align-top last:border-b-0">
               <th scope="row" className="py-3 pr-2 pl-4 font-normal sm:px-6">
-                <span className="block font-extrabold">{formatDate(day.date, day.timeZone, 'short')}</span>
+                <Link
+                  to={`/bake-days/${day.id}`}
+                  className="block font-extrabold text-plum-800 underline decoration-plum-300 decoration-2 hover:decoration-plum-800"
+                >
+                  <span className="sr-only">Orders for </span>
+                  {formatDate(day.date, day.timeZone, 'short')}
+                </Link>
                 <span className="block text-sm text-muted">{day.place}</span>
                 <span className="mt-1 inline-block">
                   <BakeDayStatusBadge status={day.status} />

@@ -1,0 +1,34 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { OrderStatus, RefundRequest } from '@fryline/schemas';
+import { api } from '../../../lib/api-client';
+import { queryRoots } from '../../../lib/query-keys';
+
+export interface RefundMade {
+  id: string;
+  orderId: string;
+  amountCents: number;
+  reason: string;
+  createdAt: string;
+  order: { status: OrderStatus; totalCents: number; refundedCents: number };
+}
+
+export interface RefundVariables {
+  orderId: string;
+  body: RefundRequest;
+  /** One key per refund dialog: a retry or a second click with it refunds once. */
+  requestKey: string;
+}
+
+/** `POST /api/staff/orders/:id/refunds`, with the dialog's Idempotency-Key. */
+function postRefund({ orderId, body, requestKey }: RefundVariables): Promise<RefundMade> {
+  return api.post<RefundMade>(`/api/staff/orders/${encodeURIComponent(orderId)}/refunds`, body, { headers: { 'Idempotency-Key': requestKey } });
+}
+
+/** Refunds part or all of a paid order; the bake day's figures and order list are fetched afresh after. */
+export function useRefundOrder() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: postRefund,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryRoots.bakeDays }),
+  });
+}
