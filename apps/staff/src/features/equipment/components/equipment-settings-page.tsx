@@ -7,7 +7,8 @@ import { BakeDayCapacityList } from './bake-day-capacity';
 import { CapacityPanel } from './capacity-panel';
 import { SettingsForm } from './settings-form';
 
-const INTRO = "What the kitchen can handle. It sets each bake day's capacity and every figure on the production sheet.";
+const INTRO =
+  "What the kitchen can handle, the glazes it makes and what the ingredients cost. It sets each bake day's capacity and every figure on the production sheet.";
 
 export default function EquipmentSettingsPage() {
   const settings = useQuery(settingsQueries.current());

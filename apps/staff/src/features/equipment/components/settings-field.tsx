@@ -1,37 +1,81 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
 import { get, useController, type UseFormReturn } from 'react-hook-form';
 import type { ProductionSettingsInput } from '@fryline/schemas';
 import { tempFromUnit, tempSymbol, tempToUnit, trimmed, type TempUnit } from '../../../lib/units';
-import type { SettingsField as FieldDef } from '../model/settings-fields';
+import type { SettingsField as FieldDef, SettingsPath } from '../model/settings-fields';
 
-type SettingsForm = UseFormReturn<ProductionSettingsInput>;
+export type SettingsForm = UseFormReturn<ProductionSettingsInput>;
 
-function fieldId(name: string): string {
-  return `setting-${name.replace(/\./g, '-')}`;
+export function fieldId(name: string): string {
+  return `setting-${name.replace(/[^A-Za-z0-9_-]+/g, '-')}`;
+}
+
+/** The error the form holds for a field, if any. */
+export function fieldError(form: SettingsForm, name: string): string | undefined {
+  return (get(form.formState.errors, name) as { message?: string } | undefined)?.message;
+}
+
+/** What an input needs to point at its help line and error. */
+export function fieldAria(id: string, help: unknown, error: string | undefined) {
+  const described = [help && `${id}-help`, error && `${id}-error`].filter(Boolean).join(' ') || undefined;
+  return { 'aria-invalid': error ? true : undefined, 'aria-describedby': described };
+}
+
+/** A label (with its unit), the input, a help line and the error under it. */
+export function FieldShell({
+  id,
+  label,
+  unit,
+  optional,
+  help,
+  error,
+  children,
+}: {
+  id: string;
+  label: ReactNode;
+  unit?: string;
+  optional?: boolean;
+  help?: ReactNode;
+  error?: string;
+  children: ReactNode;
+}) {
+  return (
+    <div>
+      <label htmlFor={id} className="field-label">
+        {label}
+        {unit && <span className="font-semibold text-muted"> ({unit})</span>}
+        {optional && <span className="font-semibold text-muted"> · optional</span>}
+      </label>
+      {children}
+      {help && (
+        <p id={`${id}-help`} className="mt-1 text-sm text-muted">
+          {help}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="field-error">
+          {error}
+        </p>
+      )}
+    </div>
+  );
 }
 
 /** One numeric setting with its label, unit, help line and error. */
 export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; field: FieldDef; tempUnit: TempUnit }) {
   const id = fieldId(field.name);
-  const error = get(form.formState.errors, field.name) as { message?: string } | undefined;
+  const error = fieldError(form, field.name);
   const unit = field.temperature ? tempSymbol(tempUnit) : field.unit;
-  const described = [field.help && `${id}-help`, error?.message && `${id}-error`].filter(Boolean).join(' ') || undefined;
   const inputProps = {
     id,
     type: 'number',
     inputMode: field.whole ? ('numeric' as const) : ('decimal' as const),
     step: field.whole ? 1 : 'any',
     className: 'field-input',
-    'aria-invalid': error ? true : undefined,
-    'aria-describedby': described,
+    ...fieldAria(id, field.help, error),
   };
   return (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {field.label}
-        {unit && <span className="font-semibold text-muted"> ({unit})</span>}
-        {field.optional && <span className="font-semibold text-muted"> · optional</span>}
-      </label>
+    <FieldShell id={id} label={field.label} unit={unit} optional={field.optional} help={field.help} error={error}>
       {field.temperature ? (
         <TemperatureInput form={form} name={field.name} unit={tempUnit} inputProps={inputProps} />
       ) : (
@@ -42,17 +86,40 @@ export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; f
           })}
         />
       )}
-      {field.help && (
-        <p id={`${id}-help`} className="mt-1 text-sm text-muted">
-          {field.help}
-        </p>
-      )}
-      {error?.message && (
-        <p id={`${id}-error`} className="field-error">
-          {error.message}
-        </p>
-      )}
-    </div>
+    </FieldShell>
+  );
+}
+
+/** One text setting (a glaze's name); `onText` hears each change. */
+export function TextSetting({
+  form,
+  name,
+  label,
+  help,
+  extraError,
+  onText,
+}: {
+  form: SettingsForm;
+  name: SettingsPath;
+  label: string;
+  help?: ReactNode;
+  /** Another field's error that belongs beside this input (the id made from the name). */
+  extraError?: string;
+  onText?: (text: string) => void;
+}) {
+  const id = fieldId(name);
+  const error = fieldError(form, name) ?? extraError;
+  return (
+    <FieldShell id={id} label={label} help={help} error={error}>
+      <input
+        id={id}
+        type="text"
+        autoComplete="off"
+        className="field-input"
+        {...fieldAria(id, help, error)}
+        {...form.register(name, { onChange: (event: { target: { value: string } }) => onText?.(event.target.value) })}
+      />
+    </FieldShell>
   );
 }
 

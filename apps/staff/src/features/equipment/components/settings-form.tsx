@@ -2,15 +2,19 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { productionSettingsSchema, type ProductionSettingsInput } from '@fryline/schemas';
-import { putFieldErrors } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
 import type { Capacity } from '@fryline/production';
 import type { ProductionSettingsView } from '../../../lib/queries/settings-queries';
 import { useSaveSettings } from '../api/use-save-settings';
-import { limitNames, settingsFieldNames, settingsGroups, toSettingsValues } from '../model/settings-fields';
+import { settingsMessages } from '../model/glazes';
+import { limitNames, placeServerErrors, settingsGroups, toSettingsValues } from '../model/settings-fields';
+import { GlazesSection } from './glazes-section';
+import { PricesSection } from './prices-section';
 import { SettingsField } from './settings-field';
+
+const glazeIds = (settings: ProductionSettingsInput) => new Set(settings.glazes.map((glaze) => glaze.id));
 
 /** The kitchen's settings; saving works out the capacity again. */
 export function SettingsForm({
@@ -26,9 +30,12 @@ export function SettingsForm({
   const [problems, setProblems] = useState<string[]>([]);
   const [saved, setSaved] = useState(false);
   const form = useForm<ProductionSettingsInput>({
-    resolver: zodResolver(productionSettingsSchema),
+    resolver: zodResolver(productionSettingsSchema, { error: settingsMessages }),
     defaultValues: toSettingsValues(settings),
   });
+
+  /** Glazes the API holds; a new one's id follows its name until it is saved. */
+  const [savedGlazeIds, setSavedGlazeIds] = useState(() => glazeIds(settings));
 
   const submit = form.handleSubmit(
     (values) => {
@@ -37,9 +44,10 @@ export function SettingsForm({
       save.mutate(values, {
         onSuccess: (stored) => {
           form.reset(toSettingsValues(stored));
+          setSavedGlazeIds(glazeIds(stored));
           setSaved(true);
         },
-        onError: (error) => setProblems(putFieldErrors(error, form.setError, settingsFieldNames)),
+        onError: (error) => setProblems(placeServerErrors(error, values, form.setError)),
       });
     },
     () => setProblems(['Some settings need another look: see the messages beside them.']),
@@ -66,6 +74,8 @@ export function SettingsForm({
           </div>
         </fieldset>
       ))}
+      <GlazesSection form={form} savedIds={savedGlazeIds} />
+      <PricesSection form={form} />
       {problems.length > 0 && (
         <div role="alert" className="notice notice-bad">
           {problems.map((problem) => (

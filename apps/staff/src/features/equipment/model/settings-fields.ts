@@ -6,6 +6,7 @@
 import type { Path } from 'react-hook-form';
 import { scheduleStepIds, type ProductionSettingsInput } from '@fryline/schemas';
 import type { CapacityLimit } from '@fryline/production';
+import { isApiError, putFieldErrors } from '../../../lib/api-client';
 
 export type SettingsPath = Path<ProductionSettingsInput>;
 
@@ -128,7 +129,55 @@ export function toSettingsValues(settings: ProductionSettingsInput & { updatedAt
   // Blank optional fields are held as undefined; give them their keys so an untouched form compares equal.
   const { rolling } = values.equipment;
   values.equipment.rolling = { ...rolling, measuredRingGrams: rolling.measuredRingGrams, measuredHoleGrams: rolling.measuredHoleGrams };
+  values.glazes = values.glazes.map((glaze) => ({ ...glaze, extraPercent: glaze.extraPercent, allergens: glaze.allergens }));
+  values.prices = { ...values.prices, oilBakesPerFill: values.prices.oilBakesPerFill };
   return values;
+}
+
+/**
+ * A field path as the API or the bake maths writes it, in the form's dotted
+ * shape: `glazes[1].parts[0].parts` → `glazes.1.parts.0.parts`,
+ * `prices.centsPerKg["Icing sugar"]` → `prices.centsPerKg.Icing sugar`.
+ */
+export function dottedPath(path: string): string {
+  return path
+    .replace(/\["((?:[^"\\]|\\.)*)"\]/g, (_match, key: string) => `.${key.replace(/\\(.)/g, '$1')}`)
+    .replace(/\[(\d+)\]/g, '.$1');
+}
+
+/** A price's name the form can hold an error for: no dots, brackets, quotes or commas to split it. */
+const plainKey = /^[^.,[\]'"]+$/;
+
+/** Every field these values show, glaze and price rows included: where an error from the API can go. */
+export function formFieldNames(values: ProductionSettingsInput): SettingsPath[] {
+  const glazeFields = values.glazes.flatMap((glaze, i): SettingsPath[] => [
+    `glazes.${i}.id`,
+    `glazes.${i}.name`,
+    `glazes.${i}.gramsPerRing`,
+    `glazes.${i}.gramsPerHole`,
+    `glazes.${i}.extraPercent`,
+    `glazes.${i}.allergens`,
+    `glazes.${i}.parts`,
+    ...glaze.parts.flatMap((_part, j): SettingsPath[] => [`glazes.${i}.parts.${j}.name`, `glazes.${i}.parts.${j}.parts`]),
+  ]);
+  const priceFields = Object.keys(values.prices.centsPerKg)
+    .filter((name) => plainKey.test(name))
+    .map((name): SettingsPath => `prices.centsPerKg.${name}`);
+  return [...settingsFieldNames, 'glazes', ...glazeFields, 'prices.fryingOilCentsPerKg', 'prices.oilBakesPerFill', ...priceFields];
+}
+
+/**
+ * Puts the API's field errors beside the inputs they name, whichever way
+ * the path is written; returns the messages no input took.
+ */
+export function placeServerErrors(
+  error: unknown,
+  values: ProductionSettingsInput,
+  setError: (name: SettingsPath, error: { type: string; message: string }) => void,
+): string[] {
+  const known = new Set<string>(formFieldNames(values));
+  const keys = isApiError(error) ? Object.keys(error.fieldErrors).filter((key) => known.has(dottedPath(key))) : [];
+  return putFieldErrors(error, (key, fieldError) => setError(dottedPath(key) as SettingsPath, fieldError), keys);
 }
 
 export const limitNames: Record<CapacityLimit, string> = {

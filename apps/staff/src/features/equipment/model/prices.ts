@@ -1,0 +1,115 @@
+/**
+ * Ingredient prices as the owner types them (dollars a kilogram, or a pound
+ * for someone reading ounces) and as they are stored (whole cents a
+ * kilogram). The arithmetic is done on exact fractions, so "1.005" a kilo
+ * is 100.5 ¢ and rounds up to 101 ¢, and a pound is exactly 453.59237 g.
+ */
+import { GRAMS_PER_POUND } from '@fryline/production';
+import type { FormulaInput, ingredientKinds } from '@fryline/schemas';
+import type { MassUnit } from '../../../lib/units';
+
+export type PriceUnit = 'kg' | 'lb';
+
+/** Prices follow the weight switch: per kg beside grams, per lb beside ounces. */
+export function priceUnitFor(mass: MassUnit): PriceUnit {
+  return mass === 'oz' ? 'lb' : 'kg';
+}
+
+/** The highest price the settings accept, in cents a kilogram. */
+export const MAX_CENTS_PER_KG = 1_000_000;
+
+interface Fraction {
+  num: bigint;
+  den: bigint;
+}
+
+/** A decimal written out ("453.59237") as an exact fraction. */
+function exactDecimal(whole: string, decimals: string): Fraction {
+  return { num: BigInt(`${whole || '0'}${decimals}`), den: 10n ** BigInt(decimals.length) };
+}
+
+/** A plain decimal constant ("453.59237", not "1e-7") as an exact fraction. */
+function exactConstant(value: number): Fraction {
+  const [whole = '0', decimals = ''] = String(value).split('.');
+  return exactDecimal(whole, decimals);
+}
+
+/** Grams in one unit the price is typed for. */
+const gramsPer: Record<PriceUnit, Fraction> = {
+  kg: { num: 1000n, den: 1n },
+  lb: exactConstant(GRAMS_PER_POUND),
+};
+
+/** num ÷ den rounded to a whole number, halves up (num, den ≥ 0). */
+function roundHalfUp(num: bigint, den: bigint): bigint {
+  return (2n * num + den) / (2n * den);
+}
+
+/** "4.50", "$4.50", "4.5", "4", ".5": dollars, with or without the sign. */
+const PRICE_TEXT = /^\s*\$?\s*(\d*)(?:\.(\d*))?\s*$/;
+
+/**
+ * A price typed in dollars a kg (or a lb) as whole cents a kilogram,
+ * rounded half up to the cent. NaN when the text is not a price.
+ */
+export function centsPerKgFromText(text: string, unit: PriceUnit): number {
+  const match = PRICE_TEXT.exec(text);
+  const whole = match?.[1] ?? '';
+  const decimals = match?.[2] ?? '';
+  if (!match || whole + decimals === '') return Number.NaN;
+  const dollars = exactDecimal(whole, decimals);
+  const grams = gramsPer[unit];
+  // dollars/unit × 100 ¢/$ × 1000 g/kg ÷ (grams/unit)
+  return Number(roundHalfUp(dollars.num * 100_000n * grams.den, dollars.den * grams.num));
+}
+
+/** Stored cents a kilogram as the dollars to show in the input: "4.41". Blank for no price. */
+export function priceText(centsPerKg: number | undefined, unit: PriceUnit): string {
+  if (centsPerKg === undefined || !Number.isFinite(centsPerKg) || centsPerKg < 0) return '';
+  const grams = gramsPer[unit];
+  // Stored prices are whole cents; anything else is rounded first.
+  const cents = roundHalfUp(BigInt(Math.round(centsPerKg)) * grams.num, grams.den * 1000n);
+  return `${cents / 100n}.${String(cents % 100n).padStart(2, '0')}`;
+}
+
+/** What is wrong with a price as the form holds it, in the owner's words; undefined when it is fine or not set. */
+export function priceProblem(centsPerKg: number | undefined): string | undefined {
+  if (centsPerKg === undefined) return undefined;
+  if (!Number.isFinite(centsPerKg)) return 'Type dollars and cents, like 4.50';
+  if (centsPerKg > MAX_CENTS_PER_KG) return 'That price is too large';
+  return undefined;
+}
+
+/** Formula lines that are portions of other lines; their flour, milk and water are priced there. */
+const portionKinds: ReadonlySet<(typeof ingredientKinds)[number]> = new Set(['starter', 'roux-flour', 'roux-milk']);
+
+export interface PricedName {
+  /** As the cost looks it up: exact, trimmed. */
+  name: string;
+  /** "Dough" and the glazes that use it. */
+  usedIn: string[];
+}
+
+interface GlazeLike {
+  name: string;
+  parts: ReadonlyArray<{ name: string }>;
+}
+
+/**
+ * Every name the production sheet's cost looks a price up for: the formula's
+ * own lines (not the portion lines) and each glaze's parts, in that order,
+ * each once.
+ */
+export function namesToPrice(ingredients: FormulaInput['ingredients'] | undefined, glazes: readonly GlazeLike[]): PricedName[] {
+  const byName = new Map<string, PricedName>();
+  const use = (raw: string, where: string) => {
+    const name = raw.trim();
+    if (name === '') return;
+    const entry = byName.get(name) ?? { name, usedIn: [] };
+    if (!entry.usedIn.includes(where)) entry.usedIn.push(where);
+    byName.set(name, entry);
+  };
+  ingredients?.filter((line) => !portionKinds.has(line.kind)).forEach((line) => use(line.name, 'Dough'));
+  glazes.forEach((glaze) => glaze.parts.forEach((part) => use(part.name, glaze.name.trim() || 'New glaze')));
+  return [...byName.values()];
+}
