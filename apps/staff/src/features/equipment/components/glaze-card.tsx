@@ -5,6 +5,7 @@ import { formatPercent, trimmed } from '../../../lib/units';
 import { MAX_GLAZE_PARTS, partShares, type GlazeValues } from '../model/glazes';
 import type { SettingsPath } from '../model/settings-fields';
 import { fieldAria, fieldError, fieldId, SettingsField, TextSetting, type SettingsForm } from './settings-field';
+import { ListError, RemoveRowButton } from '../../../components/row-controls';
 
 /** One glaze recipe: name, amounts, parts, allergens, and a guarded remove. */
 export function GlazeCard({
@@ -144,26 +145,18 @@ function GlazeParts({ form, index }: { form: SettingsForm; index: number }) {
                   {formatPercent(shares[i] ?? 0, 0)}
                 </td>
                 <td className="self-center text-right sm:py-1.5 sm:pl-2 sm:align-middle">
-                  <button
-                    type="button"
-                    className="btn btn-quiet btn-small"
-                    aria-label={`Remove part ${i + 1}${values[i]?.name ? ` (${values[i]?.name})` : ''}`}
+                  <RemoveRowButton
+                    label={`Remove part ${i + 1}${values[i]?.name ? ` (${values[i]?.name})` : ''}`}
                     disabled={parts.fields.length <= 1}
-                    onClick={() => parts.remove(i)}
-                  >
-                    Remove
-                  </button>
+                    onRemove={() => parts.remove(i)}
+                  />
                 </td>
               </tr>
             );
           })}
         </tbody>
       </table>
-      {listError && (
-        <p role="alert" className="field-error">
-          {listError}
-        </p>
-      )}
+      <ListError message={listError} />
       <div>
         <button
           type="button"

@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { ingredientKinds, type saveFormulaSchema } from '@fryline/schemas';
 import { formatMass, formatPercent } from '../../../lib/units';
 import { blankIngredient, flourTotal, kindLabels, type FormulaFormValues, type Preview } from '../model/formula-form';
+import { ListError, RemoveRowButton } from '../../../components/row-controls';
 
 type FormulaForm = UseFormReturn<FormulaFormValues, unknown, z.output<typeof saveFormulaSchema>>;
 
@@ -136,26 +137,18 @@ export function IngredientTable({
                   {grams === undefined ? '—' : formatMass(grams, 'g')}
                 </td>
                 <td className="self-center text-right sm:py-2 sm:pl-2 sm:align-middle">
-                  <button
-                    type="button"
-                    className="btn btn-quiet btn-small"
-                    aria-label={`Remove line ${i + 1}${ingredients[i]?.name ? ` (${ingredients[i]?.name})` : ''}`}
-                    onClick={() => lines.remove(i)}
+                  <RemoveRowButton
+                    label={`Remove line ${i + 1}${ingredients[i]?.name ? ` (${ingredients[i]?.name})` : ''}`}
                     disabled={lines.fields.length <= 1}
-                  >
-                    Remove
-                  </button>
+                    onRemove={() => lines.remove(i)}
+                  />
                 </td>
               </tr>
             );
           })}
         </tbody>
       </table>
-      {listError && (
-        <p role="alert" className="field-error">
-          {listError}
-        </p>
-      )}
+      <ListError message={listError} />
       <div className="flex flex-wrap items-center justify-between gap-3">
         <button
           type="button"
