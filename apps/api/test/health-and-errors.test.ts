@@ -1,3 +1,5 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { spawn } from 'node:child_process';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -63,6 +65,23 @@ describe('health with the database down', () => {
     } finally {
       child.kill('SIGTERM');
     }
+  });
+
+  it('names the port when it is already in use', async () => {
+    const blocker = http.createServer();
+    await new Promise<void>((r) => blocker.listen(0, '127.0.0.1', r));
+    const port = (blocker.address() as AddressInfo).port;
+    const child = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+      cwd: path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..'),
+      env: { ...process.env, PORT: String(port), JOBS: 'off', DATABASE_URL: 'postgres://postgres@127.0.0.1:9/nowhere' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let err = '';
+    child.stderr!.on('data', (chunk) => (err += chunk));
+    const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
+    blocker.close();
+    expect(code).toBe(1);
+    expect(err).toContain(`port ${port} is already in use`);
   });
 
   it('stops at boot listing every bad setting', async () => {
