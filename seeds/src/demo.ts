@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
-import { DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, planBake, type Formula } from '@fryline/production';
+import { DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, type Formula } from '@fryline/production';
+import { cutoffFromSchedule } from '@fryline/api/services/production';
 import {
   database, FormulaVersion, ProductionSettings, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
 } from '@fryline/api/db';
@@ -117,30 +118,10 @@ function upcomingMarketDays(now: DateTime, count: number): DateTime[] {
   return days;
 }
 
-/**
- * Orders close when the schedule says: the bake's first step (building the
- * starter), worked back from the first pickup for a full day's dough, less
- * the baker's margin.
- */
+/** Orders close when the production schedule says (see cutoffFromSchedule). */
 function openPlan(date: DateTime, now: DateTime, settings: ProductionSettings, formula: Formula): DayPlan {
   const firstPickup = date.set({ hour: Number(WINDOWS[0]![0]!.slice(0, 2)), minute: 0 });
-  const plan = planBake({
-    orders: [{ menuItemId: 'full-day', name: 'A full day', kind: 'ring', glaze: null, quantity: 120 }],
-    spare: settings.spare,
-    formula,
-    equipment: settings.equipment,
-    schedule: settings.schedule,
-    roomTempC: settings.roomTempC,
-    firstPickupStartsAt: firstPickup.toISO()!,
-    timeZone: DEMO_TIME_ZONE,
-    now: now.toISO()!,
-    prices: settings.prices,
-    glazes: settings.glazes,
-    allergens: { dough: DEFAULT_DOUGH_ALLERGENS },
-  });
-  // a cut-off customers can read: rounded down to the quarter hour
-  const cutoff = DateTime.fromISO(plan.preorderCutoffAt).setZone(DEMO_TIME_ZONE).startOf('minute');
-  const cutoffAt = cutoff.minus({ minutes: cutoff.minute % 15 }).toJSDate();
+  const cutoffAt = cutoffFromSchedule(settings, formula, firstPickup.toISO()!, DEMO_TIME_ZONE, 120, now.toJSDate());
   return { date, status: 'published', ordersOpenAt: now.minus({ days: 3 }).toJSDate(), cutoffAt };
 }
 

@@ -18,6 +18,7 @@ import { waitlistRouter } from './routes/waitlist.js';
 import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
 import { productionRouter } from './routes/production.js';
+import { setupRouter } from './routes/setup.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -106,6 +107,7 @@ export function createApp(config: Config) {
   app.use(waitlistRouter);
   app.use(staffOrdersRouter);
   app.use(productionRouter);
+  app.use(setupRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

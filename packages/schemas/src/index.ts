@@ -4,3 +4,4 @@ export * from './bake-days.js';
 export * from './orders.js';
 export * from './pricing.js';
 export * from './production.js';
+export * from './setup.js';

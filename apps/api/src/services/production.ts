@@ -199,6 +199,36 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   };
 }
 
+/**
+ * When pre-orders should close for a bake day: the schedule's first step
+ * (building the starter), worked back from the first pickup for a full day's
+ * pieces, less the baker's margin, rounded down to the quarter hour so
+ * customers can read it. Pure: settings and formula are passed in.
+ */
+export function cutoffFromSchedule(
+  settings: Pick<ProductionSettingsInput, 'spare' | 'equipment' | 'schedule' | 'roomTempC' | 'prices' | 'glazes'>,
+  formula: Formula,
+  firstPickupStartsAt: string,
+  timeZone: string,
+  rings: number,
+  now: Date,
+): Date {
+  const plan = planBake(
+    planInput(settings as ProductionSettingsInput, formula, rings > 0 ? [{ menuItemId: 'full-day', name: 'A full day', kind: 'ring', glaze: null, quantity: rings }] : [], {
+      firstPickupStartsAt,
+      timeZone,
+      now: now.toISOString(),
+    }, []),
+  );
+  const cutoff = DateTime.fromISO(plan.preorderCutoffAt).setZone(timeZone).startOf('minute');
+  return cutoff.minus({ minutes: cutoff.minute % 15 }).toJSDate();
+}
+
+/** The current settings and formula, for working out a new bake day's cut-off. */
+export async function currentPlanningBasis() {
+  return { settings: await getProductionSettings(), formula: (await latestFormula()).formula as Formula };
+}
+
 /** Moves a bake day's sheet to another formula version, on purpose. */
 export async function pinFormula(userId: string, bakeDayId: string, formulaVersionId: string) {
   const [day, version] = await Promise.all([BakeDay.findByPk(bakeDayId), FormulaVersion.findByPk(formulaVersionId)]);

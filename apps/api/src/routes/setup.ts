@@ -1,0 +1,30 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { changeRoleSchema, createBakeDaySchema, staffMemberInputSchema } from '@fryline/schemas';
+import { currentUser, requireRole } from '../middleware/auth.js';
+import { validate, valid } from '../middleware/validate.js';
+import { addStaff, changeRole, createBakeDay, listMenuItems, listStaff } from '../services/setup.js';
+
+export const setupRouter = Router();
+
+setupRouter.get('/api/staff/menu-items', requireRole('baker'), async (_req, res) => {
+  res.json(await listMenuItems());
+});
+
+setupRouter.post('/api/staff/bake-days', requireRole('owner'), validate('body', createBakeDaySchema), async (req, res) => {
+  res.status(201).json(await createBakeDay(currentUser(req), valid(res, 'body'), new Date()));
+});
+
+setupRouter.get('/api/staff/members', requireRole('owner'), async (_req, res) => {
+  res.json(await listStaff());
+});
+
+setupRouter.post('/api/staff/members', requireRole('owner'), validate('body', staffMemberInputSchema), async (req, res) => {
+  res.status(201).json(await addStaff(currentUser(req), valid(res, 'body')));
+});
+
+setupRouter.patch('/api/staff/members/:id', requireRole('owner'), validate('params', z.object({ id: z.uuid() })), validate('body', changeRoleSchema), async (req, res) => {
+  const member = await changeRole(currentUser(req), valid<{ id: string }>(res, 'params').id, valid<z.infer<typeof changeRoleSchema>>(res, 'body').role);
+  if (member) res.json(member);
+  else res.status(204).end();
+});
