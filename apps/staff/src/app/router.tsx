@@ -5,6 +5,8 @@ import { HomeRoute } from './routes/home-route';
 import { SectionRoute } from './routes/section-route';
 import { NotFoundRoute } from './routes/not-found-route';
 import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
+import { RoleGuard } from '../features/session/components/role-guard';
+import { AnnounceBakeDayPage } from '../features/bake-days/components/announce-bake-day-page';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */
 export function AppRoutes() {
@@ -15,6 +17,14 @@ export function AppRoutes() {
         {sections.map((section) => (
           <Route key={section.path} path={section.path} element={<SectionRoute section={section} />} />
         ))}
+        <Route
+          path="bake-days/new"
+          element={
+            <RoleGuard minRole="owner">
+              <AnnounceBakeDayPage />
+            </RoleGuard>
+          }
+        />
         <Route path="bake-days/:bakeDayId" element={<BakeDayOrdersRoute />} />
         <Route path="*" element={<NotFoundRoute />} />
       </Route>

@@ -25,9 +25,8 @@ export const plannedPages: Record<string, PlannedPage> = {
     intro: 'Dates, places, pickup windows and capacity.',
     arrivesWith: "the owner's setup work",
     will: [
-      'Setting up a bake day: date, place, pickup windows, that day’s menu',
-      'Capacity worked out from the equipment, which you can lower',
-      'When pre-orders open, and the cut-off when the dough must be mixed',
+      'Changing a bake day after it is announced: place, pickup windows, that day’s menu and prices',
+      'Finding drafts again and publishing them',
     ],
   },
   menu: {
@@ -37,14 +36,6 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Flavour and glaze combinations, for rings and for holes',
       'The allergens of each item, shown to customers before they pay',
       'Box sizes (dozen, half dozen, bag of holes), their prices and any extra charge per item',
-    ],
-  },
-  staff: {
-    intro: 'Who can sign in to the staff side, and what each person may do.',
-    arrivesWith: "the owner's setup work",
-    will: [
-      'Everyone on the team with their role: counter, baker or owner',
-      'Adding a person by their Google e-mail address, changing a role, removing access',
     ],
   },
   sales: {

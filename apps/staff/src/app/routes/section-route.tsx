@@ -8,6 +8,7 @@ import { BakeDaysPage } from '../../features/bake-days/components/bake-days-page
 import { EquipmentPage } from '../../features/equipment/components/equipment-page';
 import { FormulaPage } from '../../features/formula/components/formula-page';
 import { ProductionPage } from '../../features/production/components/production-page';
+import { StaffPage } from '../../features/staff-members/components/staff-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
@@ -15,6 +16,7 @@ const builtPages: Record<string, ReactNode> = {
   production: <ProductionPage />,
   formula: <FormulaPage />,
   equipment: <EquipmentPage />,
+  staff: <StaffPage />,
 };
 
 export function SectionRoute({ section }: { section: StaffSection }) {
