@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount } from '../support/browser.js';
+import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -33,7 +33,7 @@ describe('the owner refunds part of an order, then the rest', () => {
     await page.getByLabel(/security code/i).fill('123');
     await page.getByRole('button', { name: /^pay/i }).click();
     await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
-    await context.clearCookies();
+    await forgetSession(browser.page, context);
 
     // the owner finds it and refunds $5.00, then the rest
     await page.goto(`${appUrl}/staff/`);

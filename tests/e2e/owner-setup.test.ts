@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { DateTime } from 'luxon';
-import { openBrowser, chooseAccount } from '../support/browser.js';
+import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -42,7 +42,7 @@ describe('the owner announces a bake day and adds a helper', () => {
     await add.getByRole('button', { name: /add to the staff/i }).click();
     await page.getByRole('article', { name: /stall helper/i }).or(page.getByText('Stall Helper')).first().waitFor();
 
-    await context.clearCookies();
+    await forgetSession(browser.page, context);
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'stall.helper@example.test');

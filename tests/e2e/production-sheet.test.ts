@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount } from '../support/browser.js';
+import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -28,7 +28,7 @@ describe("the baker's night-before sheet", () => {
       data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0]!.id, boxes: [{ size: 'dozen', items: [{ menuItemId: ring.id, quantity: 12 }] }] },
     });
     expect(held.status()).toBe(201);
-    await context.clearCookies();
+    await forgetSession(browser.page, context);
 
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
@@ -75,7 +75,7 @@ describe("the baker's night-before sheet", () => {
 
   it('the counter cannot open the sheet', async () => {
     const { context } = browser;
-    await context.clearCookies();
+    await forgetSession(browser.page, context);
     const page = await context.newPage();
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();

@@ -34,3 +34,12 @@ export async function chooseAccount(page: Page, email: string) {
     await page.getByRole('button', { name: /continue|sign in/i }).click();
   }
 }
+
+/**
+ * Leaves the current page (so nothing still polling can set a cookie again)
+ * and forgets every cookie: the next sign-in starts from nothing.
+ */
+export async function forgetSession(page: Page, context: BrowserContext) {
+  await page.goto('about:blank');
+  await context.clearCookies();
+}
