@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { FieldShell, fieldAria } from '../../../components/field-shell';
 
 /** What the input inside a field needs: its id, its look, and pointers to its help line and error. */
 export interface FieldInputProps {
@@ -29,24 +30,9 @@ export function Field({
   className?: string;
   children: (input: FieldInputProps) => ReactNode;
 }) {
-  const describedBy = [help && `${id}-help`, error && `${id}-error`].filter(Boolean).join(' ') || undefined;
   return (
-    <div className={className}>
-      <label htmlFor={id} className="field-label">
-        {label}
-        {optional && <span className="font-semibold text-muted"> · optional</span>}
-      </label>
-      {children({ id, className: 'field-input', 'aria-invalid': error ? true : undefined, 'aria-describedby': describedBy })}
-      {help && (
-        <p id={`${id}-help`} className="mt-1 text-sm text-muted">
-          {help}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} className="field-error">
-          {error}
-        </p>
-      )}
-    </div>
+    <FieldShell id={id} label={label} optional={optional} help={help} error={error} className={className}>
+      {children({ id, className: 'field-input', ...fieldAria(id, help, error) })}
+    </FieldShell>
   );
 }

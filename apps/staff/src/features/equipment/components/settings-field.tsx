@@ -3,6 +3,7 @@ import { get, useController, type UseFormReturn } from 'react-hook-form';
 import type { ProductionSettingsInput } from '@fryline/schemas';
 import { tempFromUnit, tempSymbol, tempToUnit, trimmed, type TempUnit } from '../../../lib/units';
 import type { SettingsField as FieldDef, SettingsPath } from '../model/settings-fields';
+import { FieldShell, fieldAria } from '../../../components/field-shell';
 
 export type SettingsForm = UseFormReturn<ProductionSettingsInput>;
 
@@ -15,51 +16,7 @@ export function fieldError(form: SettingsForm, name: string): string | undefined
   return (get(form.formState.errors, name) as { message?: string } | undefined)?.message;
 }
 
-/** What an input needs to point at its help line and error. */
-export function fieldAria(id: string, help: unknown, error: string | undefined) {
-  const described = [help && `${id}-help`, error && `${id}-error`].filter(Boolean).join(' ') || undefined;
-  return { 'aria-invalid': error ? true : undefined, 'aria-describedby': described };
-}
-
-/** A label (with its unit), the input, a help line and the error under it. */
-export function FieldShell({
-  id,
-  label,
-  unit,
-  optional,
-  help,
-  error,
-  children,
-}: {
-  id: string;
-  label: ReactNode;
-  unit?: string;
-  optional?: boolean;
-  help?: ReactNode;
-  error?: string;
-  children: ReactNode;
-}) {
-  return (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {label}
-        {unit && <span className="font-semibold text-muted"> ({unit})</span>}
-        {optional && <span className="font-semibold text-muted"> · optional</span>}
-      </label>
-      {children}
-      {help && (
-        <p id={`${id}-help`} className="mt-1 text-sm text-muted">
-          {help}
-        </p>
-      )}
-      {error && (
-        <p id={`${id}-error`} className="field-error">
-          {error}
-        </p>
-      )}
-    </div>
-  );
-}
+export { FieldShell, fieldAria };
 
 /** One numeric setting with its label, unit, help line and error. */
 export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; field: FieldDef; tempUnit: TempUnit }) {
