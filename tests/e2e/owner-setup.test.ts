@@ -52,4 +52,26 @@ describe('the owner announces a bake day and adds a helper', () => {
     await page.goto(`${appUrl}/`);
     await page.getByText('Granary courtyard').first().waitFor();
   });
+
+  it('a draft stays out of the shop until the owner publishes it from Drafts', async () => {
+    const { page } = browser;
+    await forgetSession(page, browser.context);
+    await page.goto(`${appUrl}/staff/`);
+    await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
+    await chooseAccount(page, 'owner@fryline.test');
+    await page.getByRole('heading', { name: /Owner — overview/ }).waitFor();
+    await page.goto(`${appUrl}/staff/bake-days/new`);
+    const date = DateTime.now().setZone('America/Denver').plus({ days: 15 }).toISODate()!;
+    const when = page.getByRole('group', { name: /when and where/i });
+    await when.getByLabel(/^date$/i).fill(date);
+    await when.getByLabel(/^time zone$/i).selectOption('America/Denver');
+    await when.getByLabel(/^place$/i).fill('Quiet orchard gate');
+    await page.getByRole('button', { name: /save as draft/i }).click();
+    await page.getByText(/as a draft\. Customers do not see it\./).waitFor();
+    const shopPlaces = async () => ((await (await page.request.get(`${appUrl}/api/bake-days`)).json()) as Array<{ place: string }>).map((d) => d.place);
+    expect(await shopPlaces()).not.toContain('Quiet orchard gate');
+    const drafts = page.getByRole('region', { name: /^drafts$/i });
+    await drafts.getByRole('button', { name: /^publish/i }).first().click();
+    await expect.poll(shopPlaces).toContain('Quiet orchard gate');
+  });
 });

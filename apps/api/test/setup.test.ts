@@ -67,6 +67,19 @@ describe('the owner announces a bake day', () => {
     expect(await BakeDay.count()).toBe(before);
   });
 
+  it('keeps a draft away from customers until the owner publishes it', async () => {
+    const draft = await owner.send('POST', '/api/staff/bake-days', await newDayBody({ publish: false, place: 'Draft corner' }));
+    expect(draft.status).toBe(201);
+    const shopIds = async () => ((await (await fetch(`${stack.url}/api/bake-days`)).json()) as Array<{ id: string }>).map((d) => d.id);
+    expect(await shopIds()).not.toContain(draft.body.id);
+    expect((await owner.getJson('/api/staff/bake-days/drafts')).body.map((d: any) => d.id)).toEqual([draft.body.id]);
+    const published = await owner.send('POST', `/api/staff/bake-days/${draft.body.id}/publish`);
+    expect(published.status).toBe(200);
+    expect(published.body.status).toBe('open');
+    expect(await shopIds()).toContain(draft.body.id);
+    expect((await owner.getJson('/api/staff/bake-days/drafts')).body).toEqual([]);
+  });
+
   it('asks before offering more than the equipment makes, and only the owner may create', async () => {
     const tooMany = await owner.send('POST', '/api/staff/bake-days', await newDayBody({ ringCapacity: 5000 }));
     expect(tooMany.status).toBe(409);

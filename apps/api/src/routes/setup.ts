@@ -3,7 +3,8 @@ import { z } from 'zod';
 import { changeRoleSchema, createBakeDaySchema, staffMemberInputSchema } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { addStaff, changeRole, createBakeDay, listMenuItems, listStaff } from '../services/setup.js';
+import { addStaff, changeRole, createBakeDay, listMenuItems, listStaff, publishBakeDay } from '../services/setup.js';
+import { listDrafts } from '../services/bake-days.js';
 
 export const setupRouter = Router();
 
@@ -13,6 +14,14 @@ setupRouter.get('/api/staff/menu-items', requireRole('baker'), async (_req, res)
 
 setupRouter.post('/api/staff/bake-days', requireRole('owner'), validate('body', createBakeDaySchema), async (req, res) => {
   res.status(201).json(await createBakeDay(currentUser(req), valid(res, 'body'), new Date()));
+});
+
+setupRouter.get('/api/staff/bake-days/drafts', requireRole('owner'), async (_req, res) => {
+  res.json(await listDrafts(new Date()));
+});
+
+setupRouter.post('/api/staff/bake-days/:id/publish', requireRole('owner'), validate('params', z.object({ id: z.uuid() })), async (req, res) => {
+  res.json(await publishBakeDay(currentUser(req), valid<{ id: string }>(res, 'params').id, new Date()));
 });
 
 setupRouter.get('/api/staff/members', requireRole('owner'), async (_req, res) => {

@@ -80,6 +80,12 @@ export async function listPast(now: Date, days = 60): Promise<BakeDayView[]> {
   return views.filter((v) => v.status === 'done');
 }
 
+/** For the owner: drafts not yet shown to customers, soonest first. */
+export async function listDrafts(now: Date): Promise<BakeDayView[]> {
+  const rows = await BakeDay.findAll({ where: { status: 'draft' }, include, order: [['date', 'ASC']] });
+  return Promise.all(rows.map((d) => toView(d, now)));
+}
+
 export async function getBakeDay(id: string, now: Date): Promise<BakeDayView> {
   const day = await BakeDay.findByPk(id, { include });
   if (!day || day.status === 'draft') throw notFound('Bake day');

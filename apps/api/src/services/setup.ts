@@ -120,3 +120,17 @@ export async function changeRole(owner: Me, userId: string, role: Me['role']): P
     return role === 'customer' ? null : toMember(user);
   });
 }
+
+/** Shows a draft bake day to customers; its cut-off must still be ahead. */
+export async function publishBakeDay(owner: Me, bakeDayId: string, now: Date): Promise<BakeDayView> {
+  const day = await BakeDay.findByPk(bakeDayId, { include: ['pickupWindows', 'boxes', { model: MenuItem, as: 'menuItems', through: { attributes: [] } }] });
+  if (!day) throw notFound('Bake day');
+  if (day.status === 'published') return toView(day, now);
+  if (day.status !== 'draft') throw new AppError('not_draft', `This bake day is ${day.status}`, 409);
+  if (day.cutoffAt <= now) throw new AppError('too_late', 'Its cut-off has passed; announce it again with a later date or cut-off', 409);
+  await database().transaction(async (transaction) => {
+    await day.update({ status: 'published' }, { transaction });
+    await audit({ actorId: owner.id, action: 'bake_day.published', subjectType: 'bake_day', subjectId: day.id }, transaction);
+  });
+  return toView(day, now);
+}

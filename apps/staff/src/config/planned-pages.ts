@@ -26,7 +26,6 @@ export const plannedPages: Record<string, PlannedPage> = {
     arrivesWith: "the owner's setup work",
     will: [
       'Changing a bake day after it is announced: place, pickup windows, that day’s menu and prices',
-      'Finding drafts again and publishing them',
     ],
   },
   menu: {

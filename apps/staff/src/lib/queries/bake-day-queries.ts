@@ -12,6 +12,13 @@ export const bakeDayQueries = {
       staleTime: 10_000,
       refetchInterval: 60_000,
     }),
+  /** Bake days saved as drafts, not yet shown to customers (owner). */
+  drafts: () =>
+    queryOptions({
+      queryKey: [...queryRoots.bakeDays, 'drafts'] as const,
+      queryFn: () => api.get<BakeDayView[]>('/api/staff/bake-days/drafts'),
+      staleTime: 10_000,
+    }),
   /** Bake days of the last weeks, newest first: for late refunds and no-shows. */
   past: () =>
     queryOptions({

@@ -242,7 +242,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
       <div className="flex flex-col gap-3">
         <p id={id('publish-help')} className="text-sm text-muted">
           Publishing puts the bake day in the shop: customers can pre-order from the time orders open. A draft is
-          stored but not shown to customers, nor in the lists on the Bake days page.
+          kept under Drafts on the Bake days page, not shown to customers until you publish it.
         </p>
         <div className="flex flex-col gap-3 sm:flex-row sm:flex-wrap sm:items-center">
           <button

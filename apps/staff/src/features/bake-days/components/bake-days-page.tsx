@@ -4,6 +4,7 @@ import { plannedPages } from '../../../config/planned-pages';
 import { AnnouncedNotice } from './announced-notice';
 import { CapacityTable } from './capacity-table';
 import { PastBakeDays } from './past-bake-days';
+import { DraftBakeDays } from './draft-bake-days';
 
 export function BakeDaysPage() {
   const plan = plannedPages['bake-days'];
@@ -17,6 +18,7 @@ export function BakeDaysPage() {
         </Link>
       </div>
       <CapacityTable />
+      <DraftBakeDays />
       <PastBakeDays />
       {plan && (
         <section aria-labelledby="bake-days-later" className="card border-dashed">
