@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { OrderStatus, RefundRequest } from '@fryline/schemas';
+import type { OrderStatus, RefundRequest, StaffOrderView } from '@fryline/schemas';
 import { api } from '../../../lib/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
@@ -29,6 +29,15 @@ export function useRefundOrder() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: postRefund,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryRoots.bakeDays }),
+    onSuccess: (made) => {
+      // Put the server's new figures into every cached order list at once, so a
+      // dialog reopened before the refetch lands starts from the right amount.
+      queryClient.setQueriesData<StaffOrderView[]>({ queryKey: queryRoots.bakeDays }, (orders) =>
+        Array.isArray(orders) && orders.some((o) => o?.id === made.orderId && 'refundedCents' in o)
+          ? orders.map((o) => (o.id === made.orderId ? { ...o, status: made.order.status, refundedCents: made.order.refundedCents } : o))
+          : orders,
+      );
+      return queryClient.invalidateQueries({ queryKey: queryRoots.bakeDays });
+    },
   });
 }
