@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
+import { openBrowser, chooseAccount } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -11,7 +11,7 @@ afterAll(async () => browser.close());
 
 describe('the owner refunds part of an order, then the rest', () => {
   it('from the bake day’s order list, with the figures right after each refund', async () => {
-    const { page, context } = browser;
+    let { page } = browser;
     // a customer pays for a half dozen on the second bake day
     await page.goto(`${appUrl}/`);
     await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
@@ -33,7 +33,7 @@ describe('the owner refunds part of an order, then the rest', () => {
     await page.getByLabel(/security code/i).fill('123');
     await page.getByRole('button', { name: /^pay/i }).click();
     await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
-    await forgetSession(browser.page, context);
+    ({ page } = await browser.fresh()); // a new person: their own cookies
 
     // the owner finds it and refunds $5.00, then the rest
     await page.goto(`${appUrl}/staff/`);

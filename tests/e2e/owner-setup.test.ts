@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { DateTime } from 'luxon';
-import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
+import { openBrowser, chooseAccount } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -12,7 +12,7 @@ afterAll(async () => browser.close());
 
 describe('the owner announces a bake day and adds a helper', () => {
   it('the new day shows in the shop, and the helper signs in as counter', async () => {
-    const { page, context } = browser;
+    let { page } = browser;
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'owner@fryline.test');
@@ -42,7 +42,7 @@ describe('the owner announces a bake day and adds a helper', () => {
     await add.getByRole('button', { name: /add to the staff/i }).click();
     await page.getByRole('article', { name: /stall helper/i }).or(page.getByText('Stall Helper')).first().waitFor();
 
-    await forgetSession(browser.page, context);
+    ({ page } = await browser.fresh()); // a new person: their own cookies
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'stall.helper@example.test');
@@ -54,8 +54,7 @@ describe('the owner announces a bake day and adds a helper', () => {
   });
 
   it('a draft stays out of the shop until the owner publishes it from Drafts', async () => {
-    const { page } = browser;
-    await forgetSession(page, browser.context);
+    const { page } = await browser.fresh();
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'owner@fryline.test');

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
+import { openBrowser, chooseAccount } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -13,7 +13,7 @@ const OUNCE_G = 28.349523125; // NIST SP 811: 1 oz = 28.349523125 g
 
 describe("the baker's night-before sheet", () => {
   it('a baker opens the production sheet, switches units, and the formula page saves a new version', async () => {
-    const { page, context } = browser;
+    let { page } = browser;
     // a customer holds a dozen, so tonight's sheet has something to make
     await page.goto(`${appUrl}/`);
     await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
@@ -28,7 +28,7 @@ describe("the baker's night-before sheet", () => {
       data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0]!.id, boxes: [{ size: 'dozen', items: [{ menuItemId: ring.id, quantity: 12 }] }] },
     });
     expect(held.status()).toBe(201);
-    await forgetSession(browser.page, context);
+    ({ page } = await browser.fresh()); // a new person: their own cookies
 
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
@@ -74,9 +74,7 @@ describe("the baker's night-before sheet", () => {
   });
 
   it('the counter cannot open the sheet', async () => {
-    const { context } = browser;
-    await forgetSession(browser.page, context);
-    const page = await context.newPage();
+    const { page } = await browser.fresh();
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'counter@fryline.test');

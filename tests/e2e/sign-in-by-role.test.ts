@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount, forgetSession } from '../support/browser.js';
+import { openBrowser, chooseAccount } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -25,9 +25,7 @@ describe('signing in through the account chooser lands each role on its home', (
     ['counter@fryline.test', /Counter — pickups/],
   ] as const) {
     it(`${email} signs in from the staff app and sees their home`, async () => {
-      const { context } = browser;
-      await forgetSession(browser.page, context);
-      const page = await context.newPage();
+      const { page } = await browser.fresh();
       await page.goto(`${appUrl}/staff/`);
       await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
       await page.getByRole('heading', { name: /choose an account/i }).waitFor();
@@ -39,9 +37,7 @@ describe('signing in through the account chooser lands each role on its home', (
   }
 
   it('a customer signs in from the shop and is kept out of the staff app', async () => {
-    const { context } = browser;
-    await forgetSession(browser.page, context);
-    const page = await context.newPage();
+    const { page } = await browser.fresh();
     await page.goto(`${appUrl}/`);
     await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
     await chooseAccount(page, 'customer@fryline.test');
@@ -54,9 +50,7 @@ describe('signing in through the account chooser lands each role on its home', (
   });
 
   it('a denied consent lands on the sign-in page with an explanation and no session', async () => {
-    const { context } = browser;
-    await forgetSession(browser.page, context);
-    const page = await context.newPage();
+    const { page } = await browser.fresh();
     await page.goto(`${appUrl}/`);
     await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
     await page.getByRole('button', { name: /deny/i }).click();

@@ -1,26 +1,33 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
-/** Debian's Chromium with a fresh profile, headless, kept off the network. */
-export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
-  const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'fryline-e2e-'));
-  const context = await chromium.launchPersistentContext(profile, {
+/**
+ * Debian's Chromium, headless and kept off the network. Each `fresh()` is a
+ * new browser context (its own cookies), so one person's late responses can
+ * never sign the next person in.
+ */
+export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<{
+  page: Page;
+  context: BrowserContext;
+  fresh(): Promise<{ page: Page; context: BrowserContext }>;
+  close(): Promise<void>;
+}> {
+  const browser: Browser = await chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
-    viewport,
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
-  const page = context.pages()[0] ?? (await context.newPage());
+  const fresh = async () => {
+    const context = await browser.newContext({ viewport });
+    return { context, page: await context.newPage() };
+  };
+  const first = await fresh();
   return {
-    context,
-    page,
+    ...first,
+    fresh,
     async close() {
-      await context.close();
-      fs.rmSync(profile, { recursive: true, force: true });
+      await browser.close();
     },
   };
 }
@@ -35,11 +42,3 @@ export async function chooseAccount(page: Page, email: string) {
   }
 }
 
-/**
- * Leaves the current page (so nothing still polling can set a cookie again)
- * and forgets every cookie: the next sign-in starts from nothing.
- */
-export async function forgetSession(page: Page, context: BrowserContext) {
-  await page.goto('about:blank');
-  await context.clearCookies();
-}
