@@ -7,10 +7,9 @@ import { getOffer, joinWaitlist, leaveWaitlist, listMyWaitlist } from '../servic
 
 export const waitlistRouter = Router();
 
-const joinBody = joinWaitlistSchema;
 
-waitlistRouter.post('/api/bake-days/:id/waitlist', requireUser, validate('params', z.object({ id: z.uuid() })), validate('body', joinBody), async (req, res) => {
-  const body = valid<z.infer<typeof joinBody>>(res, 'body');
+waitlistRouter.post('/api/bake-days/:id/waitlist', requireUser, validate('params', z.object({ id: z.uuid() })), validate('body', joinWaitlistSchema), async (req, res) => {
+  const body = valid<z.infer<typeof joinWaitlistSchema>>(res, 'body');
   res.status(201).json(await joinWaitlist(currentUser(req), valid<{ id: string }>(res, 'params').id, body.rings, body.holes));
 });
 

@@ -18,7 +18,8 @@ export function viewStatus(day: Pick<BakeDay, 'status' | 'ordersOpenAt' | 'cutof
   return 'closed';
 }
 
-const include = [
+/** Everything a bake day's view needs: its windows, boxes and menu. */
+export const bakeDayInclude = [
   { model: PickupWindow, as: 'pickupWindows' },
   { model: BakeDayBox, as: 'boxes' },
   { model: MenuItem, as: 'menuItems', through: { attributes: [] } },
@@ -65,29 +66,34 @@ export async function listUpcoming(now: Date): Promise<BakeDayView[]> {
   const from = DateTime.fromJSDate(now).minus({ days: 1 }).toISODate()!;
   const days = await BakeDay.findAll({
     where: { status: { [Op.in]: ['published', 'done'] }, date: { [Op.gte]: from } },
-    include,
+    include: bakeDayInclude,
     order: [['date', 'ASC']],
   });
   const views = await Promise.all(days.map((d) => toView(d, now)));
   return views.filter((v) => v.status !== 'done');
 }
 
-/** For the staff: recent past bake days (newest first), drafts included, within `days` days. */
+/** For the staff: bake days of the last `days` days that are over, newest first. */
 export async function listPast(now: Date, days = 60): Promise<BakeDayView[]> {
   const from = DateTime.fromJSDate(now).minus({ days }).toISODate()!;
-  const rows = await BakeDay.findAll({ where: { date: { [Op.gte]: from } }, include, order: [['date', 'DESC']] });
+  const rows = await BakeDay.findAll({ where: { date: { [Op.gte]: from } }, include: bakeDayInclude, order: [['date', 'DESC']] });
   const views = await Promise.all(rows.map((d) => toView(d, now)));
   return views.filter((v) => v.status === 'done');
 }
 
 /** For the owner: drafts not yet shown to customers, soonest first. */
 export async function listDrafts(now: Date): Promise<BakeDayView[]> {
-  const rows = await BakeDay.findAll({ where: { status: 'draft' }, include, order: [['date', 'ASC']] });
+  const rows = await BakeDay.findAll({ where: { status: 'draft' }, include: bakeDayInclude, order: [['date', 'ASC']] });
   return Promise.all(rows.map((d) => toView(d, now)));
 }
 
+/** One bake day with its windows, boxes and menu, or null. */
+export function findBakeDay(id: string) {
+  return BakeDay.findByPk(id, { include: bakeDayInclude });
+}
+
 export async function getBakeDay(id: string, now: Date): Promise<BakeDayView> {
-  const day = await BakeDay.findByPk(id, { include });
+  const day = await findBakeDay(id);
   if (!day || day.status === 'draft') throw notFound('Bake day');
   return toView(day, now);
 }

@@ -10,8 +10,8 @@ import { refundPayment } from './checkout.js';
 import { offerFreedCapacity } from './waitlist.js';
 import { audit } from './audit.js';
 
-/** Thrown by a handler to roll back and have the sender retry later. */
-class RetryLater extends Error {}
+/** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
+class NotRetaken extends Error {}
 
 /**
  * Applies one verified payment event. The event id is recorded in the same
@@ -93,12 +93,12 @@ async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transa
       // Paid after its hold lapsed: keep it if the pieces are still there, else refund in full.
       const retaken = await database()
         .transaction({ transaction }, async (savepoint) => {
-          if (!(await takeCapacity(order.bakeDayId, order.rings, order.holes, savepoint, { ignoreCutoff: true }))) throw new RetryLater('no pieces');
-          if (!(await takeWindowSlot(order.bakeDayId, order.pickupWindowId, savepoint))) throw new RetryLater('window full');
+          if (!(await takeCapacity(order.bakeDayId, order.rings, order.holes, savepoint, { ignoreCutoff: true }))) throw new NotRetaken('no pieces');
+          if (!(await takeWindowSlot(order.bakeDayId, order.pickupWindowId, savepoint))) throw new NotRetaken('window full');
           return true;
         })
         .catch((err) => {
-          if (err instanceof RetryLater) return false;
+          if (err instanceof NotRetaken) return false;
           throw err;
         });
       if (retaken) {

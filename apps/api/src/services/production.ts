@@ -6,9 +6,10 @@ import {
 } from '@fryline/production';
 import type { FormulaInput, PlanMeta, ProductionSettingsInput } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
-import { BakeDay, BakeDayBox, FormulaVersion, MenuItem, PickupWindow, ProductionSettings } from '../db/models/index.js';
+import { BakeDay, FormulaVersion, ProductionSettings } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
 import { audit } from './audit.js';
+import { findBakeDay } from './bake-days.js';
 
 /** Fallback prices (cents per kg) when the owner has entered none: our own round figures. */
 const DEFAULT_PRICES: ProductionSettingsInput['prices'] = { centsPerKg: {}, fryingOilCentsPerKg: 300, oilBakesPerFill: 3 };
@@ -117,9 +118,7 @@ interface LineRow {
  * The first time a day is planned it is pinned to the current formula version.
  */
 export async function planForBakeDay(bakeDayId: string, now: Date): Promise<PlanResponse> {
-  const day = await BakeDay.findByPk(bakeDayId, {
-    include: [{ model: PickupWindow, as: 'pickupWindows' }, { model: BakeDayBox, as: 'boxes' }, { model: MenuItem, as: 'menuItems', through: { attributes: [] } }],
-  });
+  const day = await findBakeDay(bakeDayId);
   if (!day) throw notFound('Bake day');
   const windows = [...(day.pickupWindows ?? [])].sort((a, b) => a.startsAt.getTime() - b.startsAt.getTime());
   if (!windows[0]) throw new AppError('no_pickup_window', 'This bake day has no pickup window to plan back from', 409);

@@ -5,7 +5,7 @@ import { database } from '../db/sequelize.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
 import { audit } from './audit.js';
-import { toView } from './bake-days.js';
+import { findBakeDay, toView } from './bake-days.js';
 import { currentPlanningBasis, cutoffFromSchedule, equipmentCapacity } from './production.js';
 
 const invalidField = (field: string, message: string) => new AppError('invalid', `${field}: ${message}`, 400, { fields: { [field]: message } });
@@ -78,7 +78,7 @@ export async function createBakeDay(owner: Me, input: CreateBakeDayInput, now: D
     await audit({ actorId: owner.id, action: 'bake_day.created', subjectType: 'bake_day', subjectId: day.id, details: { date: input.date, publish: input.publish } }, transaction);
     return day.id;
   });
-  const day = await BakeDay.findByPk(id, { include: ['pickupWindows', 'boxes', { model: MenuItem, as: 'menuItems', through: { attributes: [] } }] });
+  const day = await findBakeDay(id);
   return toView(day!, now);
 }
 
@@ -123,7 +123,7 @@ export async function changeRole(owner: Me, userId: string, role: Me['role']): P
 
 /** Shows a draft bake day to customers; its cut-off must still be ahead. */
 export async function publishBakeDay(owner: Me, bakeDayId: string, now: Date): Promise<BakeDayView> {
-  const day = await BakeDay.findByPk(bakeDayId, { include: ['pickupWindows', 'boxes', { model: MenuItem, as: 'menuItems', through: { attributes: [] } }] });
+  const day = await findBakeDay(bakeDayId);
   if (!day) throw notFound('Bake day');
   if (day.status === 'published') return toView(day, now);
   if (day.status !== 'draft') throw new AppError('not_draft', `This bake day is ${day.status}`, 409);
