@@ -50,10 +50,9 @@ export async function toOrderView(order: Order, now: Date): Promise<OrderDetail>
   };
 }
 
-async function findOwnOrder(user: Me, id: string, transaction?: Transaction, lock = false): Promise<Order> {
-  const order = await Order.findOne({ where: { id, userId: user.id }, include: orderInclude, transaction });
+async function findOwnOrder(user: Me, id: string): Promise<Order> {
+  const order = await Order.findOne({ where: { id, userId: user.id }, include: orderInclude });
   if (!order) throw notFound('Order');
-  if (lock && transaction) await Order.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
   return order;
 }
 
@@ -184,19 +183,22 @@ export async function cancelOrder(user: Me, id: string, now: Date): Promise<Orde
 /** Moves a held or paid order to another pickup window of the same day that has room. */
 export async function moveOrder(user: Me, id: string, pickupWindowId: string, now: Date): Promise<OrderDetail> {
   await database().transaction(async (transaction) => {
-    const order = await findOwnOrder(user, id, transaction, true);
-    const fresh = await Order.findByPk(id, { transaction });
-    if (!fresh || !['held', 'paid'].includes(fresh.status)) throw new AppError('not_movable', 'This order can no longer be changed', 409);
-    if (now >= order.bakeDay!.cutoffAt) throw new AppError('too_late', 'Pickup windows can only be changed before the cut-off', 409);
+    // the row lock makes a move wait for a cancellation or payment in flight
+    const fresh = await Order.findOne({ where: { id, userId: user.id }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!fresh) throw notFound('Order');
+    if (!['held', 'paid'].includes(fresh.status)) throw new AppError('not_movable', 'This order can no longer be changed', 409);
+    const day = await BakeDay.findByPk(fresh.bakeDayId, { transaction });
+    if (now >= day!.cutoffAt) throw new AppError('too_late', 'Pickup windows can only be changed before the cut-off', 409);
     if (fresh.pickupWindowId === pickupWindowId) return;
-    if (!(await takeWindowSlot(order.bakeDayId, pickupWindowId, transaction))) {
-      const exists = await PickupWindow.findOne({ where: { id: pickupWindowId, bakeDayId: order.bakeDayId }, transaction });
+    if (!(await takeWindowSlot(fresh.bakeDayId, pickupWindowId, transaction))) {
+      const exists = await PickupWindow.findOne({ where: { id: pickupWindowId, bakeDayId: fresh.bakeDayId }, transaction });
       if (!exists) throw new AppError('invalid', 'pickupWindowId: not a window of this bake day', 400, { fields: { pickupWindowId: 'Not a window of this bake day' } });
       throw new AppError('window_full', 'That pickup window is full', 409, { fields: { pickupWindowId: 'This window is full' } });
     }
-    await giveBackWindowSlot(fresh.pickupWindowId, transaction);
+    const from = fresh.pickupWindowId;
+    await giveBackWindowSlot(from, transaction);
     await fresh.update({ pickupWindowId }, { transaction });
-    await audit({ actorId: user.id, action: 'order.moved', subjectType: 'order', subjectId: id, details: { from: fresh.pickupWindowId, to: pickupWindowId } }, transaction);
+    await audit({ actorId: user.id, action: 'order.moved', subjectType: 'order', subjectId: id, details: { from, to: pickupWindowId } }, transaction);
   });
   return getOrder(user, id, now);
 }
