@@ -12,7 +12,7 @@ async function main() {
   installDependencies(pnpm);
   if (!fs.existsSync('/usr/bin/chromium')) aptInstall(['chromium'], "Debian's Chromium (for the browser tests)");
 
-  const dataDir = path.join(root, '.test-data');
+  const dataDir = process.env.TEST_DATA_DIR ? path.resolve(process.env.TEST_DATA_DIR) : path.join(root, '.test-data');
   const pgPort = Number(process.env.TEST_PGPORT ?? 5434);
   // a fresh cluster every run: tests never see yesterday's data
   const previous = await ensurePostgresIfPresent(dataDir, pgPort);
