@@ -11,14 +11,13 @@ import { createApp } from '../src/app.js';
 
 export const WEBHOOK_SECRET = 'whsec_api_tests';
 
-const TABLES = [
-  'session', 'audit_log', 'outbox', 'waitlist_entries', 'refunds', 'payment_events', 'order_lines', 'order_boxes', 'orders',
-  'bake_day_boxes', 'bake_day_menu_items', 'menu_items', 'pickup_windows', 'bake_days', 'formula_versions', 'production_settings', 'shop_settings', 'users',
-];
-
-/** Fresh data for each test: every table emptied, the schema kept. */
+/** Fresh data for each test: every table but the migration log emptied, the schema kept (new tables are covered by themselves). */
 export async function resetData() {
-  await database().query(`TRUNCATE ${TABLES.map((t) => `"${t}"`).join(', ')} RESTART IDENTITY CASCADE`);
+  const [rows] = await database().query(
+    `SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'schema_migrations'`,
+  );
+  const tables = (rows as { tablename: string }[]).map((r) => `"${r.tablename}"`);
+  if (tables.length) await database().query(`TRUNCATE ${tables.join(', ')} RESTART IDENTITY CASCADE`);
 }
 
 export type Stack = Awaited<ReturnType<typeof startStack>>;

@@ -7,6 +7,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 const migrations = {
   '0001-core': () => import('./migrations/0001-core.js'),
   '0002-production': () => import('./migrations/0002-production.js'),
+  '0010-bake-day-counter': () => import('./migrations/0010-bake-day-counter.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {
