@@ -11,7 +11,7 @@ interface InFlight {
   createdAt: number;
 }
 
-interface Completed {
+export interface Completed {
   state: 'completed';
   fingerprint: string;
   createdAt: number;
@@ -56,6 +56,16 @@ export class IdempotencyStore {
 
   clear(): void {
     this.entries.clear();
+  }
+
+  /** Answered keys (in-flight ones are not worth keeping across a restart: their request died with it). */
+  snapshot(): Array<[string, Completed]> {
+    return [...this.entries].filter((pair): pair is [string, Completed] => pair[1].state === 'completed');
+  }
+
+  restore(entries: ReadonlyArray<[string, Completed]>): void {
+    this.entries.clear();
+    for (const [scope, entry] of entries) this.entries.set(scope, entry);
   }
 
   private purge(): void {

@@ -35,8 +35,12 @@ try {
     webhookUrl: webhookUrl === '' ? null : webhookUrl,
     webhookSecret: env.PAYMENTS_WEBHOOK_SECRET || DEFAULT_WEBHOOK_SECRET,
     retryDelaysMs: readDelays(env.PAYMENTS_WEBHOOK_RETRY_DELAYS_MS),
+    stateFile: env.PAYMENTS_FAKE_STATE_FILE || undefined,
   });
   console.log(`[payments fake] listening on ${fake.url} (API ${fake.url}/v1, admin ${fake.url}/__admin/state)`);
+  if (env.PAYMENTS_FAKE_STATE_FILE) {
+    console.log(`[payments fake] state kept in ${env.PAYMENTS_FAKE_STATE_FILE}${fake.restored ? ` (restored ${fake.runtime.store.sessions.size} sessions)` : ' (new)'}`);
+  }
   console.log(`[payments fake] webhooks → ${webhookUrl || 'nowhere (PAYMENTS_WEBHOOK_URL is empty)'}`);
   const stop = () => {
     void fake.close().finally(() => process.exit(0));

@@ -12,6 +12,7 @@ import { eventsRouter } from './routes/events.js';
 import { balanceTransactionsRouter, chargesRouter, paymentIntentsRouter } from './routes/payments.js';
 import { refundsRouter } from './routes/refunds.js';
 import { sessionsRouter } from './routes/sessions.js';
+import { StateFile } from './persistence.js';
 import { PaymentsRuntime } from './runtime.js';
 import type { StripeEvent } from './types.js';
 import { DEFAULT_RETRY_DELAYS_MS, type DeliveryMode, type DeliveryRecord } from './webhooks.js';
@@ -55,11 +56,16 @@ function apiRouter(runtime: PaymentsRuntime, publicUrl: () => string): Router {
   return api;
 }
 
-export function createApp(runtime: PaymentsRuntime, publicUrl: () => string): Express {
+export function createApp(runtime: PaymentsRuntime, publicUrl: () => string, onChange: () => void = () => {}): Express {
   const app = express();
   app.set('query parser', 'extended');
   app.set('etag', false);
   app.disable('x-powered-by');
+  // any request may change state (reads catch up on expiries too): save after each
+  app.use((_req, res, next) => {
+    res.on('finish', onChange);
+    next();
+  });
   app.use('/v1', apiRouter(runtime, publicUrl));
   app.use('/pay', payPageRouter(runtime.store));
   app.use('/__admin', adminRouter(runtime));
@@ -109,6 +115,8 @@ export interface PaymentsFakeOptions {
   webhookSecret?: string;
   /** Waits between delivery attempts of a failed event; defaults to 1, 2, 4 and 8 seconds. */
   retryDelaysMs?: number[];
+  /** A JSON file the state is kept in (loaded at start, rewritten atomically after each change); none keeps it in memory only. */
+  stateFile?: string;
 }
 
 export interface PaymentsFake {
@@ -119,6 +127,8 @@ export interface PaymentsFake {
   publicUrl: string;
   /** The store, webhook dispatcher and idempotency keys behind the fake. */
   runtime: PaymentsRuntime;
+  /** Whether state was loaded from `stateFile` at start. */
+  restored: boolean;
   close(): Promise<void>;
   /** Forgets every object, event, key and delivery; restores the start options. */
   reset(): void;
@@ -147,8 +157,12 @@ export async function startPaymentsFake(options: PaymentsFakeOptions = {}): Prom
     endpoint: { url: options.webhookUrl ?? null, secret: options.webhookSecret ?? DEFAULT_WEBHOOK_SECRET },
     retryDelaysMs: options.retryDelaysMs ?? DEFAULT_RETRY_DELAYS_MS,
   });
+  const stateFile = options.stateFile ? new StateFile(options.stateFile, runtime) : null;
+  const restored = stateFile?.load() ?? false;
+  const changed = () => stateFile?.changed();
+  runtime.store.onEvent(changed);
   let publicUrl = options.publicUrl?.replace(/\/+$/, '') ?? '';
-  const server = createServer(createApp(runtime, () => publicUrl));
+  const server = createServer(createApp(runtime, () => publicUrl, changed));
   const address = await listen(server, options.port ?? 0, host);
   const url = urlFor(host, address.port);
   publicUrl ||= url;
@@ -168,16 +182,26 @@ export async function startPaymentsFake(options: PaymentsFakeOptions = {}): Prom
     host,
     publicUrl,
     runtime,
-    close: () =>
-      new Promise<void>((resolve, reject) => {
+    restored,
+    close: async () => {
+      await new Promise<void>((resolve, reject) => {
         clearInterval(sweeper);
         runtime.webhooks.stop();
         server.close((error) => (error ? reject(error) : resolve()));
         server.closeAllConnections();
-      }),
-    reset: () => runtime.reset(),
+      });
+      await stateFile?.close();
+    },
+    reset: () => {
+      runtime.reset();
+      changed();
+    },
     now: () => runtime.store.clock.now(),
-    advanceClock: (seconds) => runtime.advanceClock(seconds),
+    advanceClock: (seconds) => {
+      const expired = runtime.advanceClock(seconds);
+      changed();
+      return expired;
+    },
     setWebhookEndpoint: (webhookUrl, secret) => {
       runtime.webhooks.setEndpoint({ url: webhookUrl, ...(secret === undefined ? {} : { secret }) });
     },
@@ -188,6 +212,7 @@ export async function startPaymentsFake(options: PaymentsFakeOptions = {}): Prom
     events: () => runtime.store.events.newestFirst(),
     paySession: (sessionId, form) => {
       const outcome = payWithCard(runtime.store, sessionId, form);
+      changed();
       return outcome.kind === 'needs_authentication' ? finishAuthentication(runtime.store, sessionId, 'complete') : outcome;
     },
   };

@@ -42,6 +42,30 @@ export class Collection<T extends { id: string }> {
   clear(): void {
     this.items.clear();
   }
+
+  /** Every item, oldest first (the order `restore` expects). */
+  all(): T[] {
+    return [...this.items.values()];
+  }
+
+  restore(items: readonly T[]): void {
+    this.items.clear();
+    for (const item of items) this.items.set(item.id, item);
+  }
+}
+
+/** Everything the store holds, as plain JSON (see persistence.ts). */
+export interface StoreSnapshot {
+  version: 1;
+  clockOffsetSeconds: number;
+  apiVersion: string;
+  sessions: CheckoutSession[];
+  sessionInternals: Array<[string, SessionInternals]>;
+  paymentIntents: PaymentIntent[];
+  charges: Charge[];
+  refunds: Refund[];
+  balanceTransactions: BalanceTransaction[];
+  events: StripeEvent[];
 }
 
 /** What a card attempt is waiting on when the issuer asked for an extra confirmation. */
@@ -140,6 +164,35 @@ export class PaymentsStore {
       balanceTransactions: this.balanceTransactions.size,
       events: this.events.size,
     };
+  }
+
+  snapshot(): StoreSnapshot {
+    return {
+      version: 1,
+      clockOffsetSeconds: this.clock.offsetSeconds,
+      apiVersion: this.apiVersion,
+      sessions: this.sessions.all(),
+      sessionInternals: [...this.sessionInternals],
+      paymentIntents: this.paymentIntents.all(),
+      charges: this.charges.all(),
+      refunds: this.refunds.all(),
+      balanceTransactions: this.balanceTransactions.all(),
+      events: this.events.all(),
+    };
+  }
+
+  restore(snapshot: StoreSnapshot): void {
+    this.clock.reset();
+    this.clock.advance(Math.max(0, Math.floor(snapshot.clockOffsetSeconds)));
+    this.apiVersion = snapshot.apiVersion;
+    this.sessions.restore(snapshot.sessions);
+    this.sessionInternals.clear();
+    for (const [id, internals] of snapshot.sessionInternals) this.sessionInternals.set(id, internals);
+    this.paymentIntents.restore(snapshot.paymentIntents);
+    this.charges.restore(snapshot.charges);
+    this.refunds.restore(snapshot.refunds);
+    this.balanceTransactions.restore(snapshot.balanceTransactions);
+    this.events.restore(snapshot.events);
   }
 
   reset(): void {

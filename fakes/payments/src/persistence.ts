@@ -1,0 +1,109 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Completed } from './idempotency.js';
+import type { PaymentsRuntime } from './runtime.js';
+import type { StoreSnapshot } from './state.js';
+
+interface FileContents {
+  store: StoreSnapshot;
+  idempotency: Array<[string, Completed]>;
+}
+
+/**
+ * Keeps the fake's state (sessions, payment intents, charges, refunds,
+ * balance transactions, events and answered idempotency keys) in one JSON
+ * file, so a restart forgets nothing the shop's database refers to.
+ *
+ * Each save writes a temporary file beside the real one, flushes it to disk
+ * and renames it over the old one: a crash leaves either the old state or
+ * the new, never half a file. Saves are coalesced: changes made while one is
+ * being written are saved right after it.
+ */
+export class StateFile {
+  private dirty = false;
+  private writing: Promise<void> | null = null;
+  private timer: NodeJS.Timeout | null = null;
+  private closed = false;
+
+  constructor(
+    readonly file: string,
+    private readonly runtime: PaymentsRuntime,
+    private readonly delayMs = 50,
+  ) {}
+
+  /** Loads the file if there is one; returns whether anything was restored. A damaged file is refused loudly. */
+  load(): boolean {
+    if (!fs.existsSync(this.file)) return false;
+    const text = fs.readFileSync(this.file, 'utf8');
+    let contents: FileContents;
+    try {
+      contents = JSON.parse(text) as FileContents;
+    } catch (error) {
+      throw new Error(`the payments fake's state file ${this.file} is not valid JSON (${(error as Error).message}); move it away to start empty`);
+    }
+    if (contents?.store?.version !== 1) throw new Error(`the payments fake's state file ${this.file} has an unknown format`);
+    this.runtime.store.restore(contents.store);
+    this.runtime.idempotency.restore(contents.idempotency ?? []);
+    return true;
+  }
+
+  private contents(): string {
+    const contents: FileContents = { store: this.runtime.store.snapshot(), idempotency: this.runtime.idempotency.snapshot() };
+    return JSON.stringify(contents);
+  }
+
+  /** Something changed: save soon. */
+  changed(): void {
+    if (this.closed) return;
+    this.dirty = true;
+    if (this.timer || this.writing) return;
+    this.timer = setTimeout(() => {
+      this.timer = null;
+      void this.save();
+    }, this.delayMs);
+    this.timer.unref();
+  }
+
+  private async save(): Promise<void> {
+    if (this.writing) return this.writing;
+    this.writing = (async () => {
+      while (this.dirty) {
+        this.dirty = false;
+        try {
+          await writeAtomically(this.file, this.contents());
+        } catch (error) {
+          console.error(`[payments fake] could not save state to ${this.file}:`, (error as Error).message);
+          break;
+        }
+      }
+    })().finally(() => {
+      this.writing = null;
+    });
+    return this.writing;
+  }
+
+  /** Writes what is pending and stops saving. */
+  async close(): Promise<void> {
+    if (this.timer) clearTimeout(this.timer);
+    this.timer = null;
+    await this.writing;
+    if (this.dirty) {
+      this.dirty = false;
+      await writeAtomically(this.file, this.contents());
+    }
+    this.closed = true;
+  }
+}
+
+async function writeAtomically(file: string, text: string): Promise<void> {
+  await fs.promises.mkdir(path.dirname(file), { recursive: true });
+  const temp = `${file}.${process.pid}.tmp`;
+  const handle = await fs.promises.open(temp, 'w', 0o600);
+  try {
+    await handle.writeFile(text, 'utf8');
+    await handle.sync();
+  } finally {
+    await handle.close();
+  }
+  await fs.promises.rename(temp, file);
+}
