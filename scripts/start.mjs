@@ -1,6 +1,7 @@
 // `npm start`: installs what is missing, starts a project-local PostgreSQL,
 // migrates, loads the demo, builds the apps, and runs the fakes and the API.
-// Ctrl-C stops everything it started, PostgreSQL included.
+// A child that stops on its own is started again with backoff; Ctrl-C stops
+// everything it started, PostgreSQL included.
 import path from 'node:path';
 import {
   assertPortsFree, buildApps, ensurePnpm, installDependencies, log, root, SetupError, startChild, waitForHttp, run,
@@ -13,6 +14,11 @@ const num = (name, fallback) => {
   if (!/^\d+$/.test(value) || Number(value) > 65535) throw new SetupError(`${name} must be a port number (got ${JSON.stringify(value)})`);
   return Number(value);
 };
+
+/** 1 s, 2 s, 4 s … at most 30 s. */
+function restartDelayMs(failuresInARow) {
+  return Math.min(30_000, 1000 * 2 ** Math.max(0, failuresInARow - 1));
+}
 
 async function main() {
   const ports = {
@@ -28,15 +34,19 @@ async function main() {
 
   const pnpm = ensurePnpm();
   installDependencies(pnpm);
-  const pg = await ensurePostgres({ dataDir: path.join(root, '.data'), port: pgPort });
-  const children = [];
+  const dataDir = path.resolve(env.FRYLINE_DATA_DIR ?? path.join(root, '.data'));
+  const pg = await ensurePostgres({ dataDir, port: pgPort });
+  const children = new Map();
+  const restarts = new Set();
   let stopping = false;
   const stop = async (code = 0) => {
     if (stopping) return;
     stopping = true;
     log('stopping…');
-    for (const child of children) child.kill('SIGTERM');
-    await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
+    for (const timer of restarts) clearTimeout(timer);
+    const running = [...children.values()].filter((c) => c.exitCode === null && c.signalCode === null);
+    for (const child of running) child.kill('SIGTERM');
+    await Promise.all(running.map((c) => new Promise((r) => c.once('exit', r))));
     if (pg.started) {
       log('stopping PostgreSQL');
       pg.stop();
@@ -60,30 +70,44 @@ async function main() {
       PAYMENTS_FAKE_PORT: String(paymentsPort),
       PAYMENTS_FAKE_PUBLIC_URL: `http://127.0.0.1:${paymentsPort}`,
       PAYMENTS_WEBHOOK_URL: `${appUrl}/webhooks/payments`,
+      PAYMENTS_FAKE_STATE_FILE: path.join(dataDir, 'payments-fake.json'),
       MAIL_INBOX_PORT: String(inboxPort),
       SMTP_PORT: String(smtpPort),
     };
-    log('migrating and loading the demo scenario');
-    run(process.execPath, ['--import', 'tsx', 'seeds/src/setup.ts'], { env: { ...process.env, ...shared } });
     buildApps(pnpm);
 
-    const tsx = (tag, file) => {
-      const child = startChild(tag, process.execPath, ['--import', 'tsx', file], shared);
-      child.on('exit', (code, signal) => {
-        // Ctrl-C reaches the children too; give our own handler a moment to say so
-        setTimeout(() => {
-          if (!stopping) {
-            log(`${tag} stopped unexpectedly (${signal ?? `exit code ${code}`}); shutting down`);
-            stop(1);
-          }
-        }, 200);
-      });
-      children.push(child);
+    // A child that stops on its own is started again after a pause that
+    // doubles with each quick failure (1 s … 30 s); the others keep running.
+    const supervise = (tag, file) => {
+      let failures = 0;
+      const launch = () => {
+        const startedAt = Date.now();
+        const child = startChild(tag, process.execPath, ['--import', 'tsx', file], shared);
+        children.set(tag, child);
+        child.on('exit', (code, signal) => {
+          // Ctrl-C reaches the children too; give our own handler a moment to say so
+          setTimeout(() => {
+            if (stopping) return;
+            failures = Date.now() - startedAt > 30_000 ? 1 : failures + 1;
+            const delay = restartDelayMs(failures);
+            log(`${tag} stopped unexpectedly (${signal ?? `exit code ${code}`}); restarting it in ${delay / 1000} s (restart ${failures} in a row)`);
+            const timer = setTimeout(() => {
+              restarts.delete(timer);
+              if (!stopping) launch();
+            }, delay);
+            restarts.add(timer);
+          }, 200);
+        });
+      };
+      launch();
     };
-    tsx('oauth', 'fakes/oauth/src/main.ts');
-    tsx('payments', 'fakes/payments/src/main.ts');
-    tsx('mail', 'fakes/mail/src/main.ts');
-    tsx('api', 'apps/api/src/index.ts');
+    supervise('oauth', 'fakes/oauth/src/main.ts');
+    supervise('payments', 'fakes/payments/src/main.ts');
+    supervise('mail', 'fakes/mail/src/main.ts');
+    await waitForHttp(`http://127.0.0.1:${paymentsPort}/`);
+    log('migrating and loading the demo scenario');
+    run(process.execPath, ['--import', 'tsx', 'seeds/src/setup.ts'], { env: { ...process.env, ...shared } });
+    supervise('api', 'apps/api/src/index.ts');
     await waitForHttp(`${appUrl}/api/health`);
 
     console.log(`

@@ -5,10 +5,11 @@ import express from 'express';
 import helmet from 'helmet';
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
-import pg from 'pg';
+import { createPool } from './db/availability.js';
 import type { Config } from './config/env.js';
 import { configurePassport } from './integrations/passport.js';
 import { csrfProtection } from './middleware/csrf.js';
+import { rateLimits } from './middleware/rate-limits.js';
 import { errorHandler, notFoundHandler } from './middleware/errors.js';
 import { healthRouter } from './routes/health.js';
 import { authRouter } from './routes/auth.js';
@@ -22,6 +23,29 @@ import { setupRouter } from './routes/setup.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
+
+const PgStore = connectPgSimple(session);
+const TOUCH_EVERY_MS = 60 * 60 * 1000;
+
+/**
+ * The PostgreSQL session store, touching a session's expiry at most once an
+ * hour per process instead of on every request (one UPDATE saved per
+ * request; the 30-day expiry moves by at most an hour less).
+ */
+class ThrottledTouchStore extends PgStore {
+  private touched = new Map<string, number>();
+
+  override touch(sid: string, sess: session.SessionData, fn?: (err?: unknown) => void) {
+    const now = Date.now();
+    if (now - (this.touched.get(sid) ?? 0) < TOUCH_EVERY_MS) {
+      fn?.();
+      return;
+    }
+    if (this.touched.size > 50_000) this.touched.clear();
+    this.touched.set(sid, now);
+    super.touch(sid, sess, fn as never);
+  }
+}
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 
@@ -78,13 +102,18 @@ export function createApp(config: Config) {
 
   app.use(express.json({ limit: '100kb' }));
 
-  const PgStore = connectPgSimple(session);
-  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 });
+  const sessionPool = createPool(config.DATABASE_URL, 5, 'session store');
   app.use(
     session({
       name: SESSION_COOKIE,
       secret: config.SESSION_SECRET,
-      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 600 }),
+      store: new ThrottledTouchStore({
+        pool: sessionPool,
+        tableName: 'session',
+        createTableIfMissing: false,
+        pruneSessionInterval: config.JOBS === 'on' ? 600 : false,
+        errorLog: (...args: unknown[]) => console.error('[session store]', ...args),
+      }),
       resave: false,
       saveUninitialized: false,
       rolling: true,
@@ -99,7 +128,14 @@ export function createApp(config: Config) {
   );
   const passport = configurePassport(config);
   app.use(passport.session());
-  app.use(csrfProtection(SESSION_COOKIE, config.SESSION_SECRET));
+  app.use(csrfProtection(config.SESSION_SECRET));
+
+  // counted in PostgreSQL, so every API process shares the counts
+  const limits = rateLimits(config, sessionPool);
+  app.get(['/auth/google', '/auth/google/callback'], limits.signIn);
+  app.post('/api/orders', limits.orders);
+  app.post('/api/orders/:id/cancel', limits.cancel);
+  app.post('/api/bake-days/:id/waitlist', limits.waitlist);
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
   app.use(bakeDaysRouter);
@@ -119,6 +155,7 @@ export function createApp(config: Config) {
   app.use(errorHandler);
 
   return Object.assign(app, {
+    sessionPool,
     async closeResources() {
       await sessionPool.end();
     },

@@ -28,7 +28,8 @@ describe('sign-in through the provider (OAuth 2.0 authorization code + PKCE, RFC
   }
 
   it('sets the session cookie HttpOnly and SameSite=Lax (not Secure over plain http)', async () => {
-    const res = await fetch(`${stack.url}/api/csrf`);
+    // the first cookie comes with the start of sign-in (an anonymous visitor gets none)
+    const res = await fetch(`${stack.url}/auth/google`, { redirect: 'manual' });
     const cookie = res.headers.getSetCookie().find((c) => c.startsWith('fryline.sid='))!;
     expect(cookie).toMatch(/; HttpOnly/i);
     expect(cookie).toMatch(/; SameSite=Lax/i);
@@ -37,8 +38,9 @@ describe('sign-in through the provider (OAuth 2.0 authorization code + PKCE, RFC
 
   it('regenerates the session id at sign-in (no session fixation)', async () => {
     const browser = new Browser(stack.url);
-    await browser.fetch('/api/csrf');
+    await browser.fetch('/auth/google');
     const before = browser.cookieHeader();
+    expect(before).toMatch(/^fryline\.sid=/);
     await signIn(browser, 'baker@fryline.test');
     expect(browser.cookieHeader()).not.toBe(before);
   });

@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, beforeEach } from 'vitest';
 import { seedDemo } from '@fryline/seeds';
 import http from 'node:http';
+import { spawn, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import type { AddressInfo } from 'node:net';
 import { startMailFake } from '@fryline/fake-mail';
 import { startOAuthFake } from '@fryline/fake-oauth';
@@ -157,10 +160,10 @@ export async function signIn(browser: Browser, email: string, opts: { returnTo?:
  * scenario loaded. Returns the stack through a proxy, usable once the
  * file's beforeAll has run.
  */
-export function useStack(opts: { demo?: boolean } = {}): Stack {
+export function useStack(opts: { demo?: boolean; env?: Record<string, string> } = {}): Stack {
   let current: Stack | null = null;
   beforeAll(async () => {
-    current = await startStack();
+    current = await startStack(opts.env);
   });
   afterAll(async () => current?.close());
   beforeEach(async () => {
@@ -175,4 +178,45 @@ export function useStack(opts: { demo?: boolean } = {}): Stack {
       return current[key as keyof Stack];
     },
   });
+}
+
+/**
+ * A second API process (`node --import tsx src/index.ts`) on the same
+ * database and fakes as `stack`, as a deployment behind a proxy runs it.
+ * Resolves with its URL once it listens; `env` adds or overrides settings.
+ */
+export async function spawnApi(stack: Stack, env: Record<string, string> = {}): Promise<{ url: string; child: ChildProcess; output: () => string }> {
+  const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+  const child = spawn(process.execPath, ['--import', 'tsx', 'src/index.ts'], {
+    cwd: root,
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: '0',
+      JOBS: 'off',
+      PUBLIC_URL: stack.url,
+      DATABASE_URL: stack.config.DATABASE_URL,
+      SESSION_SECRET: stack.config.SESSION_SECRET,
+      STRIPE_API_URL: stack.config.STRIPE_API_URL,
+      STRIPE_SECRET_KEY: stack.config.STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: stack.config.STRIPE_WEBHOOK_SECRET,
+      OAUTH_URL: stack.config.OAUTH_URL,
+      OAUTH_CLIENT_ID: stack.config.OAUTH_CLIENT_ID,
+      OAUTH_CLIENT_SECRET: stack.config.OAUTH_CLIENT_SECRET,
+      SMTP_PORT: String(stack.config.SMTP_PORT),
+      ...env,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let out = '';
+  const url = await new Promise<string>((resolve, reject) => {
+    child.stdout!.on('data', (chunk) => {
+      out += chunk;
+      const m = /listening on .*?:(\d+)/.exec(out);
+      if (m) resolve(`http://127.0.0.1:${m[1]}`);
+    });
+    child.stderr!.on('data', (chunk) => (out += chunk));
+    child.on('exit', (code) => reject(new Error(`second API exited ${code}: ${out}`)));
+  });
+  return { url, child, output: () => out };
 }

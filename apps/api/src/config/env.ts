@@ -25,6 +25,16 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Fryline orders <orders@fryline.test>'),
     HOLD_MINUTES: z.coerce.number().int().min(1).max(120).default(10),
     JOBS: z.enum(['on', 'off']).default('on'),
+    /** Connections this process may open to PostgreSQL for queries (the session store and rate limits share a few more). */
+    DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+    /** Rate limits: hits allowed per window (sign-in per address; orders, cancellations, waitlist per customer). */
+    RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(600),
+    RATE_LIMIT_SIGNIN: z.coerce.number().int().min(1).default(60),
+    RATE_LIMIT_ORDERS: z.coerce.number().int().min(1).default(20),
+    RATE_LIMIT_CANCEL: z.coerce.number().int().min(1).default(20),
+    RATE_LIMIT_WAITLIST: z.coerce.number().int().min(1).default(20),
+    /** How long SIGTERM waits for requests in flight before closing their connections. */
+    SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(120_000).default(10_000),
     STATIC_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {

@@ -14,7 +14,9 @@ export function connectDatabase(url: string, opts: { poolMax?: number } = {}): S
     dialect: 'postgres',
     dialectModule: pg,
     logging: false,
-    pool: { max: opts.poolMax ?? 20, min: 0, idle: 10_000, acquire: 30_000 },
+    // a short acquire wait and connect timeout: during a database outage requests fail fast with 503
+    pool: { max: opts.poolMax ?? 10, min: 0, idle: 10_000, acquire: 10_000, evict: 1_000 },
+    dialectOptions: { connectionTimeoutMillis: 10_000 },
     define: { underscored: true },
   });
   initModels(current);

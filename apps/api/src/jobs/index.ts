@@ -13,6 +13,8 @@ export function startJobs(config: Config, sequelize: Sequelize): () => Promise<v
     every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM)),
     every('holds', 5_000, () => sweepHolds(new Date())),
     every('reminders', 60_000, () => queueReminders(new Date())),
+    // rate-limit windows that ran out only cost space
+    every('rate-limits', 300_000, () => sequelize.query(`DELETE FROM rate_limit_hits WHERE resets_at < now() - interval '1 minute'`)),
   ];
   return async () => {
     await Promise.all(stops.map((stop) => stop()));

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../lib/app-error.js';
+import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from '../db/availability.js';
 
 export const notFoundHandler: RequestHandler = (req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: `No route for ${req.method} ${req.originalUrl.split("?")[0]}` } });
@@ -9,6 +10,11 @@ export const notFoundHandler: RequestHandler = (req, res) => {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    res.set('Retry-After', String(RETRY_AFTER_SECONDS));
+    res.status(503).json({ error: { code: 'database_unavailable', message: 'We can’t reach our database right now. Please try again in a moment.' } });
     return;
   }
   const status = typeof err?.status === 'number' ? err.status : typeof err?.statusCode === 'number' ? err.statusCode : 500;

@@ -9,10 +9,15 @@ export function safeReturnTo(value: unknown): string {
   return value;
 }
 
+const SIGN_IN_SESSION_MS = 15 * 60 * 1000;
+
 export function authRouter(passport: PassportStatic, cookieName: string, secret: string) {
   const router = Router();
 
   router.get('/auth/google', (req, res, next) => {
+    // the session that carries the sign-in's state lives only as long as a sign-in takes;
+    // signing in replaces it with a fresh, long-lived one
+    req.session.cookie.maxAge = SIGN_IN_SESSION_MS;
     req.session.returnTo = safeReturnTo(req.query.returnTo);
     passport.authenticate('google', { scope: ['openid', 'email', 'profile'], prompt: 'select_account' })(req, res, next);
   });
