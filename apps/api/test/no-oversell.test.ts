@@ -1,12 +1,10 @@
 import type { ChildProcess } from 'node:child_process';
-import crypto from 'node:crypto';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { sign } from 'cookie-signature';
 import { QueryTypes } from 'sequelize';
 import { database } from '../src/db/sequelize.js';
-import { BakeDay, User } from '../src/db/models/index.js';
+import { BakeDay } from '../src/db/models/index.js';
 import { spawnApi, useStack } from './support.js';
-import { openDay } from './order-helpers.js';
+import { openDay, signedInCustomers } from './order-helpers.js';
 
 // Concurrency check of the capacity counter: many customers at once never get
 // more rings than the bake day has. (Rule under test: one conditional UPDATE
@@ -28,28 +26,10 @@ beforeEach(() => {
   stack.payments.setWebhookEndpoint(null);
 });
 
-/** Signed-in customers, made directly as session rows (the sign-in flow has its own tests). */
-async function customers(n: number) {
-  const users = await User.bulkCreate(Array.from({ length: n }, (_, i) => ({ email: `crowd${i}@example.test`, name: `Crowd ${i}`, role: 'customer' as const, emailVerified: true })));
-  const expires = new Date(Date.now() + 3600_000);
-  const sessions = users.map((u) => ({ sid: crypto.randomUUID(), user: u.id }));
-  await database().query(
-    `INSERT INTO "session" (sid, sess, expire) SELECT * FROM unnest(ARRAY[:sids]::varchar[], ARRAY[:sess]::json[], ARRAY[:exp]::timestamp[])`,
-    {
-      replacements: {
-        sids: sessions.map((s) => s.sid),
-        sess: sessions.map((s) => JSON.stringify({ cookie: { originalMaxAge: 3600_000, expires, httpOnly: true, path: '/', sameSite: 'lax' }, passport: { user: s.user }, csrfIssued: true })),
-        exp: sessions.map(() => expires),
-      },
-    },
-  );
-  return sessions.map((s) => `fryline.sid=${encodeURIComponent(`s:${sign(s.sid, stack.config.SESSION_SECRET)}`)}`);
-}
-
 async function crowd(urls: string[]) {
   const day = await openDay(stack);
   await BakeDay.update({ ringCapacity: CAPACITY, ringsRemaining: CAPACITY }, { where: { id: day.id } });
-  const cookies = await customers(REQUESTS);
+  const cookies = await signedInCustomers(stack, REQUESTS);
   const ring = day.menu.find((m) => m.kind === 'ring')!;
   const tokens = await Promise.all(
     cookies.map(async (cookie, i) => {
