@@ -102,7 +102,7 @@ export function createApp(config: Config) {
 
   app.use(express.json({ limit: '100kb' }));
 
-  const sessionPool = createPool(config.DATABASE_URL, 5, 'session store');
+  const sessionPool = createPool(config.DATABASE_URL, 5, 'session store', { asyncCommit: true });
   app.use(
     session({
       name: SESSION_COOKIE,

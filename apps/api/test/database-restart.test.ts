@@ -21,7 +21,8 @@ afterAll(() => {
 
 /** pg_ctl for the cluster behind the test database, as the postgres user when we are root. */
 async function cluster() {
-  const [{ data_directory: dataDir }] = await database().query<{ data_directory: string }>('SHOW data_directory', { type: QueryTypes.SELECT });
+  const [row] = await database().query<{ data_directory: string }>('SHOW data_directory', { type: QueryTypes.SELECT });
+  const dataDir = row!.data_directory;
   const base = '/usr/lib/postgresql';
   const version = fs.readdirSync(base).sort((a, b) => Number(b) - Number(a))[0]!;
   const pgCtl = path.join(base, version, 'bin/pg_ctl');

@@ -28,7 +28,7 @@ export class StateFile {
   constructor(
     readonly file: string,
     private readonly runtime: PaymentsRuntime,
-    private readonly delayMs = 50,
+    private readonly delayMs = 250,
   ) {}
 
   /** Loads the file if there is one; returns whether anything was restored. A damaged file is refused loudly. */

@@ -33,6 +33,8 @@ const envSchema = z
     RATE_LIMIT_ORDERS: z.coerce.number().int().min(1).default(20),
     RATE_LIMIT_CANCEL: z.coerce.number().int().min(1).default(20),
     RATE_LIMIT_WAITLIST: z.coerce.number().int().min(1).default(20),
+    /** How long a process may reuse rarely changing reads (settings, the signed-in user, a day's menu); 0 turns it off. */
+    READ_CACHE_MS: z.coerce.number().int().min(0).max(60_000).optional(),
     /** How long SIGTERM waits for requests in flight before closing their connections. */
     SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(120_000).default(10_000),
     STATIC_DIR: z.string().optional(),
@@ -69,5 +71,7 @@ export function loadConfig(source: NodeJS.ProcessEnv | Record<string, string | u
   }
   const env = parsed.data;
   const publicUrl = (env.PUBLIC_URL ?? `http://127.0.0.1:${env.PORT}`).replace(/\/$/, '');
-  return { ...env, publicUrl, secureCookies: publicUrl.startsWith('https:') };
+  // under test every read goes to the database, so a test sees its own writes at once
+  const readCacheMs = env.READ_CACHE_MS ?? (env.NODE_ENV === 'test' ? 0 : 2_000);
+  return { ...env, READ_CACHE_MS: readCacheMs, publicUrl, secureCookies: publicUrl.startsWith('https:') };
 }

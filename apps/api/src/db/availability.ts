@@ -39,8 +39,16 @@ export const RETRY_AFTER_SECONDS = 2;
  * listener would end the process. The pool drops that client and opens a new
  * one on the next query.
  */
-export function createPool(connectionString: string, max: number, name: string): pg.Pool {
-  const pool = new pg.Pool({ connectionString, max, connectionTimeoutMillis: 10_000, idleTimeoutMillis: 30_000 });
+export function createPool(connectionString: string, max: number, name: string, opts: { asyncCommit?: boolean } = {}): pg.Pool {
+  const pool = new pg.Pool({
+    connectionString,
+    max,
+    connectionTimeoutMillis: 10_000,
+    idleTimeoutMillis: 30_000,
+    // sessions and rate-limit counters: a crash may forget the last fraction of a second of
+    // them (someone signs in again, a few hits go uncounted), and no write waits for the disk
+    ...(opts.asyncCommit ? { options: '-c synchronous_commit=off' } : {}),
+  });
   let lastLogged = 0;
   pool.on('error', (err) => {
     // at most one line every 5 s, so an outage doesn't flood the log

@@ -6,14 +6,23 @@ import { handlePaymentEvent } from '../services/payment-events.js';
 
 export const webhooksRouter = Router();
 
+/** How far a signature's timestamp may be from our clock, either way (the SDK checks only the past). */
+export const WEBHOOK_TOLERANCE_SECONDS = 300;
+
+function timestampWithinTolerance(signature: string): boolean {
+  const t = /(?:^|,)\s*t=(\d{1,12})(?:,|$)/.exec(signature)?.[1];
+  return t !== undefined && Math.abs(Date.now() / 1000 - Number(t)) <= WEBHOOK_TOLERANCE_SECONDS;
+}
+
 /** Payment events: raw body, signature checked by the SDK, applied once. */
 webhooksRouter.post('/webhooks/payments', express.raw({ type: '*/*', limit: '512kb' }), async (req, res) => {
   const { payments, config } = context();
   const signature = req.get('stripe-signature');
   if (!signature || !Buffer.isBuffer(req.body)) throw new AppError('bad_signature', 'Missing signature', 400);
+  if (!timestampWithinTolerance(signature)) throw new AppError('bad_signature', 'The signature’s timestamp is too far from now', 400);
   let event: Stripe.Event;
   try {
-    event = payments.webhooks.constructEvent(req.body, signature, config.STRIPE_WEBHOOK_SECRET, 300);
+    event = payments.webhooks.constructEvent(req.body, signature, config.STRIPE_WEBHOOK_SECRET, WEBHOOK_TOLERANCE_SECONDS);
   } catch {
     throw new AppError('bad_signature', 'The signature does not match', 400);
   }

@@ -1,6 +1,7 @@
 import type Stripe from 'stripe';
 import type { Config } from '../config/env.js';
 import { createPaymentsClient } from '../integrations/payments.js';
+import { ReadCache } from '../lib/read-cache.js';
 
 // The process-wide configuration and payments client that services need.
 // Set once by createApp (or a job runner), like the database connection.
@@ -13,6 +14,7 @@ interface Context {
 let current: Context | null = null;
 
 export function setContext(config: Config): Context {
+  ReadCache.ttlMs = config.READ_CACHE_MS ?? 0;
   current = { config, payments: createPaymentsClient(config) };
   return current;
 }

@@ -5,6 +5,7 @@ import { database } from '../db/sequelize.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
 import { audit } from './audit.js';
+import { forgetMe } from './users.js';
 import { findBakeDay, toView } from './bake-days.js';
 import { currentPlanningBasis, cutoffFromSchedule, equipmentCapacity } from './production.js';
 
@@ -94,7 +95,7 @@ export async function listStaff(): Promise<StaffMemberView[]> {
  * new address is linked to whoever first signs in with it, verified.
  */
 export async function addStaff(owner: Me, input: StaffMemberInput): Promise<StaffMemberView> {
-  return database().transaction(async (transaction) => {
+  const member = await database().transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email: { [Op.iLike]: input.email } }, transaction, lock: transaction.LOCK.UPDATE });
     const user = existing
       ? await existing.update({ role: input.role, name: existing.name || input.name }, { transaction })
@@ -102,11 +103,13 @@ export async function addStaff(owner: Me, input: StaffMemberInput): Promise<Staf
     await audit({ actorId: owner.id, action: 'staff.role', subjectType: 'user', subjectId: user.id, details: { role: input.role } }, transaction);
     return toMember(user);
   });
+  forgetMe(member.id);
+  return member;
 }
 
 /** Changes someone's role (back to customer removes staff rights). The shop always keeps an owner. */
 export async function changeRole(owner: Me, userId: string, role: Me['role']): Promise<StaffMemberView | null> {
-  return database().transaction(async (transaction) => {
+  const member = await database().transaction(async (transaction) => {
     await database().query('SELECT pg_advisory_xact_lock(4242003)', { transaction });
     const user = await User.findByPk(userId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!user) throw notFound('Person');
@@ -119,6 +122,8 @@ export async function changeRole(owner: Me, userId: string, role: Me['role']): P
     await audit({ actorId: owner.id, action: 'staff.role', subjectType: 'user', subjectId: user.id, details: { role } }, transaction);
     return role === 'customer' ? null : toMember(user);
   });
+  forgetMe(userId);
+  return member;
 }
 
 /** Shows a draft bake day to customers; its cut-off must still be ahead. */

@@ -7,6 +7,7 @@ import { enqueueMail } from './outbox.js';
 import { welcomeMail } from './mail-templates.js';
 import { shopSettings } from './settings.js';
 import { audit } from './audit.js';
+import { ReadCache } from '../lib/read-cache.js';
 
 export interface ProviderProfile {
   sub: string;
@@ -56,7 +57,15 @@ export async function signIn(profile: ProviderProfile, shopUrl: string): Promise
   });
 }
 
+const people = new ReadCache<Me | null>();
+
+/** The signed-in user for each request (from the read cache: a role change reaches other processes within READ_CACHE_MS). */
 export async function findMe(id: string): Promise<Me | null> {
-  const user = await User.findByPk(id);
-  return user ? toMe(user) : null;
+  return people.get(id, async () => {
+    const user = await User.findByPk(id);
+    return user ? toMe(user) : null;
+  });
 }
+
+/** After changing someone's role or name here. */
+export const forgetMe = (id: string) => people.forget(id);

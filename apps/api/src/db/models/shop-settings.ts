@@ -6,6 +6,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare currency: CreationOptional<string>;
   declare taxMode: CreationOptional<'included' | 'added'>;
   declare taxRateBp: CreationOptional<number>;
+  declare maxPiecesPerCustomer: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -17,6 +18,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         currency: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'usd' },
         taxMode: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'included' },
         taxRateBp: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'tax_rate_bp' },
+        maxPiecesPerCustomer: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 36 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
