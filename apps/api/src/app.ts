@@ -5,6 +5,7 @@ import express from 'express';
 import helmet from 'helmet';
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
+import { isPlainText } from '@fryline/schemas';
 import { createPool } from './db/availability.js';
 import type { Config } from './config/env.js';
 import { configurePassport } from './integrations/passport.js';
@@ -100,7 +101,19 @@ export function createApp(config: Config) {
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
 
-  app.use(express.json({ limit: '100kb' }));
+  // no string (or key) in any JSON body may hold NUL, other control characters or lone surrogates:
+  // refused with 400 before a route sees it, so such text never reaches the database or the payments service
+  app.use(
+    express.json({
+      limit: '100kb',
+      reviver(key: string, value: unknown) {
+        if ((typeof value === 'string' && !isPlainText(value)) || !isPlainText(key)) {
+          throw new SyntaxError('The request holds text with control characters or broken Unicode');
+        }
+        return value;
+      },
+    }),
+  );
 
   const sessionPool = createPool(config.DATABASE_URL, 5, 'session store', { asyncCommit: true });
   app.use(

@@ -1,3 +1,4 @@
+import { isPlainText, PLAIN_TEXT_MESSAGE } from './text.js';
 import { z } from 'zod';
 import { boxSizeSchema } from './bake-days.js';
 
@@ -118,6 +119,6 @@ export interface StaffOrderView {
 
 export const refundRequestSchema = z.strictObject({
   amountCents: z.number().int('Amount must be whole cents').min(1, 'Amount must be at least 1 cent'),
-  reason: z.string().trim().min(1, 'Give a reason').max(200),
+  reason: z.string().trim().min(1, 'Give a reason').max(200).refine(isPlainText, PLAIN_TEXT_MESSAGE),
 });
 export type RefundRequest = z.infer<typeof refundRequestSchema>;

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../lib/app-error.js';
 import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from '../db/availability.js';
+import { describePaymentsError, isPaymentsError, paymentsError } from '../services/payments-errors.js';
 
 export const notFoundHandler: RequestHandler = (req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: `No route for ${req.method} ${req.originalUrl.split("?")[0]}` } });
@@ -10,6 +11,12 @@ export const notFoundHandler: RequestHandler = (req, res) => {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     res.status(err.status).json({ error: { code: err.code, message: err.message, details: err.details } });
+    return;
+  }
+  if (isPaymentsError(err)) {
+    console.error(`[payments] ${req.method} ${req.originalUrl.split('?')[0]}: ${describePaymentsError(err)}`);
+    const answer = paymentsError();
+    res.status(answer.status).json({ error: { code: answer.code, message: answer.message } });
     return;
   }
   if (isDatabaseUnavailable(err)) {

@@ -9,6 +9,13 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
   declare amountCents: number;
   declare reason: string;
   declare requestedBy: string | null;
+  /** pending (recorded, not yet confirmed by the payments service), succeeded, or failed (refused for good). */
+  declare status: CreationOptional<'pending' | 'succeeded' | 'failed'>;
+  /** The idempotency key the payments service sees: the order and the refunded total this refund brings it to. */
+  declare providerKey: CreationOptional<string | null>;
+  declare refundedTotalCents: CreationOptional<number | null>;
+  declare lastError: CreationOptional<string | null>;
+  declare confirmedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -21,6 +28,11 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
         amountCents: { type: DataTypes.INTEGER, allowNull: false },
         reason: { type: DataTypes.TEXT, allowNull: false },
         requestedBy: { type: DataTypes.UUID, allowNull: true },
+        status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'succeeded' },
+        providerKey: { type: DataTypes.TEXT, allowNull: true },
+        refundedTotalCents: { type: DataTypes.INTEGER, allowNull: true },
+        lastError: { type: DataTypes.TEXT, allowNull: true },
+        confirmedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'refunds', underscored: true, updatedAt: false },
