@@ -15,6 +15,12 @@ export class PaymentsRuntime {
   readonly webhooks: WebhookDispatcher;
   /** Extra wait before POST /v1 handlers run, to make in-flight duplicates observable. */
   apiDelayMs = 0;
+  /**
+   * The next `count` POSTs under `/v1<path>` fail: `before` answers 500 without doing
+   * anything; `after` does the work (and remembers the answer for its idempotency key)
+   * but drops the connection instead of answering, as a network failure would.
+   */
+  apiFailures: { count: number; path: string; mode: 'before' | 'after' } = { count: 0, path: '/', mode: 'before' };
 
   constructor(options: RuntimeOptions) {
     this.webhooks = new WebhookDispatcher(
@@ -39,5 +45,6 @@ export class PaymentsRuntime {
     this.store.reset();
     this.idempotency.clear();
     this.apiDelayMs = 0;
+    this.apiFailures = { count: 0, path: '/', mode: 'before' };
   }
 }

@@ -34,6 +34,19 @@ function apiRouter(runtime: PaymentsRuntime, publicUrl: () => string): Router {
     catchUp(store);
     next();
   });
+  api.use((req, res, next) => {
+    const failures = runtime.apiFailures;
+    if (req.method !== 'POST' || failures.count <= 0 || !req.path.startsWith(failures.path)) return next();
+    failures.count -= 1;
+    if (failures.mode === 'before') {
+      throw new ApiError(500, { type: 'api_error', message: 'An error occurred with our connection to the payments network (injected by the fake).' }, true);
+    }
+    res.json = () => {
+      res.socket?.destroy();
+      return res;
+    };
+    next();
+  });
   api.use(runtime.idempotency.middleware(apiKeyOf));
   api.use(async (req, _res, next) => {
     if (req.method === 'POST' && runtime.apiDelayMs > 0) await sleep(runtime.apiDelayMs);

@@ -219,6 +219,18 @@ export function adminRouter(runtime: PaymentsRuntime): Router {
     res.json({ apiDelayMs: ms });
   });
 
+  router.post('/api-failures', (req, res) => {
+    const body = bodyOf(req);
+    onlyKeys(body, ['count', 'path', 'mode']);
+    const count = integer(body, 'count', 0, 1000) ?? 1;
+    const path = optionalText(body, 'path') ?? '/';
+    const mode = optionalText(body, 'mode') ?? 'before';
+    if (!path.startsWith('/')) throw new AdminInputError('path must start with / (it is matched under /v1)');
+    if (mode !== 'before' && mode !== 'after') throw new AdminInputError('mode must be before or after');
+    runtime.apiFailures = { count, path, mode };
+    res.json(runtime.apiFailures);
+  });
+
   router.post('/sessions/:id/pay', (req, res) => {
     const body = bodyOf(req);
     onlyKeys(body, ['cardNumber', 'expiry', 'cvc', 'name', 'email', 'authentication']);
