@@ -4,19 +4,38 @@ import { Order } from '../db/models/index.js';
 import { releaseOrder } from '../services/capacity.js';
 import { expireCheckout } from '../services/checkout.js';
 import { lapseOffers, offerFreedCapacity } from '../services/waitlist.js';
+import { applyCompletedSession } from '../services/payment-events.js';
+import { describePaymentsError } from '../services/payments-errors.js';
+
+/** How long a checkout session lives at the payments service (see openCheckout), plus a minute's slack. */
+const SESSION_LIFETIME_MS = 32 * 60_000;
 
 /**
  * Expires unpaid holds whose time is up. The checkout session is expired
- * first, so it can no longer be paid; if it turns out to be paid already, the
- * order is left for the payment event. The release itself is guarded by the
- * order's status, so racing the expiry webhook returns capacity once.
+ * first, so it can no longer be paid; if it turns out to be complete, the
+ * payment is recorded now (its webhook may never come). If the payments
+ * service can't be reached, the hold still goes once its session has
+ * outlived its own expiry (nobody can pay it after that; a payment that did
+ * get through is handled as a late one). The release itself is guarded by
+ * the order's status, so racing the expiry webhook returns capacity once.
  */
 export async function sweepHolds(now: Date): Promise<{ expired: number; lapsedOffers: number }> {
   const due = await Order.findAll({ where: { status: 'held', holdExpiresAt: { [Op.lte]: now } }, limit: 100, order: [['holdExpiresAt', 'ASC']] });
   let expired = 0;
   for (const order of due) {
     if (order.checkoutSessionId) {
-      const status = await expireCheckout(order.checkoutSessionId).catch(() => 'open' as const);
+      let status: 'expired' | 'complete' | 'open';
+      try {
+        status = await expireCheckout(order.checkoutSessionId);
+      } catch (err) {
+        if (now.getTime() - order.createdAt.getTime() < SESSION_LIFETIME_MS) continue;
+        console.error(`[holds] order ${order.id}: payments service unreachable (${describePaymentsError(err)}); its session is past its own expiry, releasing the hold`);
+        status = 'expired';
+      }
+      if (status === 'complete') {
+        await applyCompletedSession(order.checkoutSessionId).catch((err) => console.error(`[holds] order ${order.id}: ${describePaymentsError(err)}`));
+        continue;
+      }
       if (status !== 'expired') continue;
     }
     await database().transaction(async (transaction) => {

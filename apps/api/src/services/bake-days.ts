@@ -4,6 +4,7 @@ import type { BakeDayStatus, BakeDayView, BoxSize, Allergen } from '@fryline/sch
 import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../db/models/index.js';
 import { notFound } from '../lib/app-error.js';
 import { shopSettings } from './settings.js';
+import { ReadCache } from '../lib/read-cache.js';
 
 const boxLabels: Record<BoxSize, string> = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' };
 const boxOrder: BoxSize[] = ['dozen', 'half-dozen', 'holes'];
@@ -90,6 +91,19 @@ export async function listDrafts(now: Date): Promise<BakeDayView[]> {
 /** One bake day with its windows, boxes and menu, or null. */
 export function findBakeDay(id: string) {
   return BakeDay.findByPk(id, { include: bakeDayInclude });
+}
+
+const days = new ReadCache<BakeDay | null>();
+
+/**
+ * A bake day's view for checking an order against its menu, boxes and
+ * windows, from the read cache (its remaining counts may be a moment old:
+ * the order's conditional UPDATE is what decides whether the pieces are there).
+ */
+export async function bakeDayForOrdering(id: string, now: Date): Promise<BakeDayView> {
+  const day = await days.get(id, () => findBakeDay(id));
+  if (!day || day.status === 'draft') throw notFound('Bake day');
+  return toView(day, now);
 }
 
 export async function getBakeDay(id: string, now: Date): Promise<BakeDayView> {

@@ -1,7 +1,6 @@
 import type Stripe from 'stripe';
-import type { Transaction } from 'sequelize';
 import type { BakeDayView, Me } from '@fryline/schemas';
-import { Order, Refund } from '../db/models/index.js';
+import type { Order } from '../db/models/index.js';
 import { context } from './context.js';
 import type { CheckedOrder } from './order-rules.js';
 import { shopSettings } from './settings.js';
@@ -15,7 +14,7 @@ const boxNames = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag
  * payments service's minimum); the shorter hold is enforced by expiring the
  * session when the hold lapses.
  */
-export async function openCheckout(order: Order, user: Me, checked: CheckedOrder, day: BakeDayView, now: Date): Promise<Stripe.Checkout.Session> {
+export async function openCheckout(order: Pick<Order, 'id' | 'bakeDayId' | 'holdExpiresAt'>, user: Me, checked: CheckedOrder, day: BakeDayView, now: Date): Promise<Stripe.Checkout.Session> {
   const { config, payments } = context();
   const { currency } = await shopSettings();
   const lineItems: Stripe.Checkout.SessionCreateParams.LineItem[] = checked.boxes.map((box, i) => ({
@@ -56,31 +55,4 @@ export async function expireCheckout(sessionId: string): Promise<'expired' | 'co
     if (!session) throw err;
     return (session.status ?? 'open') as 'expired' | 'complete' | 'open';
   }
-}
-
-/**
- * Refunds part or all of an order's payment through the payments API and
- * records it. `key` makes the call idempotent end to end.
- */
-export async function refundPayment(
-  order: Order,
-  amountCents: number,
-  reason: 'requested_by_customer' | 'duplicate' | 'fraudulent',
-  key: string,
-  requestedBy: string | null,
-  transaction: Transaction,
-  note: string = reason,
-): Promise<Refund> {
-  if (!order.paymentIntentId) throw new Error(`order ${order.id} has no payment to refund`);
-  const refund = await context().payments.refunds.create(
-    { payment_intent: order.paymentIntentId, amount: amountCents, reason, metadata: { orderId: order.id } },
-    { idempotencyKey: `refund:${key}` },
-  );
-  await Order.increment({ refundedCents: amountCents }, { where: { id: order.id }, transaction });
-  const [row] = await Refund.findOrCreate({
-    where: { providerRefundId: refund.id },
-    defaults: { orderId: order.id, providerRefundId: refund.id, requestKey: key, amountCents, reason: note, requestedBy },
-    transaction,
-  });
-  return row;
 }

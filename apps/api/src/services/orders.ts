@@ -1,17 +1,22 @@
 import QRCode from 'qrcode';
-import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { UniqueConstraintError } from 'sequelize';
 import type { CreatedOrder, CreateOrderInput, Me, OrderDetail } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
-import { getBakeDay } from './bake-days.js';
-import { checkOrder, type CheckedOrder } from './order-rules.js';
-import { releaseOrder, takeCapacity, takeWindowSlot, giveBackWindowSlot } from './capacity.js';
+import { bakeDayForOrdering } from './bake-days.js';
+import { checkOrder } from './order-rules.js';
+import { releaseOrder, takeWindowSlot, giveBackWindowSlot } from './capacity.js';
 import { context } from './context.js';
 import { audit } from './audit.js';
 import { queueCancellation } from './order-mails.js';
 import { claimOffer, offerFreedCapacity } from './waitlist.js';
-import { expireCheckout, openCheckout, refundPayment } from './checkout.js';
+import { expireCheckout, openCheckout } from './checkout.js';
+import { recordRefundIntent, refundableCents, sendRefundIntent } from './refund-intents.js';
+import { applyCompletedSession } from './payment-events.js';
+import { describePaymentsError } from './payments-errors.js';
+import { shopSettings } from './settings.js';
+import { insertHeldOrder, saveCheckoutSession, takeOrderCapacity } from '../db/queries/orders.js';
 
 const orderInclude = [
   { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
@@ -65,78 +70,88 @@ export async function listOrders(user: Me, now: Date): Promise<OrderDetail[]> {
   return Promise.all(orders.map((o) => toOrderView(o, now)));
 }
 
-async function insertOrder(user: Me, input: CreateOrderInput, checked: CheckedOrder, holdExpiresAt: Date, transaction: Transaction): Promise<Order> {
-  const order = await Order.create(
-    {
-      userId: user.id,
-      bakeDayId: input.bakeDayId,
-      pickupWindowId: input.pickupWindowId,
-      status: 'held',
-      rings: checked.rings,
-      holes: checked.holes,
-      subtotalCents: checked.price.subtotalCents,
-      taxCents: checked.price.taxCents,
-      totalCents: checked.price.totalCents,
-      holdExpiresAt,
-    },
-    { transaction },
-  );
-  for (const [position, box] of checked.boxes.entries()) {
-    const row = await OrderBox.create({ orderId: order.id, position, size: box.size, pieces: box.pieces, priceCents: box.priceCents }, { transaction });
-    await OrderLine.bulkCreate(box.lines.map((l) => ({ ...l, orderBoxId: row.id })), { transaction });
-  }
-  return order;
-}
-
 /**
- * Reserves the pieces as a hold (one conditional update per counter, in the
- * order's transaction), then opens hosted checkout for it. If checkout can't
- * be opened, the hold is released at once.
+ * Reserves the pieces as a hold, then opens hosted checkout for it. One
+ * transaction: the order with its boxes, lines and audit entry (refused past
+ * the customer's share of the day), then the capacity and window slot in one
+ * conditional statement, then commit. If checkout can't be opened, the hold
+ * is released at once. The session's id is saved without waiting for the
+ * disk: were it lost in a crash, the payment is still recognised as the
+ * order's (the session names the order as its client reference).
  */
 export async function createOrder(user: Me, input: CreateOrderInput & { claimToken?: string }, now: Date): Promise<CreatedOrder> {
-  const day = await getBakeDay(input.bakeDayId, now);
+  const day = await bakeDayForOrdering(input.bakeDayId, now);
   if (day.status !== 'open') {
     throw new AppError('closed', day.status === 'upcoming' ? 'Orders for this bake day are not open yet' : 'Orders for this bake day are closed', 409);
   }
   const checked = checkOrder(day, input);
+  const { maxPiecesPerCustomer } = await shopSettings();
+  if (checked.rings + checked.holes > maxPiecesPerCustomer) throw overLimit(maxPiecesPerCustomer, 0);
   const holdExpiresAt = new Date(now.getTime() + context().config.HOLD_MINUTES * 60_000);
 
-  let order: Order;
+  let orderId: string;
   try {
-    order = await database().transaction(async (transaction) => {
-      const existing = await Order.findOne({ where: { userId: user.id, bakeDayId: day.id, status: 'held' }, transaction });
-      if (existing) {
-        throw new AppError('hold_exists', 'You already have a box on hold for this bake day. Finish paying for it or cancel it first.', 409, { orderId: existing.id });
-      }
+    orderId = await database().transaction(async (transaction) => {
+      const inserted = await insertHeldOrder(
+        {
+          userId: user.id,
+          bakeDayId: day.id,
+          pickupWindowId: input.pickupWindowId,
+          rings: checked.rings,
+          holes: checked.holes,
+          subtotalCents: checked.price.subtotalCents,
+          taxCents: checked.price.taxCents,
+          totalCents: checked.price.totalCents,
+          holdExpiresAt,
+          boxes: checked.boxes,
+          maxPieces: maxPiecesPerCustomer,
+        },
+        transaction,
+      );
+      if (!inserted.id) throw overLimit(maxPiecesPerCustomer, inserted.alreadyPieces);
       if (input.claimToken) await claimOffer(user, day.id, input.claimToken, transaction);
-      if (!(await takeCapacity(day.id, checked.rings, checked.holes, transaction))) {
-        throw new AppError('sold_out', 'Sorry — there are not enough doughnuts left for this order', 409, { remaining: day.remaining });
+      const taken = await takeOrderCapacity({ bakeDayId: day.id, pickupWindowId: input.pickupWindowId, rings: checked.rings, holes: checked.holes, now }, transaction);
+      if (!taken.pieces) {
+        const fresh = await BakeDay.findByPk(day.id, { transaction, attributes: ['ringsRemaining', 'holesRemaining'] });
+        throw new AppError('sold_out', 'Sorry — there are not enough doughnuts left for this order', 409, {
+          remaining: { rings: fresh?.ringsRemaining ?? 0, holes: fresh?.holesRemaining ?? 0 },
+        });
       }
-      if (!(await takeWindowSlot(day.id, input.pickupWindowId, transaction))) {
+      if (!taken.window) {
         throw new AppError('window_full', 'That pickup window is full; please choose another', 409, { fields: { pickupWindowId: 'This window is full' } });
       }
-      const created = await insertOrder(user, input, checked, holdExpiresAt, transaction);
-      await audit({ actorId: user.id, action: 'order.held', subjectType: 'order', subjectId: created.id, details: { rings: checked.rings, holes: checked.holes } }, transaction);
-      return created;
+      return inserted.id;
     });
   } catch (err) {
     if (err instanceof UniqueConstraintError) {
-      throw new AppError('hold_exists', 'You already have a box on hold for this bake day', 409);
+      const existing = await Order.findOne({ where: { userId: user.id, bakeDayId: day.id, status: 'held' }, attributes: ['id'] });
+      throw new AppError('hold_exists', 'You already have a box on hold for this bake day. Finish paying for it or cancel it first.', 409, existing ? { orderId: existing.id } : undefined);
     }
     throw err;
   }
 
   try {
-    const session = await openCheckout(order, user, checked, day, now);
-    await order.update({ checkoutSessionId: session.id });
-    return { id: order.id, status: 'held', totalCents: order.totalCents, holdExpiresAt: holdExpiresAt.toISOString(), checkoutUrl: session.url! };
+    const session = await openCheckout({ id: orderId, bakeDayId: day.id, holdExpiresAt }, user, checked, day, now);
+    await saveCheckoutSession(orderId, session.id);
+    return { id: orderId, status: 'held', totalCents: checked.price.totalCents, holdExpiresAt: holdExpiresAt.toISOString(), checkoutUrl: session.url! };
   } catch (err) {
     await database().transaction(async (transaction) => {
-      if (await releaseOrder(order.id, ['held'], 'expired', transaction)) await offerFreedCapacity(day.id, transaction);
+      if (await releaseOrder(orderId, ['held'], 'expired', transaction)) await offerFreedCapacity(day.id, transaction);
     });
-    console.error('[orders] checkout could not be opened:', (err as Error).message);
-    throw new AppError('payments_unavailable', 'Card payments are not available right now. Nothing was charged; please try again shortly.', 502);
+    console.error('[orders] checkout could not be opened:', describePaymentsError(err));
+    throw new AppError('payments_error', 'Card payments are not available right now. Nothing was charged; please try again shortly.', 502);
   }
+}
+
+function overLimit(limit: number, already: number): AppError {
+  return new AppError(
+    'limit_exceeded',
+    already > 0
+      ? `Each customer can order up to ${limit} pieces for one bake day; you already have ${already}.`
+      : `Each customer can order up to ${limit} pieces for one bake day.`,
+    409,
+    { limit, alreadyOrdered: already },
+  );
 }
 
 /** The checkout page for a held order that is still within its hold. */
@@ -152,8 +167,14 @@ export async function resumeCheckout(user: Me, id: string, now: Date): Promise<{
 
 /**
  * A customer cancels before the cut-off: the hold or the paid order is
- * released, a paid order is refunded in full through the payments API, and
- * an e-mail goes out. Cancelling twice returns the cancelled order.
+ * released, a paid order is refunded in full, and an e-mail goes out. A held
+ * order whose checkout turns out to be complete is first recorded as paid
+ * (as its webhook would have), then cancelled and refunded like any paid
+ * one. The refund's amount is worked out under the order's row lock (so a
+ * refund the owner is making at the same moment is counted) and recorded as
+ * an intent before the payments service is called; if the service doesn't
+ * answer, the cancellation stands and the refund is retried until it does.
+ * Cancelling twice returns the cancelled order.
  */
 export async function cancelOrder(user: Me, id: string, now: Date): Promise<OrderDetail> {
   const order = await findOwnOrder(user, id);
@@ -162,21 +183,32 @@ export async function cancelOrder(user: Me, id: string, now: Date): Promise<Orde
   if (now >= order.bakeDay!.cutoffAt) {
     throw new AppError('too_late', 'Orders can only be cancelled before the cut-off. Please contact the shop.', 409);
   }
-  const wasHeld = order.status === 'held';
-  if (wasHeld && order.checkoutSessionId) await expireCheckout(order.checkoutSessionId);
+  if (order.status === 'held' && order.checkoutSessionId) {
+    const status = await expireCheckout(order.checkoutSessionId);
+    if (status === 'complete') await applyCompletedSession(order.checkoutSessionId);
+  }
 
+  let refundId: string | null = null;
   await database().transaction(async (transaction) => {
-    const released = await releaseOrder(order.id, [order.status], 'cancelled', transaction, { cancelledAt: now });
-    if (!released) return; // something else moved it first
+    const fresh = await Order.findOne({ where: { id, userId: user.id }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!fresh || !['held', 'paid'].includes(fresh.status)) return; // something else moved it first
+    const wasPaid = fresh.status === 'paid';
+    const released = await releaseOrder(fresh.id, [fresh.status], 'cancelled', transaction, { cancelledAt: now });
+    if (!released) return;
     let refunded = 0;
-    if (!wasHeld) {
-      refunded = order.totalCents - order.refundedCents;
-      if (refunded > 0) await refundPayment(order, refunded, 'requested_by_customer', `cancel:${order.id}`, null, transaction);
+    if (wasPaid && fresh.paymentIntentId) {
+      refunded = await refundableCents(fresh, transaction);
+      if (refunded > 0) refundId = (await recordRefundIntent(fresh, refunded, 'cancelled by the customer', { kind: 'cancel', requestedBy: user.id }, transaction)).id;
     }
-    await queueCancellation(order.id, refunded, transaction);
-    await audit({ actorId: user.id, action: 'order.cancelled', subjectType: 'order', subjectId: order.id, details: { refundedCents: refunded } }, transaction);
-    await offerFreedCapacity(order.bakeDayId, transaction);
+    await queueCancellation(fresh.id, refunded, transaction);
+    await audit({ actorId: user.id, action: 'order.cancelled', subjectType: 'order', subjectId: fresh.id, details: { refundedCents: refunded } }, transaction);
+    await offerFreedCapacity(fresh.bakeDayId, transaction);
   });
+  if (refundId) {
+    await sendRefundIntent(refundId).catch(() => {
+      // logged by sendRefundIntent; the cancellation stands and the retry job sends the refund
+    });
+  }
   return getOrder(user, id, now);
 }
 

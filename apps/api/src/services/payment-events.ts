@@ -6,7 +6,9 @@ import { context } from './context.js';
 import { releaseOrder, takeCapacity, takeWindowSlot } from './capacity.js';
 import { newPickupCode } from './pickup-codes.js';
 import { queueConfirmation, queueLateRefundApology } from './order-mails.js';
-import { refundPayment } from './checkout.js';
+import { afterCommitting, recordRefundIntent, refundableCents, runAfterCommit, sendAfterCommit } from './refund-intents.js';
+import { flagMismatch, intentIdOf, orderIdOfSession, refundFlagged, retrieveSession, sessionProblem } from './payment-checks.js';
+import { shopSettings } from './settings.js';
 import { offerFreedCapacity } from './waitlist.js';
 import { audit } from './audit.js';
 
@@ -19,7 +21,14 @@ class NotRetaken extends Error {}
  * finds the id taken and does nothing; events may arrive in any order.
  */
 export async function handlePaymentEvent(event: Stripe.Event): Promise<'applied' | 'duplicate'> {
-  return database().transaction(async (transaction) => {
+  // a checkout session is judged as the payments service has it now, never by the event's copy
+  const isSession = event.type.startsWith('checkout.session.');
+  const seen = isSession && (await alreadyRecorded(event.id));
+  if (seen) return 'duplicate';
+  const session = isSession ? await retrieveSession((event.data.object as Stripe.Checkout.Session).id) : null;
+  let committed: Transaction | null = null;
+  const result = await database().transaction(async (transaction) => {
+    committed = transaction;
     const inserted = await database().query(
       `INSERT INTO payment_events (id, type) VALUES (:id, :type) ON CONFLICT (id) DO NOTHING RETURNING id`,
       { replacements: { id: event.id, type: event.type }, type: QueryTypes.SELECT, transaction },
@@ -30,10 +39,10 @@ export async function handlePaymentEvent(event: Stripe.Event): Promise<'applied'
     switch (event.type) {
       case 'checkout.session.completed':
       case 'checkout.session.async_payment_succeeded':
-        ({ orderId, outcome } = await sessionPaid(event.data.object as Stripe.Checkout.Session, transaction));
+        ({ orderId, outcome } = await sessionPaid(session!, transaction));
         break;
       case 'checkout.session.expired':
-        ({ orderId, outcome } = await sessionExpired(event.data.object as Stripe.Checkout.Session, transaction));
+        ({ orderId, outcome } = await sessionExpired(session!, transaction));
         break;
       case 'charge.refunded':
         ({ orderId, outcome } = await chargeRefunded(event.data.object as Stripe.Charge, transaction));
@@ -45,12 +54,27 @@ export async function handlePaymentEvent(event: Stripe.Event): Promise<'applied'
       replacements: { id: event.id, orderId, outcome },
       transaction,
     });
-    return 'applied';
+    return 'applied' as const;
   });
+  // refunds the event called for, once its effect is committed
+  if (result === 'applied') await runAfterCommit(committed);
+  return result;
 }
 
-const orderIdOf = (session: Stripe.Checkout.Session) => session.metadata?.orderId ?? session.client_reference_id ?? null;
-const intentIdOf = (value: string | { id: string } | null | undefined) => (typeof value === 'string' ? value : value?.id ?? null);
+async function alreadyRecorded(eventId: string): Promise<boolean> {
+  const rows = await database().query(`SELECT 1 FROM payment_events WHERE id = :eventId`, { replacements: { eventId }, type: QueryTypes.SELECT });
+  return rows.length > 0;
+}
+
+/**
+ * A session found complete by someone else than its webhook (the sweeper, a
+ * cancellation, the reconciler): applied as its completion event would be,
+ * once per session however many find it.
+ */
+export async function applyCompletedSession(sessionId: string, nowSeconds = Math.floor(Date.now() / 1000)): Promise<'applied' | 'duplicate'> {
+  const event = { id: `reconcile:${sessionId}`, object: 'event', type: 'checkout.session.completed', created: nowSeconds, data: { object: { id: sessionId } } };
+  return handlePaymentEvent(event as unknown as Stripe.Event);
+}
 
 async function lockOrder(id: string | null, transaction: Transaction) {
   if (!id || !/^[0-9a-f-]{36}$/i.test(id)) return null;
@@ -78,13 +102,19 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
 }
 
 async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transaction) {
-  const order = await lockOrder(orderIdOf(session), transaction);
-  if (!order) return { orderId: null, outcome: 'unknown order' };
-  if (session.payment_status !== 'paid') return { orderId: order.id, outcome: 'not paid yet' };
-  const paymentIntentId = intentIdOf(session.payment_intent as string | { id: string } | null);
-  if (session.amount_total !== order.totalCents) {
-    console.error(`[payments] order ${order.id}: paid ${session.amount_total} but total is ${order.totalCents}`);
+  const order = await lockOrder(orderIdOfSession(session), transaction);
+  if (session.payment_status !== 'paid') return { orderId: order?.id ?? null, outcome: 'not paid yet' };
+  const { currency } = await shopSettings(transaction);
+  const problem = order ? sessionProblem(session, order, currency) : `session ${session.id} names no order of ours`;
+  if (problem) {
+    // never marks the order paid: flagged for the owner, the money refunded in full
+    const flagId = await flagMismatch(session, order, problem, transaction);
+    if (flagId) afterCommitting(transaction, () => refundFlagged(flagId));
+    return { orderId: order?.id ?? null, outcome: `flagged: ${problem}`.slice(0, 200) };
   }
+  if (!order) return { orderId: null, outcome: 'unknown order' };
+  const paymentIntentId = intentIdOf(session.payment_intent as string | { id: string } | null);
+  if (!order.checkoutSessionId) await order.update({ checkoutSessionId: session.id }, { transaction });
   switch (order.status) {
     case 'held':
       await markPaid(order, paymentIntentId, true, transaction);
@@ -118,14 +148,18 @@ async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transa
 
 async function refundLate(order: Order, paymentIntentId: string | null, transaction: Transaction) {
   await order.update({ paymentIntentId, status: 'refunded', holdsCapacity: false }, { transaction });
-  const due = order.totalCents - order.refundedCents;
-  if (due > 0) await refundPayment(order, due, 'requested_by_customer', `late:${order.id}`, null, transaction, 'paid after the hold lapsed; sold out');
+  const due = await refundableCents(order, transaction);
+  if (due > 0) {
+    const intent = await recordRefundIntent(order, due, 'paid after the hold lapsed or the order was cancelled', { kind: 'late', requestedBy: null }, transaction);
+    sendAfterCommit(intent.id, transaction);
+  }
   await queueLateRefundApology(order.id, transaction);
   return { orderId: order.id, outcome: 'paid late, refunded' };
 }
 
 async function sessionExpired(session: Stripe.Checkout.Session, transaction: Transaction) {
-  const orderId = orderIdOf(session);
+  if (session.status !== 'expired') return { orderId: null, outcome: `session is ${session.status}` };
+  const orderId = orderIdOfSession(session);
   const order = await lockOrder(orderId, transaction);
   if (!order) return { orderId: null, outcome: 'unknown order' };
   if (order.checkoutSessionId && order.checkoutSessionId !== session.id) return { orderId: order.id, outcome: 'older session' };

@@ -5,6 +5,10 @@ import { Order, Refund } from '../db/models/index.js';
 import { AppError } from '../lib/app-error.js';
 import { context } from './context.js';
 import { describePaymentsError, isDefinitiveRefusal, paymentsError } from './payments-errors.js';
+import { releaseOrder } from './capacity.js';
+import { offerFreedCapacity } from './waitlist.js';
+import { queueRefundNotice } from './order-mails.js';
+import { audit } from './audit.js';
 
 // Refunds exactly once: a refund is first written as an intent ('pending',
 // with the amount, the reason and the key the payments service will see),
@@ -37,8 +41,7 @@ export async function recordRefundIntent(
   order: Order,
   amountCents: number,
   note: string,
-  requestedBy: string | null,
-  requestKey: string | null,
+  who: { kind: 'owner' | 'cancel' | 'late'; requestedBy: string | null; requestKey?: string | null },
   transaction: Transaction,
 ): Promise<Refund> {
   const left = await refundableCents(order, transaction);
@@ -52,7 +55,18 @@ export async function recordRefundIntent(
   const spent = await Refund.count({ where: { orderId: order.id, refundedTotalCents: newTotal }, transaction });
   const providerKey = `refund:${order.id}:${newTotal}${spent ? `:${spent + 1}` : ''}`;
   return Refund.create(
-    { orderId: order.id, amountCents, reason: note, requestedBy, requestKey, status: 'pending', providerKey, refundedTotalCents: newTotal, providerRefundId: null },
+    {
+      orderId: order.id,
+      amountCents,
+      reason: note,
+      kind: who.kind,
+      requestedBy: who.requestedBy,
+      requestKey: who.requestKey ?? null,
+      status: 'pending',
+      providerKey,
+      refundedTotalCents: newTotal,
+      providerRefundId: null,
+    },
     { transaction },
   );
 }
@@ -66,6 +80,7 @@ export async function recordRefundIntent(
 export async function sendRefundIntent(refundId: string): Promise<Refund> {
   const intent = await Refund.findByPk(refundId);
   if (!intent) throw new Error(`refund intent ${refundId} not found`);
+  if (intent.status === 'failed') throw paymentsError('The card payments service refused this refund. Nothing was refunded.');
   if (intent.status !== 'pending') return intent;
   const order = await Order.findByPk(intent.orderId);
   if (!order?.paymentIntentId) throw new Error(`order ${intent.orderId} has no payment to refund`);
@@ -90,24 +105,58 @@ export async function sendRefundIntent(refundId: string): Promise<Refund> {
   return confirmRefund(intent.id, providerRefundId);
 }
 
-/** Marks an intent done and the order's refunded total up to what has been confirmed. */
+/**
+ * Marks an intent done and brings the order's refunded total up to what has
+ * been confirmed. The first confirmation of an owner's refund also tells the
+ * customer and, when nothing is left to refund on a paid order, gives its
+ * pieces back (whoever confirms it: the request, or the retry job).
+ */
 export async function confirmRefund(refundId: string, providerRefundId: string): Promise<Refund> {
   return database().transaction(async (transaction) => {
     const intent = await Refund.findByPk(refundId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!intent) throw new Error(`refund intent ${refundId} not found`);
-    await Order.findByPk(intent.orderId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (intent.status !== 'succeeded') {
-      await intent.update({ status: 'succeeded', providerRefundId, confirmedAt: new Date(), lastError: null }, { transaction });
-    }
-    await database().query(
+    const order = await Order.findByPk(intent.orderId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (intent.status === 'succeeded') return intent;
+    await intent.update({ status: 'succeeded', providerRefundId, confirmedAt: new Date(), lastError: null }, { transaction });
+    const [row] = await database().query<{ refunded_cents: number; total_cents: number; status: string }>(
       `UPDATE orders SET refunded_cents = GREATEST(refunded_cents,
               (SELECT COALESCE(SUM(amount_cents), 0) FROM refunds WHERE order_id = :orderId AND status = 'succeeded')),
               updated_at = now()
-        WHERE id = :orderId`,
-      { replacements: { orderId: intent.orderId }, transaction },
+        WHERE id = :orderId RETURNING refunded_cents, total_cents, status`,
+      { replacements: { orderId: intent.orderId }, type: QueryTypes.SELECT, transaction },
     );
+    if (intent.kind === 'owner' && order && row) {
+      if (row.refunded_cents >= row.total_cents && row.status === 'paid') {
+        const released = await releaseOrder(order.id, ['paid'], 'refunded', transaction);
+        if (released) await offerFreedCapacity(order.bakeDayId, transaction);
+      }
+      await queueRefundNotice(order.id, intent.id, intent.amountCents, transaction);
+      await audit({ actorId: intent.requestedBy, action: 'order.refunded', subjectType: 'order', subjectId: order.id, details: { amountCents: intent.amountCents, reason: intent.reason } }, transaction);
+    }
     return intent;
   });
+}
+
+const afterCommit = new WeakMap<Transaction, Array<() => Promise<unknown>>>();
+
+/** Work for the payments service once `transaction` has committed: run by runAfterCommit (a failure is left to the retry jobs). */
+export function afterCommitting(transaction: Transaction, work: () => Promise<unknown>): void {
+  const list = afterCommit.get(transaction) ?? [];
+  list.push(work);
+  afterCommit.set(transaction, list);
+}
+
+/** Sends an intent once its transaction has committed. */
+export function sendAfterCommit(refundId: string, transaction: Transaction): void {
+  afterCommitting(transaction, () => sendRefundIntent(refundId));
+}
+
+/** Runs what afterCommitting queued for a committed transaction; failures are logged where they happen and retried by the jobs. */
+export async function runAfterCommit(transaction: Transaction | null): Promise<void> {
+  if (!transaction) return;
+  const list = afterCommit.get(transaction) ?? [];
+  afterCommit.delete(transaction);
+  for (const work of list) await work().catch(() => {});
 }
 
 /** Sends intents still pending after `olderThanMs` (the job); returns how many were confirmed. */

@@ -1,12 +1,9 @@
-import { formatCents, type Me } from '@fryline/schemas';
+import type { Me } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { Order, Refund } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
-import { refundPayment } from './checkout.js';
-import { releaseOrder } from './capacity.js';
-import { queueRefundNotice } from './order-mails.js';
-import { offerFreedCapacity } from './waitlist.js';
 import { audit } from './audit.js';
+import { recordRefundIntent, sendRefundIntent } from './refund-intents.js';
 
 export interface RefundView {
   id: string;
@@ -18,43 +15,49 @@ export interface RefundView {
 }
 
 /**
- * The owner refunds part or all of a paid order, at any time. The client's
- * request key makes a double-click refund once; the order row lock makes two
- * different refunds queue up, so the total can never be exceeded.
+ * The owner refunds part or all of a paid order, at any time. The refund is
+ * recorded as an intent under the order's row lock before the payments
+ * service is called (so two refunds queue up and the total can never be
+ * exceeded), then sent with a key made from the order and the new refunded
+ * total, then confirmed. The client's request key makes a double-click
+ * refund once; asking again for an amount still being confirmed (a reopened
+ * dialog after a failure) finishes that refund instead of making a second.
  */
 export async function refundOrder(owner: Me, orderId: string, amountCents: number, reason: string, requestKey: string): Promise<RefundView> {
-  const refund = await database().transaction(async (transaction) => {
+  const earlier = await Refund.findOne({ where: { requestKey } });
+  if (earlier) {
+    if (earlier.orderId !== orderId || earlier.amountCents !== amountCents) {
+      throw new AppError('idempotency_mismatch', 'This request key was already used for a different refund', 409);
+    }
+    return view(await sendRefundIntent(earlier.id));
+  }
+  const unconfirmed = await Refund.findOne({ where: { orderId, status: 'pending', amountCents, kind: 'owner' }, order: [['createdAt', 'ASC']] });
+  if (unconfirmed) return view(await sendRefundIntent(unconfirmed.id));
+
+  const intent = await database().transaction(async (transaction) => {
     const order = await Order.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!order) throw notFound('Order');
-    const earlier = await Refund.findOne({ where: { requestKey }, transaction });
-    if (earlier) {
-      if (earlier.orderId !== orderId || earlier.amountCents !== amountCents) {
-        throw new AppError('idempotency_mismatch', 'This request key was already used for a different refund', 409);
-      }
-      return earlier;
+    // a double click: the first request recorded it while this one waited for the lock
+    const twin = await Refund.findOne({ where: { requestKey }, transaction });
+    if (twin) {
+      if (twin.orderId !== orderId || twin.amountCents !== amountCents) throw new AppError('idempotency_mismatch', 'This request key was already used for a different refund', 409);
+      return twin;
     }
     if (!order.paymentIntentId || !['paid', 'collected', 'no_show', 'cancelled', 'refunded'].includes(order.status)) {
       throw new AppError('not_refundable', 'This order has no payment to refund', 409);
     }
-    const left = order.totalCents - order.refundedCents;
-    if (amountCents > left) {
-      throw new AppError('over_refund', `At most ${formatCents(left)} can still be refunded on this order`, 400, {
-        fields: { amountCents: `At most ${formatCents(left)} can still be refunded` },
-      });
-    }
-    const row = await refundPayment(order, amountCents, 'requested_by_customer', requestKey, owner.id, transaction, reason);
-    if (amountCents === left && order.status === 'paid') {
-      const released = await releaseOrder(order.id, ['paid'], 'refunded', transaction);
-      if (released) await offerFreedCapacity(order.bakeDayId, transaction);
-    }
-    await queueRefundNotice(order.id, row.id, amountCents, transaction);
-    await audit({ actorId: owner.id, action: 'order.refunded', subjectType: 'order', subjectId: order.id, details: { amountCents, reason } }, transaction);
+    const row = await recordRefundIntent(order, amountCents, reason, { kind: 'owner', requestedBy: owner.id, requestKey }, transaction);
+    await audit({ actorId: owner.id, action: 'order.refund_requested', subjectType: 'order', subjectId: order.id, details: { amountCents, reason } }, transaction);
     return row;
   });
-  const order = await Order.findByPk(orderId);
+  return view(await sendRefundIntent(intent.id));
+}
+
+async function view(refund: Refund): Promise<RefundView> {
+  const order = await Order.findByPk(refund.orderId);
   return {
     id: refund.id,
-    orderId,
+    orderId: refund.orderId,
     amountCents: refund.amountCents,
     reason: refund.reason,
     createdAt: refund.createdAt.toISOString(),

@@ -13,11 +13,35 @@ import { context } from './context.js';
 
 export const OFFER_MINUTES = 30;
 
+/**
+ * Puts a customer on a bake day's waitlist: only when the day can't take
+ * their request now (sold out for it), and never for more than their share
+ * of the day (what they already ordered counts).
+ */
 export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, holes: number) {
   const day = await BakeDay.findByPk(bakeDayId);
   if (!day || day.status !== 'published') throw notFound('Bake day');
   if (new Date() >= day.cutoffAt) throw new AppError('closed', 'Orders for this bake day are closed', 409);
   const existing = await WaitlistEntry.findOne({ where: { bakeDayId, userId: user.id, status: { [Op.in]: ['waiting', 'offered'] } } });
+  if (!existing) {
+    const { maxPiecesPerCustomer } = await shopSettings();
+    const [mine] = await database().query<{ pieces: number }>(
+      `SELECT COALESCE(SUM(rings + holes), 0)::int AS pieces FROM orders WHERE user_id = :userId AND bake_day_id = :bakeDayId AND status IN ('held', 'paid', 'collected', 'no_show')`,
+      { replacements: { userId: user.id, bakeDayId }, type: QueryTypes.SELECT },
+    );
+    const already = mine?.pieces ?? 0;
+    if (rings + holes + already > maxPiecesPerCustomer) {
+      throw new AppError('limit_exceeded', `Each customer can ask for up to ${maxPiecesPerCustomer} pieces for one bake day${already ? `; you already have ${already}` : ''}.`, 409, {
+        limit: maxPiecesPerCustomer,
+        alreadyOrdered: already,
+      });
+    }
+    if (day.ringsRemaining >= rings && day.holesRemaining >= holes) {
+      throw new AppError('not_sold_out', 'There are still enough left for this: order them now instead of waiting.', 409, {
+        remaining: { rings: day.ringsRemaining, holes: day.holesRemaining },
+      });
+    }
+  }
   const entry = existing ?? (await WaitlistEntry.create({ bakeDayId, userId: user.id, rings, holes }));
   const position = await WaitlistEntry.count({ where: { bakeDayId, status: 'waiting', createdAt: { [Op.lte]: entry.createdAt } } });
   return { id: entry.id, position, status: entry.status, rings: entry.rings, holes: entry.holes };

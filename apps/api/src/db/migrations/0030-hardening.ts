@@ -22,6 +22,9 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     -- with the same key, so it is made once however often it is retried
     ALTER TABLE refunds
       ADD COLUMN status text NOT NULL DEFAULT 'succeeded' CHECK (status IN ('pending', 'succeeded', 'failed')),
+      -- owner: the owner's refund (mailed to the customer when confirmed); cancel: a customer's cancellation;
+      -- late: a payment that came after its hold lapsed and found the pieces gone
+      ADD COLUMN kind text NOT NULL DEFAULT 'owner' CHECK (kind IN ('owner', 'cancel', 'late')),
       ADD COLUMN provider_key text UNIQUE,
       ADD COLUMN refunded_total_cents integer CHECK (refunded_total_cents > 0),
       ADD COLUMN last_error text,
@@ -56,7 +59,7 @@ export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.sequelize.query(`
     DROP TABLE IF EXISTS job_cursors, payment_flags, rate_limit_hits;
     DROP INDEX IF EXISTS refunds_pending;
-    ALTER TABLE refunds DROP COLUMN IF EXISTS status, DROP COLUMN IF EXISTS provider_key,
+    ALTER TABLE refunds DROP COLUMN IF EXISTS status, DROP COLUMN IF EXISTS kind, DROP COLUMN IF EXISTS provider_key,
       DROP COLUMN IF EXISTS refunded_total_cents, DROP COLUMN IF EXISTS last_error, DROP COLUMN IF EXISTS confirmed_at;
     ALTER TABLE shop_settings DROP COLUMN IF EXISTS max_pieces_per_customer;
   `);

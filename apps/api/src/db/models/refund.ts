@@ -11,6 +11,7 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
   declare requestedBy: string | null;
   /** pending (recorded, not yet confirmed by the payments service), succeeded, or failed (refused for good). */
   declare status: CreationOptional<'pending' | 'succeeded' | 'failed'>;
+  declare kind: CreationOptional<'owner' | 'cancel' | 'late'>;
   /** The idempotency key the payments service sees: the order and the refunded total this refund brings it to. */
   declare providerKey: CreationOptional<string | null>;
   declare refundedTotalCents: CreationOptional<number | null>;
@@ -29,6 +30,7 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
         reason: { type: DataTypes.TEXT, allowNull: false },
         requestedBy: { type: DataTypes.UUID, allowNull: true },
         status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'succeeded' },
+        kind: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'owner' },
         providerKey: { type: DataTypes.TEXT, allowNull: true },
         refundedTotalCents: { type: DataTypes.INTEGER, allowNull: true },
         lastError: { type: DataTypes.TEXT, allowNull: true },
