@@ -51,8 +51,9 @@ export async function expireCheckout(sessionId: string): Promise<'expired' | 'co
     const session = await payments.checkout.sessions.expire(sessionId);
     return (session.status ?? 'expired') as 'expired' | 'complete' | 'open';
   } catch (err) {
+    // already complete or expired is an answer; still open means the expiry didn't happen
     const session = await payments.checkout.sessions.retrieve(sessionId).catch(() => null);
-    if (!session) throw err;
-    return (session.status ?? 'open') as 'expired' | 'complete' | 'open';
+    if (!session || session.status === 'open') throw err;
+    return session.status as 'expired' | 'complete';
   }
 }
