@@ -6,7 +6,7 @@ import { AuditEntry, BakeDay, BakeDayBox, Order, OutboxMessage, Refund, ShopSett
 import { database } from '../src/db/sequelize.js';
 import { context } from '../src/services/context.js';
 import { reconcilePayments } from '../src/jobs/payment-reconciler.js';
-import { Browser, WEBHOOK_SECRET, signIn, useStack } from './support.js';
+import { customerAndOwner, type Browser, WEBHOOK_SECRET, useStack } from './support.js';
 import { CARD_OK, halfDozen, openDay, orderAndPay, sessionIdOf } from './order-helpers.js';
 
 // Payments that reconcile to the cent and refunds made exactly once, checked
@@ -17,10 +17,7 @@ let customer: Browser;
 let owner: Browser;
 
 beforeEach(async () => {
-  customer = new Browser(stack.url);
-  await signIn(customer, 'customer@fryline.test');
-  owner = new Browser(stack.url);
-  await signIn(owner, 'owner@fryline.test');
+  ({ customer, owner } = await customerAndOwner(stack));
 });
 
 /** A dozen of rings without surcharge, in a box the test prices at $32.50. */

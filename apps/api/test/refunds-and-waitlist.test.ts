@@ -1,17 +1,14 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay, Order, OutboxMessage, Refund, WaitlistEntry } from '../src/db/models/index.js';
 import { lapseOffers, OFFER_MINUTES } from '../src/services/waitlist.js';
-import { Browser, signIn, useStack } from './support.js';
+import { Browser, customerAndOwner, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay, remaining } from './order-helpers.js';
 
 const stack = useStack();
 let customer: Browser;
 let owner: Browser;
 beforeEach(async () => {
-  customer = new Browser(stack.url);
-  await signIn(customer, 'customer@fryline.test');
-  owner = new Browser(stack.url);
-  await signIn(owner, 'owner@fryline.test');
+  ({ customer, owner } = await customerAndOwner(stack));
 });
 
 const refund = (orderId: string, amountCents: number, key: string) =>

@@ -154,6 +154,15 @@ export async function signIn(browser: Browser, email: string, opts: { returnTo?:
   return { status: done.status, location: done.headers.get('location'), callback };
 }
 
+/** The demo customer and the owner, each signed in through the real flow in a browser of their own. */
+export async function customerAndOwner(stack: Stack): Promise<{ customer: Browser; owner: Browser }> {
+  const customer = new Browser(stack.url);
+  await signIn(customer, 'customer@fryline.test');
+  const owner = new Browser(stack.url);
+  await signIn(owner, 'owner@fryline.test');
+  return { customer, owner };
+}
+
 /**
  * Starts the stack once for a test file and gives every test fresh data:
  * tables emptied, the fakes reset, and (unless `demo: false`) the demo
