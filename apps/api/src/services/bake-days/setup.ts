@@ -1,12 +1,12 @@
 import { DateTime } from 'luxon';
 import { Op } from 'sequelize';
 import type { BakeDayView, CreateBakeDayInput, Me, MenuItemAdminView, StaffMemberInput, StaffMemberView } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../db/models/index.js';
-import { AppError, notFound } from '../lib/app-error.js';
-import { audit } from './audit.js';
+import { database } from '../../db/sequelize.js';
+import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../../db/models/index.js';
+import { AppError, notFound } from '../../lib/app-error.js';
+import { audit } from '../audit/audit.js';
 import { findBakeDay, toView } from './bake-days.js';
-import { currentPlanningBasis, cutoffFromSchedule, equipmentCapacity } from './production.js';
+import { currentPlanningBasis, cutoffFromSchedule, equipmentCapacity } from '../production/production.js';
 
 const invalidField = (field: string, message: string) => new AppError('invalid', `${field}: ${message}`, 400, { fields: { [field]: message } });
 

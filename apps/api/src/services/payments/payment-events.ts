@@ -1,14 +1,14 @@
 import type Stripe from 'stripe';
 import { QueryTypes, type Transaction } from 'sequelize';
-import { database } from '../db/sequelize.js';
-import { Order } from '../db/models/index.js';
-import { context } from './context.js';
-import { releaseOrder, takeCapacity, takeWindowSlot } from './capacity.js';
-import { newPickupCode } from './pickup-codes.js';
-import { queueConfirmation, queueLateRefundApology } from './order-mails.js';
-import { refundPayment } from './checkout.js';
-import { offerFreedCapacity } from './waitlist.js';
-import { audit } from './audit.js';
+import { database } from '../../db/sequelize.js';
+import { Order } from '../../db/models/index.js';
+import { context } from '../../integrations/context.js';
+import { releaseOrder, takeCapacity, takeWindowSlot } from '../../db/queries/capacity.js';
+import { newPickupCode } from '../orders/pickup-codes.js';
+import { queueConfirmation, queueLateRefundApology } from '../mail/order-mails.js';
+import { refundPayment } from '../../integrations/checkout.js';
+import { offerFreedCapacity } from '../waitlist/waitlist.js';
+import { audit } from '../audit/audit.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}

@@ -1,17 +1,17 @@
 import QRCode from 'qrcode';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import type { CreatedOrder, CreateOrderInput, Me, OrderDetail } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { BakeDay, Order, OrderBox, OrderLine, PickupWindow } from '../db/models/index.js';
-import { AppError, notFound } from '../lib/app-error.js';
-import { getBakeDay } from './bake-days.js';
+import { database } from '../../db/sequelize.js';
+import { BakeDay, Order, OrderBox, OrderLine, PickupWindow } from '../../db/models/index.js';
+import { AppError, notFound } from '../../lib/app-error.js';
+import { getBakeDay } from '../bake-days/bake-days.js';
 import { checkOrder, type CheckedOrder } from './order-rules.js';
-import { releaseOrder, takeCapacity, takeWindowSlot, giveBackWindowSlot } from './capacity.js';
-import { context } from './context.js';
-import { audit } from './audit.js';
-import { queueCancellation } from './order-mails.js';
-import { claimOffer, offerFreedCapacity } from './waitlist.js';
-import { expireCheckout, openCheckout, refundPayment } from './checkout.js';
+import { releaseOrder, takeCapacity, takeWindowSlot, giveBackWindowSlot } from '../../db/queries/capacity.js';
+import { context } from '../../integrations/context.js';
+import { audit } from '../audit/audit.js';
+import { queueCancellation } from '../mail/order-mails.js';
+import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
+import { expireCheckout, openCheckout, refundPayment } from '../../integrations/checkout.js';
 
 const orderInclude = [
   { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },

@@ -2,12 +2,12 @@ import QRCode from 'qrcode';
 import { DateTime } from 'luxon';
 import type { Transaction } from 'sequelize';
 import { formatCents } from '@fryline/schemas';
-import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../db/models/index.js';
+import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
 import { enqueueMail } from './outbox.js';
-import { renderMail } from './mail-templates.js';
-import { shopSettings } from './settings.js';
-import { pickupCalendar } from './calendar.js';
-import { context } from './context.js';
+import { renderMail } from './templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { pickupCalendar } from '../orders/calendar.js';
+import { context } from '../../integrations/context.js';
 
 interface Loaded {
   order: Order;

@@ -5,11 +5,11 @@ import {
   type BakePlan, type BoxOffer, type Formula, type OrderLine, type PlanBakeInput,
 } from '@fryline/production';
 import type { FormulaInput, PlanMeta, ProductionSettingsInput } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { BakeDay, FormulaVersion, ProductionSettings } from '../db/models/index.js';
-import { AppError, notFound } from '../lib/app-error.js';
-import { audit } from './audit.js';
-import { findBakeDay } from './bake-days.js';
+import { database } from '../../db/sequelize.js';
+import { BakeDay, FormulaVersion, ProductionSettings } from '../../db/models/index.js';
+import { AppError, notFound } from '../../lib/app-error.js';
+import { audit } from '../audit/audit.js';
+import { findBakeDay } from '../bake-days/bake-days.js';
 
 /** Fallback prices (cents per kg) when the owner has entered none: our own round figures. */
 const DEFAULT_PRICES: ProductionSettingsInput['prices'] = { centsPerKg: {}, fryingOilCentsPerKg: 300, oilBakesPerFill: 3 };

@@ -1,12 +1,12 @@
 import { formatCents, type Me } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { Order, Refund } from '../db/models/index.js';
-import { AppError, notFound } from '../lib/app-error.js';
-import { refundPayment } from './checkout.js';
-import { releaseOrder } from './capacity.js';
-import { queueRefundNotice } from './order-mails.js';
-import { offerFreedCapacity } from './waitlist.js';
-import { audit } from './audit.js';
+import { database } from '../../db/sequelize.js';
+import { Order, Refund } from '../../db/models/index.js';
+import { AppError, notFound } from '../../lib/app-error.js';
+import { refundPayment } from '../../integrations/checkout.js';
+import { releaseOrder } from '../../db/queries/capacity.js';
+import { queueRefundNotice } from '../mail/order-mails.js';
+import { offerFreedCapacity } from '../waitlist/waitlist.js';
+import { audit } from '../audit/audit.js';
 
 export interface RefundView {
   id: string;

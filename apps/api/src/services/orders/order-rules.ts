@@ -1,6 +1,6 @@
 import type { BakeDayView, BoxSize, CreateOrderInput, PieceKind } from '@fryline/schemas';
 import { priceOrder, type OrderPrice } from '@fryline/schemas';
-import { AppError } from '../lib/app-error.js';
+import { AppError } from '../../lib/app-error.js';
 
 const kindFor: Record<BoxSize, PieceKind> = { dozen: 'ring', 'half-dozen': 'ring', holes: 'hole' };
 

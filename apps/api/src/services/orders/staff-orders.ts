@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import type { StaffOrderView } from '@fryline/schemas';
-import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../db/models/index.js';
-import { notFound } from '../lib/app-error.js';
+import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
+import { notFound } from '../../lib/app-error.js';
 
 /** Every order of a bake day that was ever paid or is on hold, for the staff, by pickup window then name. */
 export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderView[]> {

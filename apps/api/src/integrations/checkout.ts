@@ -3,8 +3,8 @@ import type { Transaction } from 'sequelize';
 import type { BakeDayView, Me } from '@fryline/schemas';
 import { Order, Refund } from '../db/models/index.js';
 import { context } from './context.js';
-import type { CheckedOrder } from './order-rules.js';
-import { shopSettings } from './settings.js';
+import type { CheckedOrder } from '../services/orders/order-rules.js';
+import { shopSettings } from '../services/shop/settings.js';
 
 const boxNames = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' } as const;
 

@@ -2,14 +2,14 @@ import crypto from 'node:crypto';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { DateTime } from 'luxon';
 import type { Me, WaitlistEntryView, WaitlistOfferView } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { BakeDay, User, WaitlistEntry } from '../db/models/index.js';
-import { AppError, notFound } from '../lib/app-error.js';
-import { giveBackCapacity, takeCapacity } from './capacity.js';
-import { enqueueMail } from './outbox.js';
-import { renderMail } from './mail-templates.js';
-import { shopSettings } from './settings.js';
-import { context } from './context.js';
+import { database } from '../../db/sequelize.js';
+import { BakeDay, User, WaitlistEntry } from '../../db/models/index.js';
+import { AppError, notFound } from '../../lib/app-error.js';
+import { giveBackCapacity, takeCapacity } from '../../db/queries/capacity.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { renderMail } from '../mail/templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { context } from '../../integrations/context.js';
 
 export const OFFER_MINUTES = 30;
 

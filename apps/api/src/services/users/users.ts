@@ -1,12 +1,12 @@
 import { Op } from 'sequelize';
 import type { Me } from '@fryline/schemas';
-import { database } from '../db/sequelize.js';
-import { User } from '../db/models/index.js';
-import { AppError } from '../lib/app-error.js';
-import { enqueueMail } from './outbox.js';
-import { welcomeMail } from './mail-templates.js';
-import { shopSettings } from './settings.js';
-import { audit } from './audit.js';
+import { database } from '../../db/sequelize.js';
+import { User } from '../../db/models/index.js';
+import { AppError } from '../../lib/app-error.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { welcomeMail } from '../mail/templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { audit } from '../audit/audit.js';
 
 export interface ProviderProfile {
   sub: string;

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { TaxSetting } from '@fryline/schemas';
-import { ShopSettings } from '../db/models/index.js';
+import { ShopSettings } from '../../db/models/index.js';
 
 export interface Settings {
   shopName: string;

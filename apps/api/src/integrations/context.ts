@@ -1,6 +1,6 @@
 import type Stripe from 'stripe';
 import type { Config } from '../config/env.js';
-import { createPaymentsClient } from '../integrations/payments.js';
+import { createPaymentsClient } from './payments.js';
 
 // The process-wide configuration and payments client that services need.
 // Set once by createApp (or a job runner), like the database connection.

@@ -1,9 +1,9 @@
 import { Op } from 'sequelize';
 import { DateTime } from 'luxon';
 import type { BakeDayStatus, BakeDayView, BoxSize, Allergen } from '@fryline/schemas';
-import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../db/models/index.js';
-import { notFound } from '../lib/app-error.js';
-import { shopSettings } from './settings.js';
+import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../../db/models/index.js';
+import { notFound } from '../../lib/app-error.js';
+import { shopSettings } from '../shop/settings.js';
 
 const boxLabels: Record<BoxSize, string> = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' };
 const boxOrder: BoxSize[] = ['dozen', 'half-dozen', 'holes'];

@@ -1,5 +1,5 @@
 import { QueryTypes, type Transaction } from 'sequelize';
-import { database } from '../db/sequelize.js';
+import { database } from '../sequelize.js';
 
 // Capacity moves only through single conditional statements: the check and
 // the change happen in one UPDATE, backed by CHECK (remaining >= 0) in the

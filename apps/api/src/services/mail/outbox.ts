@@ -1,6 +1,6 @@
 import crypto from 'node:crypto';
 import type { Transaction } from 'sequelize';
-import { OutboxMessage, type StoredAttachment } from '../db/models/index.js';
+import { OutboxMessage, type StoredAttachment } from '../../db/models/index.js';
 
 export interface MailInput {
   kind: string;

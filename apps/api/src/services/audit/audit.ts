@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { AuditEntry } from '../db/models/index.js';
+import { AuditEntry } from '../../db/models/index.js';
 
 export async function audit(
   entry: { actorId: string | null; action: string; subjectType: string; subjectId?: string | null; details?: Record<string, unknown> },
