@@ -1,12 +1,11 @@
 import { Component, type ReactNode } from 'react';
-import { PageTitle } from '../../components/page-title';
 
 interface State {
   failed: boolean;
 }
 
-/** Keeps the header and footer up when a page fails to render, and offers a reload. */
-export class PageErrorBoundary extends Component<{ children: ReactNode }, State> {
+/** Keeps the header (and footer) up when a page fails to render, and offers a reload. */
+export class PageErrorBoundary extends Component<{ appName: string; children: ReactNode }, State> {
   override state: State = { failed: false };
 
   static getDerivedStateFromError(): State {
@@ -17,7 +16,7 @@ export class PageErrorBoundary extends Component<{ children: ReactNode }, State>
     if (!this.state.failed) return this.props.children;
     return (
       <section role="alert" className="flex flex-col items-start gap-4">
-        <PageTitle>Something went wrong</PageTitle>
+        <title>{`Something went wrong · ${this.props.appName}`}</title>
         <h1 tabIndex={-1} className="text-3xl">
           Something went wrong on this page
         </h1>

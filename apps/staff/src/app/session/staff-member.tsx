@@ -1,6 +1,6 @@
 import { createContext, useContext, type ReactNode } from 'react';
 import { hasRole, type Me } from '@fryline/schemas';
-import type { StaffRole } from '../../../config/sections';
+import type { StaffRole } from '../../config/sections';
 
 export type StaffMember = Me & { role: StaffRole };
 

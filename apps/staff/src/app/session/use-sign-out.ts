@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 /** Ends the session; the caller then leaves for the shop's front page. */
 export function useSignOut() {

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { Me } from '@fryline/schemas';
-import { fetchCurrentUser } from '../../../lib/api-client';
-import { queryRoots } from '../../../lib/query-keys';
+import { fetchCurrentUser } from '@fryline/ui/api-client';
+import { queryRoots } from '../../lib/query-keys';
 
 export const meQueries = {
   /** Who is signed in (null: nobody). Roles can change, so this is asked again on focus. */

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { errorMessage } from '../lib/api-client';
+import { errorMessage } from './api-client';
 
 export function LoadingState({ label = 'Loading…' }: { label?: string }) {
   return (

@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import { errorMessage } from '../../../lib/api-client';
-import { useSignOut } from '../api/use-sign-out';
+import { errorMessage } from '@fryline/ui/api-client';
+import { useSignOut } from './use-sign-out';
 
 export function SignOutButton() {
   const signOut = useSignOut();

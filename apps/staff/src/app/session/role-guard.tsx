@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { roleNames, type StaffRole } from '../../../config/sections';
+import { roleNames, type StaffRole } from '../../config/sections';
 import { useCan } from './staff-member';
 
 /** Renders the page only for roles at or above `minRole`; others get a plain explanation. */
