@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
 import { Op } from 'sequelize';
-import type { BakeDayView, CreateBakeDayInput, Me, MenuItemAdminView, StaffMemberInput, StaffMemberView } from '@fryline/schemas';
+import { boxTakes, type BakeDayView, type CreateBakeDayInput, type Me, type MenuItemAdminView, type StaffMemberInput, type StaffMemberView } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
@@ -32,7 +32,7 @@ export async function createBakeDay(owner: Me, input: CreateBakeDayInput, now: D
   const items = await MenuItem.findAll({ where: { id: { [Op.in]: input.menuItemIds }, active: true } });
   if (items.length !== new Set(input.menuItemIds).size) throw invalidField('menuItemIds', 'One of these items is not on the menu any more');
   for (const box of input.boxes) {
-    const kind = box.size === 'holes' ? 'hole' : 'ring';
+    const kind = boxTakes(box.size);
     if (!items.some((m) => m.kind === kind)) throw invalidField('boxes', `No ${kind} on this day's menu to fill ${box.size} boxes`);
   }
 
