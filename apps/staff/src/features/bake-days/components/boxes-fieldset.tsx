@@ -1,7 +1,7 @@
 import { useWatch } from 'react-hook-form';
 import type { BoxSize } from '@fryline/schemas';
 import { ListError } from '../../../components/row-controls';
-import { Field } from './field';
+import { FieldShell } from '@fryline/ui';
 import type { NewBakeDayForm } from './pickup-windows-fieldset';
 
 const boxWords: Record<BoxSize, { offer: string; price: string }> = {
@@ -36,7 +36,7 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
               </label>
               {box.offered && (
                 <div className="mt-2 grid grid-cols-2 gap-3 sm:max-w-md">
-                  <Field id={`${id}-price`} label={`${words.price} ($)`} error={rowErrors?.price?.message}>
+                  <FieldShell id={`${id}-price`} label={`${words.price} ($)`} error={rowErrors?.price?.message}>
                     {(input) => (
                       <div className="relative">
                         <span aria-hidden="true" className="absolute inset-y-0 left-3 flex items-center font-semibold text-muted">
@@ -52,13 +52,13 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
                         />
                       </div>
                     )}
-                  </Field>
+                  </FieldShell>
                   {box.size === 'holes' && (
-                    <Field id={`${id}-pieces`} label="Holes in a bag" error={rowErrors?.pieces?.message}>
+                    <FieldShell id={`${id}-pieces`} label="Holes in a bag" error={rowErrors?.pieces?.message}>
                       {(input) => (
                         <input {...input} type="number" inputMode="numeric" min={1} max={60} step={1} {...register(`boxes.${index}.pieces`, { valueAsNumber: true })} />
                       )}
-                    </Field>
+                    </FieldShell>
                   )}
                 </div>
               )}
