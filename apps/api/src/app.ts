@@ -23,6 +23,7 @@ import { menuItemsRouter } from './routes/menu-items.js';
 import { productionRouter } from './routes/production.js';
 import { setContext } from './integrations/context.js';
 import { requestClock } from './middleware/request-clock.js';
+import { requestLog } from './middleware/request-log.js';
 import { checkResponsesAgainstContract } from './lib/route.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -52,6 +53,7 @@ export function createApp(config: Config) {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.set('query parser', 'extended');
+  app.use(requestLog);
 
   // Everything the apps load comes from this origin; images may be data: URLs (QR codes).
   app.use(

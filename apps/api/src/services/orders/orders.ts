@@ -12,6 +12,7 @@ import { audit } from '../audit/audit.js';
 import { queueCancellation } from '../mail/order-mails.js';
 import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
 import { expireCheckout, openCheckout, refundPayment } from '../../integrations/checkout.js';
+import { logger } from '../../lib/logger.js';
 
 const orderInclude = [
   { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
@@ -134,7 +135,7 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     await database().transaction(async (transaction) => {
       if (await releaseOrder(order.id, ['held'], 'expired', transaction)) await offerFreedCapacity(day.id, transaction, now);
     });
-    console.error('[orders] checkout could not be opened:', (err as Error).message);
+    logger.error({ err, orderId: order.id }, 'checkout could not be opened');
     throw new AppError('payments_unavailable', 'Card payments are not available right now. Nothing was charged; please try again shortly.', 502);
   }
 }

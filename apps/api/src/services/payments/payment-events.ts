@@ -9,6 +9,7 @@ import { queueConfirmation, queueLateRefundApology } from '../mail/order-mails.j
 import { refundPayment } from '../../integrations/checkout.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
+import { logger } from '../../lib/logger.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}
@@ -83,7 +84,7 @@ async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transa
   if (session.payment_status !== 'paid') return { orderId: order.id, outcome: 'not paid yet' };
   const paymentIntentId = intentIdOf(session.payment_intent as string | { id: string } | null);
   if (session.amount_total !== order.totalCents) {
-    console.error(`[payments] order ${order.id}: paid ${session.amount_total} but total is ${order.totalCents}`);
+    logger.error({ orderId: order.id, paidCents: session.amount_total, totalCents: order.totalCents }, 'paid amount differs from the order total');
   }
   switch (order.status) {
     case 'held':
