@@ -4,7 +4,7 @@ import type { BakeDayView } from '@fryline/schemas';
 import { signatureHeader } from '@fryline/fake-payments';
 import { AuditEntry, BakeDay, BakeDayBox, Order, OutboxMessage, Refund, ShopSettings } from '../src/db/models/index.js';
 import { database } from '../src/db/sequelize.js';
-import { context } from '../src/services/context.js';
+import { context } from '../src/integrations/context.js';
 import { reconcilePayments } from '../src/jobs/payment-reconciler.js';
 import { customerAndOwner, type Browser, WEBHOOK_SECRET, useStack } from './support.js';
 import { CARD_OK, halfDozen, openDay, orderAndPay, sessionIdOf } from './order-helpers.js';

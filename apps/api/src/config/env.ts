@@ -37,6 +37,7 @@ const envSchema = z
     READ_CACHE_MS: z.coerce.number().int().min(0).max(60_000).optional(),
     /** How long SIGTERM waits for requests in flight before closing their connections. */
     SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(120_000).default(10_000),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     STATIC_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {

@@ -1,11 +1,12 @@
 import { Op } from 'sequelize';
 import { database } from '../db/sequelize.js';
 import { Order } from '../db/models/index.js';
-import { releaseOrder } from '../services/capacity.js';
-import { expireCheckout } from '../services/checkout.js';
-import { lapseOffers, offerFreedCapacity } from '../services/waitlist.js';
-import { applyCompletedSession } from '../services/payment-events.js';
-import { describePaymentsError } from '../services/payments-errors.js';
+import { releaseOrder } from '../db/queries/capacity.js';
+import { expireCheckout } from '../integrations/checkout.js';
+import { lapseOffers, offerFreedCapacity } from '../services/waitlist/waitlist.js';
+import { applyCompletedSession } from '../services/payments/payment-events.js';
+import { describePaymentsError } from '../services/payments/errors.js';
+import { logger } from '../lib/logger.js';
 
 /** How long a checkout session lives at the payments service (see openCheckout), plus a minute's slack. */
 const SESSION_LIFETIME_MS = 32 * 60_000;
@@ -29,11 +30,11 @@ export async function sweepHolds(now: Date): Promise<{ expired: number; lapsedOf
         status = await expireCheckout(order.checkoutSessionId);
       } catch (err) {
         if (now.getTime() - order.createdAt.getTime() < SESSION_LIFETIME_MS) continue;
-        console.error(`[holds] order ${order.id}: payments service unreachable (${describePaymentsError(err)}); its session is past its own expiry, releasing the hold`);
+        logger.warn({ orderId: order.id, payments: describePaymentsError(err) }, 'payments service unreachable; the session is past its own expiry, releasing the hold');
         status = 'expired';
       }
       if (status === 'complete') {
-        await applyCompletedSession(order.checkoutSessionId).catch((err) => console.error(`[holds] order ${order.id}: ${describePaymentsError(err)}`));
+        await applyCompletedSession(order.checkoutSessionId, now).catch((err) => logger.error({ orderId: order.id, payments: describePaymentsError(err) }, 'could not record a completed checkout'));
         continue;
       }
       if (status !== 'expired') continue;
@@ -42,7 +43,7 @@ export async function sweepHolds(now: Date): Promise<{ expired: number; lapsedOf
       const released = await releaseOrder(order.id, ['held'], 'expired', transaction);
       if (released) {
         expired += 1;
-        await offerFreedCapacity(order.bakeDayId, transaction);
+        await offerFreedCapacity(order.bakeDayId, transaction, now);
       }
     });
   }

@@ -5,20 +5,21 @@ import { relayOutbox } from './outbox-relay.js';
 import { sweepHolds } from './hold-sweeper.js';
 import { queueReminders } from './reminders.js';
 import { every } from './scheduler.js';
+import { now } from '../integrations/context.js';
 import { reconcilePayments } from './payment-reconciler.js';
-import { retryPendingRefunds } from '../services/refund-intents.js';
-import { retryFlaggedRefunds } from '../services/payment-checks.js';
+import { retryPendingRefunds } from '../services/payments/refund-intents.js';
+import { retryFlaggedRefunds } from '../services/payments/payment-checks.js';
 
 /** Background work of one API process; several processes may run side by side. */
 export function startJobs(config: Config, sequelize: Sequelize): () => Promise<void> {
   const transport = createMailTransport(config);
   const stops = [
     every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM)),
-    every('holds', 5_000, () => sweepHolds(new Date())),
-    every('reminders', 60_000, () => queueReminders(new Date())),
+    every('holds', 5_000, () => sweepHolds(now())),
+    every('reminders', 60_000, () => queueReminders(now())),
     // lost webhooks and refunds the payments service didn't confirm
-    every('payments-reconcile', 60_000, () => reconcilePayments(new Date())),
-    every('refund-retries', 30_000, async () => ({ refunds: await retryPendingRefunds(), flagged: await retryFlaggedRefunds() })),
+    every('payments-reconcile', 60_000, () => reconcilePayments(now())),
+    every('refund-retries', 30_000, async () => ({ refunds: await retryPendingRefunds(now()), flagged: await retryFlaggedRefunds() })),
     // rate-limit windows that ran out only cost space
     every('rate-limits', 300_000, () => sequelize.query(`DELETE FROM rate_limit_hits WHERE resets_at < now() - interval '1 minute'`)),
   ];

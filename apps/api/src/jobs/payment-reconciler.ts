@@ -1,9 +1,9 @@
 import type Stripe from 'stripe';
 import { QueryTypes } from 'sequelize';
 import { database } from '../db/sequelize.js';
-import { context } from '../services/context.js';
-import { handlePaymentEvent } from '../services/payment-events.js';
-import { orderIdOfSession } from '../services/payment-checks.js';
+import { context } from '../integrations/context.js';
+import { handlePaymentEvent } from '../services/payments/payment-events.js';
+import { orderIdOfSession } from '../services/payments/payment-checks.js';
 
 const CURSOR = 'payments.events';
 const LOOK_BACK_SECONDS = 2 * 24 * 3600;
@@ -41,7 +41,7 @@ export async function reconcilePayments(now: Date): Promise<{ sessions: number; 
   for (const session of completed) {
     if (!unpaid.has(orderIdOfSession(session)!)) continue;
     const event = { id: `reconcile:${session.id}`, object: 'event', type: 'checkout.session.completed', created: nowSeconds, data: { object: session } } as unknown as Stripe.Event;
-    if ((await handlePaymentEvent(event)) === 'applied') sessions += 1;
+    if ((await handlePaymentEvent(event, now)) === 'applied') sessions += 1;
   }
 
   const [cursorRow] = await database().query<{ value: string }>(`SELECT value FROM job_cursors WHERE name = :name`, { replacements: { name: CURSOR }, type: QueryTypes.SELECT });
@@ -49,7 +49,7 @@ export async function reconcilePayments(now: Date): Promise<{ sessions: number; 
   let events = 0;
   let newest = Number(cursorRow?.value ?? 0);
   for await (const event of payments.events.list({ created: { gte: from }, limit: 100 })) {
-    if ((await handlePaymentEvent(event)) === 'applied') events += 1;
+    if ((await handlePaymentEvent(event, now)) === 'applied') events += 1;
     newest = Math.max(newest, event.created);
   }
   if (newest > 0) {

@@ -22,6 +22,18 @@ export interface NewOrderRow {
   maxPieces: number;
 }
 
+/** The order statuses that count against a customer's share of a bake day. */
+const COUNTED = `('held', 'paid', 'collected', 'no_show')`;
+
+/** Pieces (rings and holes) a customer holds or has bought for a bake day. */
+export async function piecesOrderedBy(userId: string, bakeDayId: string): Promise<number> {
+  const [row] = await database().query<{ pieces: number }>(
+    `SELECT COALESCE(SUM(rings + holes), 0)::int AS pieces FROM orders WHERE user_id = :userId AND bake_day_id = :bakeDayId AND status IN ${COUNTED}`,
+    { replacements: { userId, bakeDayId }, type: QueryTypes.SELECT },
+  );
+  return row?.pieces ?? 0;
+}
+
 /**
  * Inserts a held order with its boxes, lines and audit entry, unless it
  * would take the customer past their share of the day. Returns the new id,
@@ -37,7 +49,7 @@ export async function insertHeldOrder(o: NewOrderRow, transaction: Transaction):
   const [row] = await database().query<{ id: string | null; already: number }>(
     `WITH mine AS (
        SELECT COALESCE(SUM(rings + holes), 0)::int AS pieces FROM orders
-        WHERE user_id = :userId AND bake_day_id = :bakeDayId AND status IN ('held', 'paid', 'collected', 'no_show')
+        WHERE user_id = :userId AND bake_day_id = :bakeDayId AND status IN ${COUNTED}
      ), o AS (
        INSERT INTO orders (user_id, bake_day_id, pickup_window_id, status, rings, holes, subtotal_cents, tax_cents, total_cents, hold_expires_at)
        SELECT :userId, :bakeDayId, :pickupWindowId, 'held', :rings, :holes, :subtotalCents, :taxCents, :totalCents, :holdExpiresAt
