@@ -7,6 +7,7 @@ import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import { isPlainText } from '@fryline/schemas';
 import { createPool } from './db/availability.js';
+import { logger } from './lib/logger.js';
 import type { Config } from './config/env.js';
 import { configurePassport } from './integrations/passport.js';
 import { csrfProtection } from './middleware/csrf.js';
@@ -133,7 +134,7 @@ export function createApp(config: Config) {
         tableName: 'session',
         createTableIfMissing: false,
         pruneSessionInterval: config.JOBS === 'on' ? 600 : false,
-        errorLog: (...args: unknown[]) => console.error('[session store]', ...args),
+        errorLog: (...args: unknown[]) => logger.error({ sessionStore: args.map(String).join(' ').slice(0, 500) }, 'session store error'),
       }),
       resave: false,
       saveUninitialized: false,

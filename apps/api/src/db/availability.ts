@@ -1,4 +1,5 @@
 import pg from 'pg';
+import { logger } from '../lib/logger.js';
 
 // Telling "the database is not there right now" apart from a bug: those
 // answer 503 with Retry-After and the client tries again; the pools
@@ -54,7 +55,7 @@ export function createPool(connectionString: string, max: number, name: string, 
     // at most one line every 5 s, so an outage doesn't flood the log
     if (Date.now() - lastLogged > 5_000) {
       lastLogged = Date.now();
-      console.error(`[db] ${name} pool: idle connection lost (${(err as { code?: string }).code ?? err.message}); it reconnects on the next query`);
+      logger.warn({ pool: name, db: (err as { code?: string }).code ?? err.message }, 'idle database connection lost; the pool reconnects on the next query');
     }
   });
   return pool;
