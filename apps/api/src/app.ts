@@ -24,6 +24,7 @@ import { staffOrdersRouter } from './routes/staff-orders.js';
 import { staffMembersRouter } from './routes/staff-members.js';
 import { menuItemsRouter } from './routes/menu-items.js';
 import { productionRouter } from './routes/production.js';
+import { shopRulesRouter } from './routes/shop-rules.js';
 import { setContext } from './integrations/context.js';
 import { requestClock } from './middleware/request-clock.js';
 import { requestLog } from './middleware/request-log.js';
@@ -168,6 +169,7 @@ export function createApp(config: Config) {
   app.use(staffMembersRouter);
   app.use(menuItemsRouter);
   app.use(productionRouter);
+  app.use(shopRulesRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import type { BakeDayView } from '@fryline/schemas';
 import { signatureHeader } from '@fryline/fake-payments';
-import { AuditEntry, BakeDay, BakeDayBox, Order, OutboxMessage, Refund, ShopSettings } from '../src/db/models/index.js';
+import { AuditEntry, BakeDay, BakeDayBox, Order, OutboxMessage, Refund } from '../src/db/models/index.js';
 import { database } from '../src/db/sequelize.js';
 import { context } from '../src/integrations/context.js';
 import { reconcilePayments } from '../src/jobs/payment-reconciler.js';
@@ -72,6 +72,11 @@ describe('webhooks: the session is checked against the order', () => {
     const intent = (await context().payments.checkout.sessions.retrieve(sneaky.id)).payment_intent as string;
     expect((await providerRefunds(intent)).map((r) => r.amount)).toEqual([50]);
     expect(await AuditEntry.count({ where: { action: 'payment.flagged' } })).toBe(1);
+    // the owner sees it
+    const flags = await owner.getJson('/api/staff/payment-flags');
+    expect(flags.status).toBe(200);
+    expect(flags.body).toEqual([expect.objectContaining({ orderId, checkoutSessionId: sneaky.id, amountCents: 50, refundStatus: 'succeeded' })]);
+    expect((await customer.getJson('/api/staff/payment-flags')).status).toBe(403);
     expect(await OutboxMessage.count({ where: { kind: 'confirmation' } })).toBe(0);
   });
 
@@ -192,7 +197,10 @@ describe('refunds exactly once', () => {
 
 describe('fair shares', () => {
   it('an order over the per-customer limit → 409 naming the limit, nothing written', async () => {
-    await ShopSettings.update({ maxPiecesPerCustomer: 12 }, { where: { id: 1 } });
+    expect((await owner.getJson('/api/staff/order-limit')).body).toEqual({ maxPiecesPerCustomer: 36 });
+    expect((await owner.send('PUT', '/api/staff/order-limit', { maxPiecesPerCustomer: 0 })).status).toBe(400);
+    expect((await customer.send('PUT', '/api/staff/order-limit', { maxPiecesPerCustomer: 1000 })).status).toBe(403);
+    expect((await owner.send('PUT', '/api/staff/order-limit', { maxPiecesPerCustomer: 12 })).body).toEqual({ maxPiecesPerCustomer: 12 });
     const day = await openDay(stack);
     const { body } = await dozenAt3250();
     await orderAndPay(stack, customer, body);

@@ -24,6 +24,14 @@ export interface RouteOptions<E extends Endpoint> {
 
 let checkResponses = false;
 
+/** An endpoint that declares no query takes none: anything after "?" is refused, not silently ignored. */
+export const noQuery: RequestHandler = (req, _res, next) => {
+  const raw = req.originalUrl.split('?').slice(1).join('?');
+  if (raw === '') return next();
+  const names = Object.keys(req.query ?? {});
+  throw new AppError('invalid', 'This address takes no query parameters', 400, { fields: Object.fromEntries((names.length ? names : ['_']).slice(0, 20).map((n) => [n, 'Not allowed'])) });
+};
+
 /** Outside production every answer is checked against its response schema, so the contract can't drift unnoticed. */
 export function checkResponsesAgainstContract(on: boolean): void {
   checkResponses = on;
@@ -39,6 +47,7 @@ export function route<E extends Endpoint>(router: Router, endpoint: E, guards: R
   const validators: RequestHandler[] = [];
   if (endpoint.params) validators.push(validate('params', endpoint.params));
   if (endpoint.query) validators.push(validate('query', endpoint.query));
+  else validators.push(noQuery);
   if (endpoint.body) validators.push(validate('body', endpoint.body));
   const respond: RequestHandler = async (req, res) => {
     const parts = (res.locals.valid ?? {}) as Partial<RouteInput<E>>;

@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { api, type ResponseOf } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
+import { noQuery } from '../lib/route.js';
 
 export const healthRouter = Router();
 
-healthRouter.get(api.health.path, async (_req, res) => {
+healthRouter.get(api.health.path, noQuery, async (_req, res) => {
   try {
     await Promise.race([
       database().query('SELECT 1'),
@@ -13,6 +14,6 @@ healthRouter.get(api.health.path, async (_req, res) => {
     const up: ResponseOf<typeof api.health> = { ok: true, db: 'up' };
     res.json(up);
   } catch {
-    res.status(503).json({ ok: false, db: 'down' });
+    res.set('Retry-After', '2').status(503).json({ ok: false, db: 'down' });
   }
 });
