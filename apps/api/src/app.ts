@@ -19,6 +19,8 @@ import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
 import { productionRouter } from './routes/production.js';
 import { setupRouter } from './routes/setup.js';
+import { bakeDayEditRouter } from './routes/bake-day-edit.js';
+import { announcementsRouter, unsubscribeRouter } from './routes/announcements.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -75,6 +77,8 @@ export function createApp(config: Config) {
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
+  // one-click unsubscribe comes from mail programs, without cookies: before sessions and CSRF
+  app.use(unsubscribeRouter);
 
   app.use(express.json({ limit: '100kb' }));
 
@@ -108,6 +112,8 @@ export function createApp(config: Config) {
   app.use(staffOrdersRouter);
   app.use(productionRouter);
   app.use(setupRouter);
+  app.use(bakeDayEditRouter);
+  app.use(announcementsRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -5,6 +5,8 @@ import { relayOutbox } from './outbox-relay.js';
 import { sweepHolds } from './hold-sweeper.js';
 import { queueReminders } from './reminders.js';
 import { every } from './scheduler.js';
+import { runJobs } from './job-runner.js';
+import { queueAnnouncements } from '../services/announcements/index.js';
 
 /** Background work of one API process; several processes may run side by side. */
 export function startJobs(config: Config, sequelize: Sequelize): () => Promise<void> {
@@ -13,6 +15,9 @@ export function startJobs(config: Config, sequelize: Sequelize): () => Promise<v
     every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM)),
     every('holds', 5_000, () => sweepHolds(new Date())),
     every('reminders', 60_000, () => queueReminders(new Date())),
+    // call-offs and other long work; a job left by a stopped process is picked up when its lease runs out
+    every('jobs', 2_000, () => runJobs()),
+    every('announcements', 30_000, () => queueAnnouncements(new Date())),
   ];
   return async () => {
     await Promise.all(stops.map((stop) => stop()));

@@ -41,6 +41,7 @@ export async function takeWindowSlot(bakeDayId: string, windowId: string, transa
         SET orders_remaining = orders_remaining - 1, updated_at = now()
       WHERE id = :windowId AND bake_day_id = :bakeDayId
         AND (orders_remaining IS NULL OR orders_remaining >= 1)
+        AND removed_at IS NULL
       RETURNING id`,
     { replacements: { windowId, bakeDayId }, type: QueryTypes.SELECT, transaction },
   );

@@ -10,6 +10,7 @@ import { BakeDay, FormulaVersion, ProductionSettings } from '../db/models/index.
 import { AppError, notFound } from '../lib/app-error.js';
 import { audit } from './audit.js';
 import { findBakeDay } from './bake-days.js';
+import { setCapacityKeepingSold } from './bake-day-edit/capacity.js';
 
 /** Fallback prices (cents per kg) when the owner has entered none: our own round figures. */
 const DEFAULT_PRICES: ProductionSettingsInput['prices'] = { centsPerKg: {}, fryingOilCentsPerKg: 300, oilBakesPerFill: 3 };
@@ -258,21 +259,8 @@ export async function setBakeDayCapacity(userId: string, bakeDayId: string, ring
       derived,
     });
   }
-  const rows = await database().query(
-    `UPDATE bake_days
-        SET ring_capacity = :rings, rings_remaining = rings_remaining + (:rings - ring_capacity),
-            hole_capacity = :holes, holes_remaining = holes_remaining + (:holes - hole_capacity),
-            updated_at = now()
-      WHERE id = :id
-        AND rings_remaining + (:rings - ring_capacity) >= 0
-        AND holes_remaining + (:holes - hole_capacity) >= 0
-      RETURNING id`,
-    { replacements: { id: bakeDayId, rings, holes }, type: QueryTypes.SELECT },
-  );
-  if (rows.length === 0) {
-    if (!(await BakeDay.findByPk(bakeDayId))) throw notFound('Bake day');
-    throw new AppError('below_sold', 'More than that is already sold or held for this day', 409);
-  }
+  if (!(await BakeDay.findByPk(bakeDayId))) throw notFound('Bake day');
+  await setCapacityKeepingSold(bakeDayId, rings, holes);
   await audit({ actorId: userId, action: 'bake_day.capacity', subjectType: 'bake_day', subjectId: bakeDayId, details: { rings, holes } });
   const day = await BakeDay.findByPk(bakeDayId);
   return { rings: day!.ringCapacity, holes: day!.holeCapacity, remaining: { rings: day!.ringsRemaining, holes: day!.holesRemaining }, derived };
