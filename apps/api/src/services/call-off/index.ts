@@ -2,11 +2,12 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import { DateTime } from 'luxon';
 import { formatCents, type JobView, type Me } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
-import { BakeDay, Order, User } from '../../db/models/index.js';
+import { BakeDay, Order, Refund, User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { createJob, getJob, jobForSubject, type JobItemRow, type JobRow } from '../../jobs/job-store.js';
 import { releaseOrder } from '../capacity.js';
-import { expireCheckout, refundPayment } from '../checkout.js';
+import { expireCheckout } from '../checkout.js';
+import { context } from '../context.js';
 import { enqueueMail } from '../outbox.js';
 import { renderMail } from '../mail-templates.js';
 import { shopSettings } from '../settings.js';
@@ -59,7 +60,48 @@ export async function callOffBakeDay(owner: Me, bakeDayId: string, reason: strin
   return (await getJob(jobId))!;
 }
 
-/** One order of a called-off day: a hold is released; a paid order is refunded in full, once (the idempotency key is the order's). */
+/**
+ * Refunds what is left of a paid order, once, whatever happened before: the
+ * payments call carries a key made from the order, so a retry after a crash
+ * gets the first refund back instead of a second one. If the refund's own
+ * webhook got here first (the crash came after the refund was made but
+ * before it was recorded), the order already reads fully refunded: the same
+ * call with the same amount is answered from the first one and recorded.
+ */
+async function refundInFull(job: JobRow, order: Order, transaction: Transaction): Promise<void> {
+  const key = `call-off:${order.id}`;
+  if (await Refund.findOne({ where: { requestKey: key }, transaction })) return;
+  const recorded = ((await Refund.sum('amountCents', { where: { orderId: order.id }, transaction })) as number | null) ?? 0;
+  const alreadyBack = order.refundedCents < order.totalCents ? order.refundedCents : recorded;
+  const due = order.totalCents - alreadyBack;
+  if (due <= 0 || !order.paymentIntentId) return;
+  let refund;
+  try {
+    refund = await context().payments.refunds.create(
+      { payment_intent: order.paymentIntentId, amount: due, reason: 'requested_by_customer', metadata: { orderId: order.id } },
+      { idempotencyKey: `refund:${key}` },
+    );
+  } catch (err) {
+    // fully refunded some other way (e.g. on the payments dashboard): nothing is due
+    if (order.refundedCents >= order.totalCents && (err as { type?: string }).type === 'StripeInvalidRequestError') return;
+    throw err;
+  }
+  await Refund.findOrCreate({
+    where: { providerRefundId: refund.id },
+    defaults: { orderId: order.id, providerRefundId: refund.id, requestKey: key, amountCents: due, reason: CALL_OFF_NOTE, requestedBy: job.created_by },
+    transaction,
+  });
+  await database().query(`UPDATE orders SET refunded_cents = LEAST(total_cents, GREATEST(refunded_cents, :back)), updated_at = now() WHERE id = :id`, {
+    replacements: { id: order.id, back: alreadyBack + due },
+    transaction,
+  });
+  await audit(
+    { actorId: job.created_by, action: 'order.refunded', subjectType: 'order', subjectId: order.id, details: { amountCents: due, reason: CALL_OFF_NOTE, jobId: job.id } },
+    transaction,
+  );
+}
+
+/** One order of a called-off day: a hold is released; a paid order is refunded in full, once. */
 async function settleOrder(job: JobRow, orderId: string, transaction: Transaction, now: Date) {
   const order = await Order.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!order) return;
@@ -68,15 +110,8 @@ async function settleOrder(job: JobRow, orderId: string, transaction: Transactio
     await releaseOrder(order.id, ['held'], 'cancelled', transaction, { cancelledAt: now });
     return;
   }
-  if (order.status !== 'paid') return; // already cancelled, refunded or handed over
-  const due = order.totalCents - order.refundedCents;
-  if (due > 0) {
-    await refundPayment(order, due, 'requested_by_customer', `call-off:${order.id}`, job.created_by, transaction, CALL_OFF_NOTE);
-    await audit(
-      { actorId: job.created_by, action: 'order.refunded', subjectType: 'order', subjectId: order.id, details: { amountCents: due, reason: CALL_OFF_NOTE, jobId: job.id } },
-      transaction,
-    );
-  }
+  if (order.status !== 'paid' && order.status !== 'refunded') return; // cancelled, or already handed over
+  await refundInFull(job, order, transaction);
   await releaseOrder(order.id, ['paid'], 'refunded', transaction, { cancelledAt: now });
 }
 
