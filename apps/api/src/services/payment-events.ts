@@ -9,6 +9,7 @@ import { queueConfirmation, queueLateRefundApology } from './order-mails.js';
 import { refundPayment } from './checkout.js';
 import { offerFreedCapacity } from './waitlist.js';
 import { audit } from './audit.js';
+import { recordProcessingFee } from './fees.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}
@@ -73,6 +74,7 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
       await order.reload({ transaction });
     }
   }
+  await recordProcessingFee(order.id, paymentIntentId, transaction);
   await queueConfirmation(order.id, transaction);
   await audit({ actorId: null, action: 'order.paid', subjectType: 'order', subjectId: order.id }, transaction);
 }
