@@ -21,6 +21,7 @@ import { productionRouter } from './routes/production.js';
 import { setupRouter } from './routes/setup.js';
 import { bakeDayEditRouter } from './routes/bake-day-edit.js';
 import { announcementsRouter, unsubscribeRouter } from './routes/announcements.js';
+import { reportsRouter } from './routes/reports.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -114,6 +115,7 @@ export function createApp(config: Config) {
   app.use(setupRouter);
   app.use(bakeDayEditRouter);
   app.use(announcementsRouter);
+  app.use(reportsRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

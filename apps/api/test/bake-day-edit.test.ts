@@ -62,7 +62,7 @@ describe('changing an announced bake day', () => {
     expect(cancelled.body).toMatchObject({ status: 'cancelled', refundedCents: order.totalCents });
   });
 
-  it('a change that touches no paid order's window or place e-mails nobody', async () => {
+  it("a change that touches no paid order's window or place e-mails nobody", async () => {
     const day = await openDay(stack);
     await orderAndPay(stack, customer, halfDozen(day, 1));
     const windows = await windowsOf(day.id);
