@@ -1,0 +1,76 @@
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import type { BakeDayEditView, BoxSize } from '@fryline/schemas';
+import { FieldShell } from '../../../../components/field-shell';
+import { LoadingState } from '../../../../components/status';
+import { menuItemQueries } from '../../api/menu-item-queries';
+import { centsToDollars, dollarsToCents } from '../../model/box-prices';
+import { SectionForm } from './section-form';
+
+const boxNames: Record<BoxSize, string> = { dozen: 'Dozen', 'half-dozen': 'Half dozen', holes: 'Bag of holes' };
+
+/** What this day sells and the box prices. Orders already paid keep what they paid. */
+export function MenuForm({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+  const menu = useQuery(menuItemQueries.all());
+  const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
+  const [prices, setPrices] = useState(() => Object.fromEntries(day.boxes.map((b) => [b.size, centsToDollars(b.priceCents)])) as Partial<Record<BoxSize, string>>);
+
+  const build = () => {
+    if (chosen.size === 0) return 'Keep at least one item on the menu.';
+    const boxes = [];
+    for (const box of day.boxes) {
+      const cents = dollarsToCents(prices[box.size] ?? '');
+      if (cents === null) return `${boxNames[box.size]}: type a price like 30 or 16.50.`;
+      boxes.push({ size: box.size, pieces: box.pieces, priceCents: cents });
+    }
+    return { menuItemIds: [...chosen], boxes };
+  };
+
+  return (
+    <SectionForm bakeDayId={day.id} title="Menu and box prices" intro="New prices apply to new orders; paid orders keep their price." disabled={locked} build={build}>
+      {menu.isPending ? (
+        <LoadingState label="Loading the menu…" />
+      ) : (
+        <fieldset>
+          <legend className="field-label">On the menu this day</legend>
+          <ul className="grid gap-1 sm:grid-cols-2">
+            {(menu.data ?? [])
+              .filter((m) => m.active || chosen.has(m.id))
+              .map((m) => (
+                <li key={m.id}>
+                  <label className="flex items-center gap-2">
+                    <input
+                      type="checkbox"
+                      checked={chosen.has(m.id)}
+                      onChange={(e) =>
+                        setChosen((all) => {
+                          const next = new Set(all);
+                          if (e.target.checked) next.add(m.id);
+                          else next.delete(m.id);
+                          return next;
+                        })
+                      }
+                    />
+                    {m.name} <span className="text-sm text-muted">({m.kind === 'ring' ? 'ring' : 'hole'})</span>
+                  </label>
+                </li>
+              ))}
+          </ul>
+        </fieldset>
+      )}
+      <div className="grid gap-3 sm:grid-cols-3">
+        {day.boxes.map((box) => (
+          <FieldShell key={box.size} id={`edit-price-${box.size}`} label={`${boxNames[box.size]} (${box.pieces})`} unit="$">
+            <input
+              id={`edit-price-${box.size}`}
+              inputMode="decimal"
+              className="field-input"
+              value={prices[box.size] ?? ''}
+              onChange={(e) => setPrices((all) => ({ ...all, [box.size]: e.target.value }))}
+            />
+          </FieldShell>
+        ))}
+      </div>
+    </SectionForm>
+  );
+}
