@@ -34,8 +34,6 @@ export function EditBakeDayPage({ bakeDayId }: { bakeDayId: string }) {
   }
   const d = day.data;
   const locked = d.state === 'cancelled' || d.state === 'done';
-  // a section starts again from the server's figures after each save
-  const key = `${d.id}:${d.capacity.rings}:${d.capacity.holes}:${d.windows.map((w) => `${w.id}${w.start}${w.end}${w.maxOrders}${w.removed}`).join()}:${d.ordersOpenAt}:${d.cutoffAt}`;
   return (
     <PageFrame
       eyebrow="Owner · Bake days"
@@ -58,12 +56,16 @@ export function EditBakeDayPage({ bakeDayId }: { bakeDayId: string }) {
           {d.state === 'cancelled' ? 'This bake day is called off: nothing about it can change any more.' : 'This bake day is marked done: nothing about it can change any more.'}
         </p>
       )}
-      {!locked && <SellingActions day={d} locked={locked} />}
-      <PlaceForm key={`place-${d.place}-${d.address}`} day={d} locked={locked} />
-      <WindowsForm key={`windows-${key}`} day={d} locked={locked} />
-      <TimesForm key={`times-${key}`} day={d} locked={locked} />
-      <CapacityForm key={`capacity-${key}`} day={d} locked={locked} />
-      <MenuForm key={`menu-${d.menuItemIds.join()}-${d.boxes.map((b) => b.priceCents).join()}`} day={d} locked={locked} />
+      {!locked && (
+        <>
+          <SellingActions day={d} />
+          <PlaceForm day={d} />
+          <WindowsForm day={d} />
+          <TimesForm day={d} />
+          <CapacityForm day={d} />
+          <MenuForm day={d} />
+        </>
+      )}
       <CallOffPanel day={d} />
     </PageFrame>
   );

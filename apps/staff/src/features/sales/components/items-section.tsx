@@ -41,6 +41,13 @@ export function ItemsSection({ week }: { week: WeeklyFigures }) {
             </tr>
           </thead>
           <tbody>
+            {week.byItem.length === 0 && (
+              <tr>
+                <td colSpan={6} className="px-2 py-2 text-muted">
+                  Nothing sold this week.
+                </td>
+              </tr>
+            )}
             {week.byItem.map((i) => (
               <tr key={i.menuItemId}>
                 <Td head>
@@ -64,6 +71,7 @@ export function ItemsSection({ week }: { week: WeeklyFigures }) {
 
 /** Pieces by flavour and by glaze, as two small tables. */
 export function FlavourGlazeTables({ week }: { week: WeeklyFigures }) {
+  if (week.byFlavour.length === 0) return null;
   const table = (caption: string, rows: Array<{ label: string; pieces: number }>) => (
     <table className="w-full">
       <caption className="text-left font-extrabold">{caption}</caption>

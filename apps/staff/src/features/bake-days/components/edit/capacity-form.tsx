@@ -2,13 +2,17 @@ import { useState } from 'react';
 import type { BakeDayEditView } from '@fryline/schemas';
 import { FieldShell } from '../../../../components/field-shell';
 import { formatPieces } from '../../../../lib/format';
-import { SectionForm } from './section-form';
+import { SectionForm, useServerReset } from './section-form';
 
 /** Rings and holes on offer; never below what is sold or on hold (the server refuses with both numbers). */
-export function CapacityForm({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+export function CapacityForm({ day }: { day: BakeDayEditView }) {
   const [rings, setRings] = useState(String(day.capacity.rings));
   const [holes, setHoles] = useState(String(day.capacity.holes));
   const [above, setAbove] = useState(false);
+  useServerReset(day.capacity, () => {
+    setRings(String(day.capacity.rings));
+    setHoles(String(day.capacity.holes));
+  });
   const build = () => {
     if (!/^\d+$/.test(rings.trim()) || !/^\d+$/.test(holes.trim())) return 'Capacity is a whole number of rings and of holes.';
     return { ringCapacity: Number(rings), holeCapacity: Number(holes), acceptAboveEquipment: above };
@@ -18,7 +22,6 @@ export function CapacityForm({ day, locked }: { day: BakeDayEditView; locked: bo
       bakeDayId={day.id}
       title="Capacity"
       intro={`Sold or on hold so far: ${formatPieces(day.sold.rings, day.sold.holes)}. More capacity goes to the waitlist first.`}
-      disabled={locked}
       build={build}
     >
       <div className="grid gap-3 sm:grid-cols-2">

@@ -5,15 +5,20 @@ import { FieldShell } from '../../../../components/field-shell';
 import { LoadingState } from '../../../../components/status';
 import { menuItemQueries } from '../../api/menu-item-queries';
 import { centsToDollars, dollarsToCents } from '../../model/box-prices';
-import { SectionForm } from './section-form';
+import { SectionForm, useServerReset } from './section-form';
 
 const boxNames: Record<BoxSize, string> = { dozen: 'Dozen', 'half-dozen': 'Half dozen', holes: 'Bag of holes' };
 
 /** What this day sells and the box prices. Orders already paid keep what they paid. */
-export function MenuForm({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+export function MenuForm({ day }: { day: BakeDayEditView }) {
   const menu = useQuery(menuItemQueries.all());
   const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
-  const [prices, setPrices] = useState(() => Object.fromEntries(day.boxes.map((b) => [b.size, centsToDollars(b.priceCents)])) as Partial<Record<BoxSize, string>>);
+  const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToDollars(b.priceCents)])) as Partial<Record<BoxSize, string>>;
+  const [prices, setPrices] = useState(pricesOf);
+  useServerReset([day.menuItemIds, day.boxes], () => {
+    setChosen(new Set(day.menuItemIds));
+    setPrices(pricesOf());
+  });
 
   const build = () => {
     if (chosen.size === 0) return 'Keep at least one item on the menu.';
@@ -27,7 +32,7 @@ export function MenuForm({ day, locked }: { day: BakeDayEditView; locked: boolea
   };
 
   return (
-    <SectionForm bakeDayId={day.id} title="Menu and box prices" intro="New prices apply to new orders; paid orders keep their price." disabled={locked} build={build}>
+    <SectionForm bakeDayId={day.id} title="Menu and box prices" intro="New prices apply to new orders; paid orders keep their price." build={build}>
       {menu.isPending ? (
         <LoadingState label="Loading the menu…" />
       ) : (

@@ -3,7 +3,7 @@ import type { BakeDayEditView } from '@fryline/schemas';
 import { FieldShell } from '../../../../components/field-shell';
 import { SectionForm } from './section-form';
 
-export function PlaceForm({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+export function PlaceForm({ day }: { day: BakeDayEditView }) {
   const [place, setPlace] = useState(day.place);
   const [address, setAddress] = useState(day.address);
   return (
@@ -11,7 +11,6 @@ export function PlaceForm({ day, locked }: { day: BakeDayEditView; locked: boole
       bakeDayId={day.id}
       title="Place"
       intro="Where customers collect. Everyone with a paid order is e-mailed when it changes."
-      disabled={locked}
       build={() => (place.trim().length < 2 ? 'Name the place.' : { place: place.trim(), address: address.trim() })}
     >
       <div className="grid gap-3 sm:grid-cols-2">

@@ -1,8 +1,23 @@
-import { useState, type FormEvent, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import type { BakeDayEditResult, EditBakeDayInput } from '@fryline/schemas';
 import { errorMessage } from '../../../../lib/api-client';
 import { plural } from '../../../../lib/format';
 import { useEditBakeDay } from '../../api/bake-day-edit-queries';
+
+/**
+ * Starts a section's inputs again from the server's figures when those
+ * change (after a save, or a refetch), but not on every render: the
+ * section keeps its message about the save.
+ */
+export function useServerReset(server: unknown, reset: () => void) {
+  const signature = JSON.stringify(server);
+  const seen = useRef(signature);
+  useEffect(() => {
+    if (seen.current === signature) return;
+    seen.current = signature;
+    reset();
+  });
+}
 
 /** What a section says after saving: what changed and who was told. */
 export function SaveResult({ result }: { result: BakeDayEditResult }) {

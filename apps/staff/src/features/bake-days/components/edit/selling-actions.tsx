@@ -6,7 +6,7 @@ import { useBakeDayAction, type BakeDayAction } from '../../api/bake-day-edit-qu
 import { SaveResult } from './section-form';
 
 /** Open orders early, close them early, or mark the day done. */
-export function SellingActions({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+export function SellingActions({ day }: { day: BakeDayEditView }) {
   const action = useBakeDayAction(day.id);
   const [result, setResult] = useState<BakeDayEditResult | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
@@ -15,7 +15,7 @@ export function SellingActions({ day, locked }: { day: BakeDayEditView; locked: 
     setProblem(null);
     action.mutate(what, { onSuccess: setResult, onError: (error) => setProblem(errorMessage(error)) });
   };
-  const busy = locked || action.isPending;
+  const busy = action.isPending;
   return (
     <section className="card flex flex-col gap-3" aria-labelledby="selling-heading">
       <h2 id="selling-heading" className="text-xl">

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useServerReset } from './section-form';
 import type { BakeDayEditView } from '@fryline/schemas';
 import { plural } from '../../../../lib/format';
 import { SectionForm } from './section-form';
@@ -16,8 +17,9 @@ const toRows = (day: BakeDayEditView): Row[] =>
   day.windows.filter((w) => !w.removed).map((w) => ({ key: w.id, id: w.id, start: w.start, end: w.end, maxOrders: w.maxOrders === null ? '' : String(w.maxOrders), booked: w.booked }));
 
 /** The day's pickup windows: move one, cap it, add one, take one off. */
-export function WindowsForm({ day, locked }: { day: BakeDayEditView; locked: boolean }) {
+export function WindowsForm({ day }: { day: BakeDayEditView }) {
   const [rows, setRows] = useState<Row[]>(() => toRows(day));
+  useServerReset(day.windows, () => setRows(toRows(day)));
   const removed = day.windows.filter((w) => w.removed && w.booked > 0);
   const set = (key: string, patch: Partial<Row>) => setRows((all) => all.map((r) => (r.key === key ? { ...r, ...patch } : r)));
 
@@ -38,7 +40,6 @@ export function WindowsForm({ day, locked }: { day: BakeDayEditView; locked: boo
       bakeDayId={day.id}
       title="Pickup windows"
       intro={`Local times (${day.timeZone}). Customers whose window moves or goes are e-mailed and may pick another window or cancel for a full refund. A cap can't go below the orders already in the window.`}
-      disabled={locked}
       build={build}
     >
       <ol className="flex flex-col gap-2">
