@@ -9,13 +9,13 @@ import { weeklyCsv } from '../services/reports/weekly-csv.js';
 export const reportsRouter = Router();
 const start = (res: Parameters<typeof valid>[0]) => valid<{ start: string }>(res, 'query').start;
 
-reportsRouter.use('/api/reports', requireRole('owner'));
+const owner = requireRole('owner');
 
-reportsRouter.get('/api/reports/weekly', validate('query', weekQuerySchema), async (_req, res) => {
+reportsRouter.get('/api/reports/weekly', owner, validate('query', weekQuerySchema), async (_req, res) => {
   res.set('Cache-Control', 'no-store').json(await weeklyReport(start(res), new Date()));
 });
 
-reportsRouter.get('/api/reports/weekly.csv', validate('query', weekQuerySchema), async (_req, res) => {
+reportsRouter.get('/api/reports/weekly.csv', owner, validate('query', weekQuerySchema), async (_req, res) => {
   const report = await weeklyReport(start(res), new Date());
   res
     .set('Cache-Control', 'no-store')
