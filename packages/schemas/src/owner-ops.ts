@@ -49,65 +49,73 @@ export const callOffSchema = z.strictObject({
 });
 export type CallOffInput = z.infer<typeof callOffSchema>;
 
-export type JobState = 'queued' | 'running' | 'done' | 'failed';
+const int = z.number().int();
+const cents = z.number().int();
+const pieces = z.object({ rings: int, holes: int });
 
 /** `GET /api/staff/jobs/:id`: how far a long piece of work has got. */
-export interface JobView {
-  id: string;
-  kind: 'call-off';
-  state: JobState;
-  done: number;
-  total: number;
-  bakeDayId: string;
-  lastError: string | null;
-  createdAt: string;
-  finishedAt: string | null;
-}
+export const jobViewSchema = z.object({
+  id: z.uuid(),
+  kind: z.enum(['call-off']),
+  state: z.enum(['queued', 'running', 'done', 'failed']),
+  done: int,
+  total: int,
+  bakeDayId: z.uuid(),
+  lastError: z.string().nullable(),
+  createdAt: z.string(),
+  finishedAt: z.string().nullable(),
+});
+export type JobView = z.infer<typeof jobViewSchema>;
+export type JobState = JobView['state'];
+export const callOffStartedSchema = jobViewSchema.extend({ jobId: z.uuid() });
 
-export interface EditWindowView {
-  id: string;
+export const editWindowViewSchema = z.object({
+  id: z.uuid(),
   /** Local clock times in the bake day's zone. */
-  start: string;
-  end: string;
-  startsAt: string;
-  endsAt: string;
-  maxOrders: number | null;
+  start: z.string(),
+  end: z.string(),
+  startsAt: z.string(),
+  endsAt: z.string(),
+  maxOrders: int.nullable(),
   /** Orders on hold or paid that count against this window. */
-  booked: number;
+  booked: int,
   /** Taken off the day; kept for the orders still in it. */
-  removed: boolean;
-}
+  removed: z.boolean(),
+});
+export type EditWindowView = z.infer<typeof editWindowViewSchema>;
 
 /** What the owner's edit page starts from. */
-export interface BakeDayEditView {
-  id: string;
-  date: string;
-  place: string;
-  address: string;
-  timeZone: string;
+export const bakeDayEditViewSchema = z.object({
+  id: z.uuid(),
+  date: z.string(),
+  place: z.string(),
+  address: z.string(),
+  timeZone: z.string(),
   /** The stored state: draft, published, cancelled (called off) or done. */
-  state: 'draft' | 'published' | 'cancelled' | 'done';
-  /** What customers see: upcoming, open, closed or done. */
-  status: 'upcoming' | 'open' | 'closed' | 'done';
-  ordersOpenAt: string;
-  cutoffAt: string;
-  capacity: { rings: number; holes: number };
-  sold: { rings: number; holes: number };
-  windows: EditWindowView[];
-  menuItemIds: string[];
-  boxes: Array<{ size: z.infer<typeof boxSizeSchema>; pieces: number; priceCents: number }>;
-  paidOrders: number;
-  callOff: JobView | null;
-  calledOffReason: string | null;
-}
+  state: z.enum(['draft', 'published', 'cancelled', 'done']),
+  /** What customers see. */
+  status: z.enum(['upcoming', 'open', 'closed', 'done']),
+  ordersOpenAt: z.string(),
+  cutoffAt: z.string(),
+  capacity: pieces,
+  sold: pieces,
+  windows: z.array(editWindowViewSchema),
+  menuItemIds: z.array(z.uuid()),
+  boxes: z.array(z.object({ size: boxSizeSchema, pieces: int, priceCents: cents })),
+  paidOrders: int,
+  callOff: jobViewSchema.nullable(),
+  calledOffReason: z.string().nullable(),
+});
+export type BakeDayEditView = z.infer<typeof bakeDayEditViewSchema>;
 
-export interface BakeDayEditResult {
-  day: BakeDayEditView;
+export const bakeDayEditResultSchema = z.object({
+  day: bakeDayEditViewSchema,
   /** What changed, in words. */
-  changes: string[];
+  changes: z.array(z.string()),
   /** Paid orders whose customers were e-mailed about the change. */
-  customersTold: number;
-}
+  customersTold: int,
+});
+export type BakeDayEditResult = z.infer<typeof bakeDayEditResultSchema>;
 
 export const subscribeSchema = z.strictObject({
   email: z.email('Enter an e-mail address').max(200).transform((e) => e.trim().toLowerCase()),
@@ -118,47 +126,59 @@ export const weekQuerySchema = z.object({
   start: z.iso.date({ error: 'Give the week’s Monday as YYYY-MM-DD' }),
 });
 
-export interface WeeklyFigures {
+export const weeklyFiguresSchema = z.object({
   /** Monday and Sunday of the week (local dates) and the instants it covers. */
-  week: { start: string; end: string; timeZone: string; from: string; to: string };
+  week: z.object({ start: z.string(), end: z.string(), timeZone: z.string(), from: z.string(), to: z.string() }),
   /** Paid pre-orders plus walk-up sales. */
-  grossCents: number;
-  refundsCents: number;
+  grossCents: cents,
+  refundsCents: cents,
   /** Card processing fees of the pre-orders paid this week. */
-  feesCents: number;
+  feesCents: cents,
   /** grossCents − refundsCents − feesCents. */
-  netCents: number;
+  netCents: cents,
   /** Pre-orders paid this week and not cancelled or fully refunded. */
-  orders: number;
+  orders: int,
   /** Pieces in those orders. */
-  pieces: number;
-  preorderCents: number;
-  byItem: Array<{ menuItemId: string; name: string; kind: 'ring' | 'hole'; flavour: string; glaze: string; orders: number; preorderPieces: number; walkUpPieces: number; pieces: number }>;
-  byFlavour: Array<{ flavour: string; pieces: number }>;
-  byGlaze: Array<{ glaze: string; pieces: number }>;
-  noShows: number;
-  noShowPieces: number;
-  walkUps: { sales: number; cents: number; pieces: number; byMethod: Array<{ method: 'cash' | 'card'; sales: number; cents: number }> };
-  sellThrough: Array<{
-    bakeDayId: string;
-    date: string;
-    place: string;
-    capacity: number;
-    preorderPieces: number;
-    walkUpPieces: number;
-    sold: number;
-    /** sold ÷ capacity × 100, one decimal; null when the capacity is 0. */
-    percent: number | null;
-    calledOff: boolean;
-  }>;
+  pieces: int,
+  preorderCents: cents,
+  byItem: z.array(
+    z.object({ menuItemId: z.uuid(), name: z.string(), kind: z.enum(['ring', 'hole']), flavour: z.string(), glaze: z.string(), orders: int, preorderPieces: int, walkUpPieces: int, pieces: int }),
+  ),
+  byFlavour: z.array(z.object({ flavour: z.string(), pieces: int })),
+  byGlaze: z.array(z.object({ glaze: z.string(), pieces: int })),
+  noShows: int,
+  noShowPieces: int,
+  walkUps: z.object({ sales: int, cents, pieces: int, byMethod: z.array(z.object({ method: z.enum(['cash', 'card']), sales: int, cents })) }),
+  sellThrough: z.array(
+    z.object({
+      bakeDayId: z.uuid(),
+      date: z.string(),
+      place: z.string(),
+      capacity: int,
+      preorderPieces: int,
+      walkUpPieces: int,
+      sold: int,
+      /** sold ÷ capacity × 100, one decimal; null when the capacity is 0. */
+      percent: z.number().nullable(),
+      calledOff: z.boolean(),
+    }),
+  ),
   /** Ingredients, frying fat and glaze for the pieces sold, from the production costing. */
-  ingredientCents: number;
+  ingredientCents: cents,
   /** netCents − ingredientCents. */
-  marginCents: number;
+  marginCents: cents,
   /** ingredientCents ÷ pieces sold (pre-orders and walk-ups), to the cent; null with nothing sold. */
-  costPerPieceCents: number | null;
-}
+  costPerPieceCents: cents.nullable(),
+});
+export type WeeklyFigures = z.infer<typeof weeklyFiguresSchema>;
 
-export interface WeeklyReport extends WeeklyFigures {
-  previous: WeeklyFigures;
-}
+export const weeklyReportSchema = weeklyFiguresSchema.extend({
+  previous: weeklyFiguresSchema,
+  /** Anything the figures had to leave out or guess (an ingredient without a price). */
+  notes: z.array(z.string()),
+});
+export type WeeklyReport = z.infer<typeof weeklyReportSchema>;
+
+export const subscribedSchema = z.object({ message: z.string() });
+export const confirmedSchema = z.object({ confirmed: z.literal(true), email: z.string() });
+export const unsubscribedSchema = z.object({ unsubscribed: z.literal(true) });

@@ -100,7 +100,7 @@ export async function weeklyFigures(monday: string, timeZone: string, now: Date)
 }
 
 /** The week starting on `monday` in the business's time zone, with the week before beside it. */
-export async function weeklyReport(monday: string, now: Date): Promise<WeeklyReport & { notes: string[] }> {
+export async function weeklyReport(monday: string, now: Date): Promise<WeeklyReport> {
   const timeZone = await businessTimeZone();
   const current = await weeklyFigures(monday, timeZone, now);
   const { notes: _previousNotes, ...previous } = await weeklyFigures(previousMonday(monday), timeZone, now);

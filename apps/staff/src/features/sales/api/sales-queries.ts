@@ -2,16 +2,12 @@ import { queryOptions } from '@tanstack/react-query';
 import type { WeeklyReport } from '@fryline/schemas';
 import { api } from '../../../lib/api-client';
 
-export interface WeeklyReportWithNotes extends WeeklyReport {
-  notes?: string[];
-}
-
 export const salesQueries = {
   /** One week's sales with the week before (`GET /api/reports/weekly?start=`). */
   weekly: (monday: string) =>
     queryOptions({
       queryKey: ['reports', 'weekly', monday] as const,
-      queryFn: () => api.get<WeeklyReportWithNotes>(`/api/reports/weekly?start=${encodeURIComponent(monday)}`),
+      queryFn: () => api.get<WeeklyReport>(`/api/reports/weekly?start=${encodeURIComponent(monday)}`),
       staleTime: 30_000,
     }),
 };

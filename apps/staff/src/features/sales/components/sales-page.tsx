@@ -118,7 +118,7 @@ export default function SalesPage() {
           <FlavourGlazeTables week={report.data} />
           <SellThroughSection week={report.data} />
           <WalkUpsTable week={report.data} previous={report.data.previous} />
-          {report.data.notes && report.data.notes.length > 0 && (
+          {report.data.notes.length > 0 && (
             <div className="notice notice-warn">
               {report.data.notes.map((n) => (
                 <p key={n}>{n}</p>
