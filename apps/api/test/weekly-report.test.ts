@@ -4,7 +4,7 @@ import { parse } from 'csv-parse/sync';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ProductionSettings, User } from '../src/db/models/index.js';
 import { database } from '../src/db/sequelize.js';
 import { createPaymentsClient } from '../src/integrations/payments.js';
-import { defaultProductionSettings } from '../src/services/production.js';
+import { defaultProductionSettings } from '../src/services/production/production.js';
 import { Browser, signIn, useStack } from './support.js';
 import { orderAndPay, sessionIdOf } from './order-helpers.js';
 

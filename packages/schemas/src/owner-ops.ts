@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
 
 // The owner's back office: changing an announced bake day, calling one off,
 // announcements to subscribers, and the weekly sales report.

@@ -1,7 +1,6 @@
 import express, { Router } from 'express';
-import { z } from 'zod';
-import { subscribeSchema, tokenSchema } from '@fryline/schemas';
-import { validate, valid } from '../middleware/validate.js';
+import { api } from '@fryline/schemas';
+import { route } from '../lib/route.js';
 import { confirmSubscription, subscribe, unsubscribe } from '../services/announcements/index.js';
 
 /**
@@ -13,31 +12,29 @@ import { confirmSubscription, subscribe, unsubscribe } from '../services/announc
  * scanners open links.
  */
 export const unsubscribeRouter = Router();
-const tokenQuery = z.object({ token: z.string().min(20).max(100) });
 
-unsubscribeRouter.post(
-  '/api/announcements/unsubscribe',
-  express.urlencoded({ extended: false, limit: '2kb' }),
-  express.json({ limit: '2kb' }),
-  validate('query', tokenQuery),
-  async (_req, res) => {
-    await unsubscribe(valid<{ token: string }>(res, 'query').token, new Date());
-    res.set('Cache-Control', 'no-store').json({ unsubscribed: true });
+route(
+  unsubscribeRouter,
+  api.unsubscribeFromNews,
+  [express.urlencoded({ extended: false, limit: '2kb' }), express.json({ limit: '2kb' })],
+  async ({ query, now }) => {
+    await unsubscribe(query.token, now);
+    return { unsubscribed: true as const };
   },
+  { noStore: true },
 );
 
-unsubscribeRouter.get('/api/announcements/unsubscribe', validate('query', tokenQuery), (_req, res) => {
-  res.redirect(303, `/news/unsubscribe?token=${encodeURIComponent(valid<{ token: string }>(res, 'query').token)}`);
+unsubscribeRouter.get('/api/announcements/unsubscribe', (req, res) => {
+  const token = typeof req.query.token === 'string' ? req.query.token : '';
+  res.redirect(303, `/news/unsubscribe?token=${encodeURIComponent(token)}`);
 });
 
-/** Asking for news of bake days, signed in or not, and confirming from the e-mail. */
+/** /api/announcements: asking for news of bake days, signed in or not, and confirming from the e-mail. */
 export const announcementsRouter = Router();
 
-announcementsRouter.post('/api/announcements/subscribe', validate('body', subscribeSchema), async (req, res) => {
-  await subscribe(valid<{ email: string }>(res, 'body').email, req.user ?? null, new Date());
-  res.status(202).json({ message: 'Check your inbox: we sent a link to confirm.' });
+route(announcementsRouter, api.subscribeToNews, [], async ({ req, body, now }) => {
+  await subscribe(body.email, req.user ?? null, now);
+  return { message: 'Check your inbox: we sent a link to confirm.' };
 });
 
-announcementsRouter.post('/api/announcements/confirm', validate('body', tokenSchema), async (_req, res) => {
-  res.json({ confirmed: true, ...(await confirmSubscription(valid<{ token: string }>(res, 'body').token, new Date())) });
-});
+route(announcementsRouter, api.confirmNews, [], async ({ body, now }) => ({ confirmed: true as const, ...(await confirmSubscription(body.token, now)) }));

@@ -5,26 +5,6 @@ import { database } from '../sequelize.js';
 // check and its change are one statement, or run under the row locks taken
 // first, so an order arriving meanwhile can't slip past them.
 
-/**
- * Sets a bake day's capacity, keeping what is sold: remaining moves by the
- * same amount as capacity, and only if it stays at or above zero. Returns
- * false (nothing changed) when that would sell below what is sold or held.
- */
-export async function resizeCapacity(bakeDayId: string, rings: number, holes: number, transaction?: Transaction): Promise<boolean> {
-  const rows = await database().query(
-    `UPDATE bake_days
-        SET ring_capacity = :rings, rings_remaining = rings_remaining + (:rings - ring_capacity),
-            hole_capacity = :holes, holes_remaining = holes_remaining + (:holes - hole_capacity),
-            updated_at = now()
-      WHERE id = :bakeDayId
-        AND rings_remaining + (:rings - ring_capacity) >= 0
-        AND holes_remaining + (:holes - hole_capacity) >= 0
-      RETURNING id`,
-    { replacements: { bakeDayId, rings, holes }, type: QueryTypes.SELECT, transaction },
-  );
-  return rows.length === 1;
-}
-
 /** Pieces sold or on hold: capacity less what remains. */
 export async function soldPieces(bakeDayId: string, transaction?: Transaction): Promise<{ rings: number; holes: number }> {
   const [row] = await database().query<{ rings: number; holes: number }>(

@@ -5,11 +5,11 @@ import type { Me } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { BakeDay, PickupWindow } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
-import { enqueueMail } from '../outbox.js';
-import { renderMail } from '../mail-templates.js';
-import { shopSettings } from '../settings.js';
-import { context } from '../context.js';
-import { audit } from '../audit.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { renderMail } from '../mail/templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { context } from '../../integrations/context.js';
+import { audit } from '../audit/audit.js';
 
 // Telling people about new bake days: double opt-in (a confirmation link by
 // e-mail before anything else is sent), one e-mail per bake day when its

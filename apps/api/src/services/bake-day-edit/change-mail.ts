@@ -1,11 +1,11 @@
 import type { Transaction } from 'sequelize';
 import { BakeDay, Order, PickupWindow, User } from '../../db/models/index.js';
 import { extendChangeGrace } from '../../db/queries/bake-day-edit.js';
-import { enqueueMail } from '../outbox.js';
-import { renderMail } from '../mail-templates.js';
-import { windowText } from '../order-mails.js';
-import { shopSettings } from '../settings.js';
-import { context } from '../context.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { renderMail } from '../mail/templates.js';
+import { windowText } from '../mail/order-mails.js';
+import { shopSettings } from '../shop/settings.js';
+import { context } from '../../integrations/context.js';
 
 export interface OrderChange {
   /** The window the order was in when the change was made. */

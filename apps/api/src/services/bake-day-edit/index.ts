@@ -6,9 +6,9 @@ import { database } from '../../db/sequelize.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow } from '../../db/models/index.js';
 import { paidOrders, windowsWithBookings, type WindowRow } from '../../db/queries/bake-day-edit.js';
 import { AppError, notFound } from '../../lib/app-error.js';
-import { audit } from '../audit.js';
-import { equipmentCapacity } from '../production.js';
-import { offerFreedCapacity } from '../waitlist.js';
+import { audit } from '../audit/audit.js';
+import { equipmentCapacity } from '../production/production.js';
+import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { setCapacityKeepingSold } from './capacity.js';
 import { queueChangeNotices, type OrderChange } from './change-mail.js';
 import { editView } from './view.js';
@@ -188,7 +188,7 @@ export async function editBakeDay(owner: Me, bakeDayId: string, input: EditBakeD
 
     await audit({ actorId: owner.id, action: 'bake_day.changed', subjectType: 'bake_day', subjectId: day.id, details: { changes: changes.words, changeId } }, transaction);
     told = await queueChangeNotices(changeId, changes.orders, transaction);
-    if (rings > day.ringCapacity || holes > day.holeCapacity) await offerFreedCapacity(day.id, transaction);
+    if (rings > day.ringCapacity || holes > day.holeCapacity) await offerFreedCapacity(day.id, transaction, now);
   });
   return { day: await editView(bakeDayId, now), changes: changes.words, customersTold: told };
 }

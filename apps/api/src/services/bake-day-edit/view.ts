@@ -4,7 +4,7 @@ import type { BakeDayEditView, BoxSize } from '@fryline/schemas';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, Order } from '../../db/models/index.js';
 import { windowsWithBookings } from '../../db/queries/bake-day-edit.js';
 import { notFound } from '../../lib/app-error.js';
-import { viewStatus } from '../bake-days.js';
+import { viewStatus } from '../bake-days/bake-days.js';
 import { jobForSubject } from '../../jobs/job-store.js';
 
 const boxOrder: BoxSize[] = ['dozen', 'half-dozen', 'holes'];

@@ -5,13 +5,13 @@ import { database } from '../../db/sequelize.js';
 import { BakeDay, Order, Refund, User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { createJob, getJob, jobForSubject, type JobItemRow, type JobRow } from '../../jobs/job-store.js';
-import { releaseOrder } from '../capacity.js';
-import { expireCheckout } from '../checkout.js';
-import { context } from '../context.js';
-import { enqueueMail } from '../outbox.js';
-import { renderMail } from '../mail-templates.js';
-import { shopSettings } from '../settings.js';
-import { audit } from '../audit.js';
+import { releaseOrder } from '../../db/queries/capacity.js';
+import { expireCheckout } from '../../integrations/checkout.js';
+import { context } from '../../integrations/context.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { renderMail } from '../mail/templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { audit } from '../audit/audit.js';
 
 export const CALL_OFF_NOTE = 'bake day called off';
 

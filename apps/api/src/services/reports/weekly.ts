@@ -4,7 +4,7 @@ import {
   businessTimeZone, noShows, piecesByItem, preorderMoney, refundsMade, sellThrough, walkUpSales, type ItemRow, type Range,
 } from '../../db/queries/weekly-report.js';
 import { AppError } from '../../lib/app-error.js';
-import { planForBakeDay } from '../production.js';
+import { planForBakeDay } from '../production/production.js';
 
 const sumBy = <T>(rows: T[], key: (r: T) => string, value: (r: T) => number) => {
   const totals = new Map<string, number>();

@@ -1,5 +1,5 @@
 import { useParams } from 'react-router-dom';
-import { RoleGuard } from '../../features/session/components/role-guard';
+import { RoleGuard } from '../session/role-guard';
 import { EditBakeDayPage } from '../../features/bake-days/components/edit-bake-day-page';
 
 /** `/staff/bake-days/:bakeDayId/edit`: change or call off a bake day (owner). */

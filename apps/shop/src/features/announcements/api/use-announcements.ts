@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 /** Asks for news of new bake days; the answer is the same whatever the address's state (`POST /api/announcements/subscribe`). */
 export function useSubscribe() {

@@ -1,8 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { PageTitle } from '../../../components/page-title';
-import { LoadingState, Notice } from '../../../components/status';
-import { isApiError, errorMessage } from '../../../lib/api-client';
+import { LoadingState, Notice } from '@fryline/ui';
+import { isApiError, errorMessage } from '@fryline/ui/api-client';
 import { useConfirmSubscription } from '../api/use-announcements';
 
 /** `/news/confirm?token=…`: the link in the confirmation e-mail says yes, once the page has loaded. */

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { errorMessage } from '../../../lib/api-client';
+import { errorMessage } from '@fryline/ui/api-client';
 import { useSubscribe } from '../api/use-announcements';
 
 /** "Tell me about new bake days": an e-mail address, then a confirmation link by e-mail (double opt-in). */

@@ -1,7 +1,7 @@
 import { Link, useSearchParams } from 'react-router-dom';
 import { PageTitle } from '../../../components/page-title';
-import { Notice } from '../../../components/status';
-import { errorMessage, isApiError } from '../../../lib/api-client';
+import { Notice } from '@fryline/ui';
+import { errorMessage, isApiError } from '@fryline/ui/api-client';
 import { useUnsubscribe } from '../api/use-announcements';
 
 /** `/news/unsubscribe?token=…`: one button, no sign-in. Opening the page alone changes nothing (mail scanners open links). */

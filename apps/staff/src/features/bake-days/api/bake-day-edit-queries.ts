@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BakeDayEditResult, BakeDayEditView, EditBakeDayInput, JobView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 const dayKey = (id: string) => [...queryRoots.bakeDays, 'edit', id] as const;

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '../../../components/status';
-import { isApiError } from '../../../lib/api-client';
-import { formatDate, plural } from '../../../lib/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatDate, plural } from '@fryline/ui/format';
 import { bakeDayEditQueries } from '../api/bake-day-edit-queries';
 import { BakeDayStatusBadge } from './status-badge';
 import { SellingActions } from './edit/selling-actions';

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { WeeklyReport } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 export const salesQueries = {
   /** One week's sales with the week before (`GET /api/reports/weekly?start=`). */

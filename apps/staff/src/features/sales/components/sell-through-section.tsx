@@ -1,6 +1,6 @@
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WeeklyFigures } from '@fryline/schemas';
-import { formatDate } from '../../../lib/format';
+import { formatDate } from '@fryline/ui/format';
 import { ChartFrame, Td, Th, chartColors } from './chart-frame';
 
 /** How much of each bake day's capacity was sold, in advance and at the stall. */

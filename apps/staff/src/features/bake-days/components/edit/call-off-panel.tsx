@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeDayEditView } from '@fryline/schemas';
-import { errorMessage } from '../../../../lib/api-client';
-import { plural } from '../../../../lib/format';
+import { errorMessage } from '@fryline/ui/api-client';
+import { plural } from '@fryline/ui/format';
 import { bakeDayEditQueries, useCallOff } from '../../api/bake-day-edit-queries';
 
 /** How far the refunds and e-mails of a call-off have got, asked for every second until they are all done. */

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { BakeDayEditView } from '@fryline/schemas';
-import { FieldShell } from '../../../../components/field-shell';
-import { formatPieces } from '../../../../lib/format';
+import { FieldShell } from '@fryline/ui';
+import { formatPieces } from '@fryline/ui/format';
 import { SectionForm, useServerReset } from './section-form';
 
 /** Rings and holes on offer; never below what is sold or on hold (the server refuses with both numbers). */

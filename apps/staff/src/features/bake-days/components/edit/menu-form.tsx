@@ -1,19 +1,16 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import type { BakeDayEditView, BoxSize } from '@fryline/schemas';
-import { FieldShell } from '../../../../components/field-shell';
-import { LoadingState } from '../../../../components/status';
+import { boxLabel, centsToInput, parseMoney, type BakeDayEditView, type BoxSize } from '@fryline/schemas';
+import { FieldShell, LoadingState } from '@fryline/ui';
 import { menuItemQueries } from '../../api/menu-item-queries';
-import { centsToDollars, dollarsToCents } from '../../model/box-prices';
 import { SectionForm, useServerReset } from './section-form';
 
-const boxNames: Record<BoxSize, string> = { dozen: 'Dozen', 'half-dozen': 'Half dozen', holes: 'Bag of holes' };
 
 /** What this day sells and the box prices. Orders already paid keep what they paid. */
 export function MenuForm({ day }: { day: BakeDayEditView }) {
   const menu = useQuery(menuItemQueries.all());
   const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
-  const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToDollars(b.priceCents)])) as Partial<Record<BoxSize, string>>;
+  const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToInput(b.priceCents)])) as Partial<Record<BoxSize, string>>;
   const [prices, setPrices] = useState(pricesOf);
   useServerReset([day.menuItemIds, day.boxes], () => {
     setChosen(new Set(day.menuItemIds));
@@ -24,9 +21,9 @@ export function MenuForm({ day }: { day: BakeDayEditView }) {
     if (chosen.size === 0) return 'Keep at least one item on the menu.';
     const boxes = [];
     for (const box of day.boxes) {
-      const cents = dollarsToCents(prices[box.size] ?? '');
-      if (cents === null) return `${boxNames[box.size]}: type a price like 30 or 16.50.`;
-      boxes.push({ size: box.size, pieces: box.pieces, priceCents: cents });
+      const price = parseMoney(prices[box.size] ?? '');
+      if (!price.ok) return `${boxLabel(box.size)}: ${price.message}.`;
+      boxes.push({ size: box.size, pieces: box.pieces, priceCents: price.cents });
     }
     return { menuItemIds: [...chosen], boxes };
   };
@@ -65,7 +62,7 @@ export function MenuForm({ day }: { day: BakeDayEditView }) {
       )}
       <div className="grid gap-3 sm:grid-cols-3">
         {day.boxes.map((box) => (
-          <FieldShell key={box.size} id={`edit-price-${box.size}`} label={`${boxNames[box.size]} (${box.pieces})`} unit="$">
+          <FieldShell key={box.size} id={`edit-price-${box.size}`} label={`${boxLabel(box.size)} (${box.pieces})`} unit="$">
             <input
               id={`edit-price-${box.size}`}
               inputMode="decimal"

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { BakeDayEditView } from '@fryline/schemas';
-import { FieldShell } from '../../../../components/field-shell';
+import { FieldShell } from '@fryline/ui';
 import { SectionForm } from './section-form';
 
 export function PlaceForm({ day }: { day: BakeDayEditView }) {

@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import type { BakeDayEditResult, EditBakeDayInput } from '@fryline/schemas';
-import { errorMessage } from '../../../../lib/api-client';
-import { plural } from '../../../../lib/format';
+import { errorMessage } from '@fryline/ui/api-client';
+import { plural } from '@fryline/ui/format';
 import { useEditBakeDay } from '../../api/bake-day-edit-queries';
 
 /**

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { BakeDayEditResult, BakeDayEditView } from '@fryline/schemas';
-import { errorMessage } from '../../../../lib/api-client';
-import { formatMoment } from '../../../../lib/format';
+import { errorMessage } from '@fryline/ui/api-client';
+import { formatMoment } from '@fryline/ui/format';
 import { useBakeDayAction, type BakeDayAction } from '../../api/bake-day-edit-queries';
 import { SaveResult } from './section-form';
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { BakeDayEditView } from '@fryline/schemas';
-import { FieldShell } from '../../../../components/field-shell';
+import { FieldShell } from '@fryline/ui';
 import { formatInstant } from '@fryline/production';
 import { instantIn } from '../../model/new-bake-day-form';
 import { SectionForm, useServerReset } from './section-form';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useServerReset } from './section-form';
 import type { BakeDayEditView } from '@fryline/schemas';
-import { plural } from '../../../../lib/format';
+import { plural } from '@fryline/ui/format';
 import { SectionForm } from './section-form';
 
 interface Row {
