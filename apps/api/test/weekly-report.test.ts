@@ -259,7 +259,7 @@ describe('weekly sales', () => {
     expect(after.sellThrough).toEqual([]);
   });
 
-  it('only the owner may read it (customer and counter 403); a start that is not a Monday is refused', async () => {
+  it('only the owner may read it (customer and counter 403); a mid-week start means its week; a non-date is refused', async () => {
     const monday = DateTime.now().setZone(ZONE).startOf('week').toISODate();
     const counter = await customer('counter@fryline.test');
     const shopper = await customer('shopper@example.test');
@@ -267,9 +267,11 @@ describe('weekly sales', () => {
     expect((await shopper.getJson(`/api/reports/weekly?start=${monday}`)).status).toBe(403);
     expect((await counter.fetch(`/api/reports/weekly.csv?start=${monday}`)).status).toBe(403);
     expect((await fetch(`${stack.url}/api/reports/weekly?start=${monday}`)).status).toBe(401);
+    // Sunday 1 November 2026 belongs to the week of Monday 26 October
     const sunday = await owner.getJson('/api/reports/weekly?start=2026-11-01');
-    expect(sunday.status).toBe(400);
-    expect(sunday.body.error.message).toMatch(/Monday/);
+    expect(sunday.status).toBe(200);
+    expect(sunday.body.week).toMatchObject({ start: '2026-10-26', end: '2026-11-01' });
+    expect(sunday.body.previous.week.start).toBe('2026-10-19');
     expect((await owner.getJson('/api/reports/weekly?start=last-week')).status).toBe(400);
   });
 });

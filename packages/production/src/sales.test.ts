@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DateTime } from 'luxon';
-import { costOfPiecesSold, previousMonday, weekRange } from './sales.js';
+import { costOfPiecesSold, mondayOf, previousMonday, weekRange } from './sales.js';
 
 describe('weekRange', () => {
   it('runs Monday 00:00 to the next Monday 00:00 in the time zone', () => {
@@ -40,6 +40,15 @@ describe('weekRange', () => {
     expect(() => weekRange('2026-11-01', 'America/Chicago')).toThrow(/Monday.*Sunday/);
     expect(() => weekRange('2026-11-02', 'Mars/Olympus')).toThrow(/time zone/);
     expect(() => weekRange('2026-13-02', 'UTC')).toThrow(/not a date/);
+  });
+
+  // calendar facts: 2026-11-01 is a Sunday, 2026-11-04 a Wednesday, 2027-01-01 a Friday (from memory, checked against any calendar)
+  it('finds the Monday of the week a date falls in', () => {
+    expect(mondayOf('2026-11-01')).toBe('2026-10-26');
+    expect(mondayOf('2026-11-02')).toBe('2026-11-02');
+    expect(mondayOf('2026-11-04')).toBe('2026-11-02');
+    expect(mondayOf('2027-01-01')).toBe('2026-12-28');
+    expect(() => mondayOf('soon')).toThrow(/not a date/);
   });
 
   it('steps back one week', () => {

@@ -33,6 +33,13 @@ export function weekRange(monday: string, timeZone: string): WeekRange {
   return { start: start.toISODate()!, end: next.minus({ days: 1 }).toISODate()!, from: start.toISO()!, to: next.toISO()! };
 }
 
+/** The Monday of the week a date falls in (ISO 8601 weeks start on Monday). */
+export function mondayOf(date: string): string {
+  const day = DateTime.fromISO(date, { zone: 'UTC' });
+  if (!day.isValid || !/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new ProductionInputError('start', `is not a date (got ${date})`);
+  return day.minus({ days: day.weekday - 1 }).toISODate()!;
+}
+
 /** The Monday of the week before. */
 export function previousMonday(monday: string): string {
   return DateTime.fromISO(monday, { zone: 'UTC' }).minus({ weeks: 1 }).toISODate()!;

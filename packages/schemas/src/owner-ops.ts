@@ -45,7 +45,8 @@ export const editBakeDaySchema = z
 export type EditBakeDayInput = z.infer<typeof editBakeDaySchema>;
 
 export const callOffSchema = z.strictObject({
-  reason: z.string().trim().min(3, 'Say why, in a few words: customers read it').max(300),
+  /** Told to customers in the e-mail; may be left out. */
+  reason: z.string().trim().max(300, 'At most 300 characters: customers read it in an e-mail').default(''),
 });
 export type CallOffInput = z.infer<typeof callOffSchema>;
 

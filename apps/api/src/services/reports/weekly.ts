@@ -1,4 +1,4 @@
-import { costOfPiecesSold, previousMonday, ProductionInputError, weekRange } from '@fryline/production';
+import { costOfPiecesSold, mondayOf, previousMonday, ProductionInputError, weekRange } from '@fryline/production';
 import type { WeeklyFigures, WeeklyReport } from '@fryline/schemas';
 import {
   businessTimeZone, noShows, piecesByItem, preorderMoney, refundsMade, sellThrough, walkUpSales, type ItemRow, type Range,
@@ -99,9 +99,16 @@ export async function weeklyFigures(monday: string, timeZone: string, now: Date)
   };
 }
 
-/** The week starting on `monday` in the business's time zone, with the week before beside it. */
-export async function weeklyReport(monday: string, now: Date): Promise<WeeklyReport> {
+/** The week (Monday to Sunday, in the business's time zone) that `start` falls in, with the week before beside it. */
+export async function weeklyReport(start: string, now: Date): Promise<WeeklyReport> {
   const timeZone = await businessTimeZone();
+  let monday: string;
+  try {
+    monday = mondayOf(start);
+  } catch (err) {
+    if (err instanceof ProductionInputError) throw new AppError('invalid', `start: ${err.message}`, 400, { fields: { start: err.message } });
+    throw err;
+  }
   const current = await weeklyFigures(monday, timeZone, now);
   const { notes: _previousNotes, ...previous } = await weeklyFigures(previousMonday(monday), timeZone, now);
   return { ...current, previous };

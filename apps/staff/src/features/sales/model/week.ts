@@ -1,3 +1,6 @@
+// The Monday of a date's week comes from the same function the API uses (mondayOf in @fryline/production).
+export { mondayOf } from '@fryline/production';
+
 /**
  * Weeks as the sales page steps through them: each starts on a Monday,
  * written YYYY-MM-DD. Calendar arithmetic on the date alone (at noon UTC),
@@ -6,13 +9,6 @@
 const DAY = 86_400_000;
 const parse = (date: string) => Date.parse(`${date}T12:00:00Z`);
 const iso = (ms: number) => new Date(ms).toISOString().slice(0, 10);
-
-/** The Monday on or before a date. */
-export function mondayOf(date: string): string {
-  const ms = parse(date);
-  const weekday = (new Date(ms).getUTCDay() + 6) % 7; // Monday 0 … Sunday 6
-  return iso(ms - weekday * DAY);
-}
 
 /** The Monday `weeks` weeks later (earlier when negative). */
 export function shiftWeek(monday: string, weeks: number): string {
