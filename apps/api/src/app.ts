@@ -29,6 +29,9 @@ import { setContext } from './integrations/context.js';
 import { requestClock } from './middleware/request-clock.js';
 import { requestLog } from './middleware/request-log.js';
 import { checkResponsesAgainstContract } from './lib/route.js';
+import { bakeDayEditRouter } from './routes/bake-day-edit.js';
+import { announcementsRouter, unsubscribeRouter } from './routes/announcements.js';
+import { reportsRouter } from './routes/reports.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -110,6 +113,8 @@ export function createApp(config: Config) {
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
+  // one-click unsubscribe comes from mail programs, without cookies: before sessions and CSRF
+  app.use(unsubscribeRouter);
 
   // no string (or key) in any JSON body may hold NUL, other control characters or lone surrogates:
   // refused with 400 before a route sees it, so such text never reaches the database or the payments service
@@ -170,6 +175,9 @@ export function createApp(config: Config) {
   app.use(menuItemsRouter);
   app.use(productionRouter);
   app.use(shopRulesRouter);
+  app.use(bakeDayEditRouter);
+  app.use(announcementsRouter);
+  app.use(reportsRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -10,3 +10,4 @@ export * from './setup.js';
 export * from './text.js';
 export * from './api.js';
 export * from './shop-rules.js';
+export * from './owner-ops.js';

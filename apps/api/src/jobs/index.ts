@@ -9,6 +9,8 @@ import { now } from '../integrations/context.js';
 import { reconcilePayments } from './payment-reconciler.js';
 import { retryPendingRefunds } from '../services/payments/refund-intents.js';
 import { retryFlaggedRefunds } from '../services/payments/payment-checks.js';
+import { runJobs } from './job-runner.js';
+import { queueAnnouncements } from '../services/announcements/index.js';
 
 /** Background work of one API process; several processes may run side by side. */
 export function startJobs(config: Config, sequelize: Sequelize): () => Promise<void> {
@@ -22,6 +24,9 @@ export function startJobs(config: Config, sequelize: Sequelize): () => Promise<v
     every('refund-retries', 30_000, async () => ({ refunds: await retryPendingRefunds(now()), flagged: await retryFlaggedRefunds() })),
     // rate-limit windows that ran out only cost space
     every('rate-limits', 300_000, () => sequelize.query(`DELETE FROM rate_limit_hits WHERE resets_at < now() - interval '1 minute'`)),
+    // call-offs and other long work; a job left by a stopped process is picked up when its lease runs out
+    every('jobs', 2_000, () => runJobs({ now })),
+    every('announcements', 30_000, () => queueAnnouncements(now())),
   ];
   return async () => {
     await Promise.all(stops.map((stop) => stop()));

@@ -13,6 +13,7 @@ import { shopSettings } from '../shop/settings.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
 import { logger } from '../../lib/logger.js';
+import { recordProcessingFee } from './fees.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}
@@ -87,6 +88,7 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
       await order.reload({ transaction });
     }
   }
+  await recordProcessingFee(order.id, paymentIntentId, transaction);
   await queueConfirmation(order.id, transaction);
   await audit({ actorId: null, action: 'order.paid', subjectType: 'order', subjectId: order.id }, transaction);
 }
