@@ -19,7 +19,7 @@ import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
 import { productionRouter } from './routes/production.js';
 import { setupRouter } from './routes/setup.js';
-import { setContext } from './services/context.js';
+import { setContext } from './integrations/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
