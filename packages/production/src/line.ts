@@ -18,7 +18,7 @@
  * 5. Each batch cools, then is glazed at the baker's seconds per piece by one
  *    person, in frying order; packing starts when the last piece is glazed.
  */
-import { afterTopUpC, recoveryMinutesFrom, runBatch, type Fryer } from './fry.js';
+import { afterTopUpC, recoveryMinutesFrom, runBatch, type BatchRun, type Fryer } from './fry.js';
 import type { PieceKind } from './plan.js';
 
 export interface LineSheetInput {
@@ -66,25 +66,28 @@ export interface LineTray {
   fryAt: number;
 }
 
-export interface LineBatch {
-  batch: number;
-  tray: number;
-  kind: PieceKind;
-  dough: string | null;
-  pieces: number;
-  at: number;
-  fryMinutes: number;
-  lowestC: number;
-  recoveryMinutes: number;
-  topUpGramsBefore: number;
-  glazeFrom: number;
-  glazeUntil: number;
+/**
+ * The fry batches in frying order, one column per field (a big bake has
+ * thousands of batches; columns keep the line from building an object for
+ * each). Batch i (0-based) came from tray `tray[i]` (1-based).
+ */
+export interface LineBatches {
+  count: number;
+  tray: Int32Array;
+  /** 0 ring, 1 hole. */
+  kind: Uint8Array;
+  pieces: Int32Array;
+  at: Float64Array;
+  fryMinutes: Float64Array;
+  lowestC: Float64Array;
+  recoveryMinutes: Float64Array;
+  topUpGramsBefore: Float64Array;
 }
 
 export interface StagedLine {
   sheets: LineSheet[];
   trays: LineTray[];
-  batches: LineBatch[];
+  batches: LineBatches;
   fryFrom: number;
   fryUntil: number;
   glazeFrom: number;
@@ -145,31 +148,54 @@ export function stageLine(sheetsIn: LineSheetInput[], settings: LineSettings, fr
     fill('hole', s.holes, settings.holesPerTray);
   }
 
-  // 2–3. Proof when a tray is free, fry in order with the pot's recovery.
+  // 2–3. Proof when a tray is free, fry in order with the pot's recovery; glaze behind the fryer.
   const slots = Math.max(1, settings.trays);
-  const emptiedAt: number[] = [];
-  const firstBatchAt: number[] = [];
-  const batches: LineBatch[] = [];
+  const emptiedAt = new Float64Array(drafts.length);
+  const firstBatchAt = new Float64Array(drafts.length);
+  let total = 0;
+  for (const t of drafts) total += Math.ceil(t.pieces / fryer[t.kind].perBatch);
+  const batches: LineBatches = {
+    count: total,
+    tray: new Int32Array(total),
+    kind: new Uint8Array(total),
+    pieces: new Int32Array(total),
+    at: new Float64Array(total),
+    fryMinutes: new Float64Array(total),
+    lowestC: new Float64Array(total),
+    recoveryMinutes: new Float64Array(total),
+    topUpGramsBefore: new Float64Array(total),
+  };
+  const runs = new Map<number, BatchRun>(); // most batches are full: one run per kind and size
+  const runFor = (kind: PieceKind, pieces: number) => {
+    const key = (kind === 'ring' ? 0 : 100_000) + pieces;
+    let run = runs.get(key);
+    if (!run) runs.set(key, (run = runBatch(fryer, kind, pieces)));
+    return run;
+  };
   let fryCursor = -Infinity;
+  let glazeCursor = -Infinity;
+  let glazeFrom = Infinity;
   let lost = 0;
   let absorbedGrams = 0;
   let topUpGrams = 0;
   let pendingTopUp = 0;
+  let i = 0;
   for (let j = 0; j < drafts.length; j++) {
     const t = drafts[j]!;
     const slotFree = j >= slots ? emptiedAt[j - slots]! : -Infinity;
     const proofDone = Math.max(ready[j]!, slotFree) + settings.proofMinutes;
     const per = fryer[t.kind].perBatch;
+    const fatPerPiece = fryer[t.kind].fatGramsPerPiece;
     let last = 0;
-    for (let left = t.pieces; left > 0; left -= per) {
+    for (let left = t.pieces; left > 0; left -= per, i++) {
       const pieces = Math.min(per, left);
       const at = Math.max(fryCursor, proofDone);
-      const run = runBatch(fryer, t.kind, pieces);
-      const fat = pieces * fryer[t.kind].fatGramsPerPiece;
+      const run = runFor(t.kind, pieces);
+      const fat = pieces * fatPerPiece;
       absorbedGrams += fat;
       lost += fat;
       let outC = run.endC;
-      const topUpBefore = pendingTopUp;
+      batches.topUpGramsBefore[i] = pendingTopUp;
       pendingTopUp = 0;
       if (fryer.topUpEveryGrams > 0 && lost + fat >= fryer.topUpEveryGrams) {
         pendingTopUp = lost;
@@ -177,21 +203,27 @@ export function stageLine(sheetsIn: LineSheetInput[], settings: LineSettings, fr
         outC = afterTopUpC(fryer, outC, lost);
         lost = 0;
       }
-      const recoveryMinutes = recoveryMinutesFrom(fryer, outC);
-      batches.push({
-        batch: batches.length + 1, tray: j + 1, kind: t.kind, dough: t.dough, pieces, at, fryMinutes: run.fryMinutes,
-        lowestC: run.lowestC, recoveryMinutes, topUpGramsBefore: topUpBefore, glazeFrom: 0, glazeUntil: 0,
-      });
+      const recovery = recoveryMinutesFrom(fryer, outC);
+      const glazeMinutes = (glazed(i, t.kind, t.dough, pieces) * settings.glazeSecondsPerPiece) / 60;
+      const glazeStart = Math.max(at + run.fryMinutes + settings.coolMinutes, glazeCursor);
+      glazeCursor = glazeStart + glazeMinutes;
+      if (glazeMinutes > 0 && glazeStart < glazeFrom) glazeFrom = glazeStart;
+      batches.tray[i] = j + 1;
+      batches.kind[i] = t.kind === 'ring' ? 0 : 1;
+      batches.pieces[i] = pieces;
+      batches.at[i] = at;
+      batches.fryMinutes[i] = run.fryMinutes;
+      batches.lowestC[i] = run.lowestC;
+      batches.recoveryMinutes[i] = recovery;
       if (left === t.pieces) firstBatchAt[j] = at;
       last = at;
-      fryCursor = at + run.fryMinutes + recoveryMinutes;
+      fryCursor = at + run.fryMinutes + recovery;
     }
     emptiedAt[j] = last;
   }
   // A top-up planned after the last batch is not needed.
   if (pendingTopUp > 0) topUpGrams -= pendingTopUp;
-  const lastBatch = batches.at(-1);
-  if (lastBatch) lastBatch.recoveryMinutes = 0;
+  if (total > 0) batches.recoveryMinutes[total - 1] = 0;
 
   // 4. Proof ends as the tray's first batch goes in; sheets rolled just in time.
   const trays: LineTray[] = drafts.map((t, j) => ({
@@ -213,32 +245,20 @@ export function stageLine(sheetsIn: LineSheetInput[], settings: LineSettings, fr
   }
   for (const t of trays) t.cutAt = sheets[t.sheet - 1]!.until;
 
-  // 5. Glazing follows the fryer; packing follows the glazing.
-  let glazeCursor = -Infinity;
-  let glazeFrom = Infinity;
-  for (const b of batches) {
-    const cooled = b.at + b.fryMinutes + settings.coolMinutes;
-    const minutes = (glazed(b.batch - 1, b.kind, b.dough, b.pieces) * settings.glazeSecondsPerPiece) / 60;
-    b.glazeFrom = Math.max(cooled, glazeCursor);
-    b.glazeUntil = b.glazeFrom + minutes;
-    glazeCursor = b.glazeUntil;
-    if (minutes > 0) glazeFrom = Math.min(glazeFrom, b.glazeFrom);
-  }
-  const fryFrom = batches[0]?.at ?? 0;
-  const fryUntil = lastBatch ? lastBatch.at + lastBatch.fryMinutes : 0;
-  const glazeUntil = batches.length > 0 ? Math.max(glazeCursor, fryUntil + settings.coolMinutes) : 0;
+  // Packing follows the glazing.
+  const fryFrom = total > 0 ? batches.at[0]! : 0;
+  const fryUntil = total > 0 ? batches.at[total - 1]! + batches.fryMinutes[total - 1]! : 0;
+  const glazeUntil = total > 0 ? Math.max(glazeCursor, fryUntil + settings.coolMinutes) : 0;
   const packFrom = glazeUntil;
   const packUntil = packFrom + (settings.boxes * settings.packSecondsPerBox) / 60;
 
   // Most trays proofing at the same time (a check on the slot rule above).
-  const events: Array<[number, number]> = [];
-  trays.forEach((t, j) => events.push([t.proofFrom, 1], [emptiedAt[j]! + 1e-9, -1]));
-  events.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-  let inUse = 0;
+  const starts = Float64Array.from(trays, (t) => t.proofFrom).sort();
+  const ends = emptiedAt.slice().sort();
   let traysInUse = 0;
-  for (const [, d] of events) {
-    inUse += d;
-    traysInUse = Math.max(traysInUse, inUse);
+  for (let i = 0, e = 0; i < starts.length; i++) {
+    while (e < ends.length && ends[e]! <= starts[i]! + 1e-9) e++;
+    traysInUse = Math.max(traysInUse, i + 1 - e);
   }
   return {
     sheets, trays, batches, fryFrom, fryUntil,

@@ -107,6 +107,10 @@ export function planMixes(groups: Array<{ formulaOf: string | null; formula: For
     if (total <= 0) continue;
     const count = Math.ceil(total / bowl - 1e-9);
     const each = total / count;
+    // Every mix of a formula is the same size: scale it once.
+    const scaled = scaleFormula(group.formula, each);
+    const eggGrams = scaled.ingredients.filter((i) => i.kind === 'egg').reduce((s, i) => s + i.grams, 0);
+    const eggs = wholeEggs(eggGrams, each, gramsPerEgg);
     let shareIndex = 0;
     let shareLeft = bases[0]?.base ?? 0;
     for (let m = 0; m < count; m++) {
@@ -131,14 +135,12 @@ export function planMixes(groups: Array<{ formulaOf: string | null; formula: For
           shareLeft = bases[shareIndex]?.base ?? 0;
         }
       }
-      const scaled = scaleFormula(group.formula, each);
-      const eggGrams = scaled.ingredients.filter((i) => i.kind === 'egg').reduce((s, i) => s + i.grams, 0);
       mixes.push({
         mix: mixes.length + 1,
         formulaOf: group.formulaOf,
         doughGrams: each,
         ingredients: scaled.finalDough,
-        eggs: wholeEggs(eggGrams, each, gramsPerEgg),
+        eggs,
         starter: scaled.starter,
         roux: scaled.roux,
         portions,

@@ -676,7 +676,11 @@ export function planBake(input: PlanBakeInput): BakePlan {
         const ringsHere = ringSplit[i]!;
         const extra = holeSplit[i]!;
         if (ringsHere + extra === 0) return;
-        if (p.mix !== null) mixSheetIndex.set(p.mix, [...(mixSheetIndex.get(p.mix) ?? []), sheetsIn.length]);
+        if (p.mix !== null) {
+          const list = mixSheetIndex.get(p.mix);
+          if (list) list.push(sheetsIn.length);
+          else mixSheetIndex.set(p.mix, [sheetsIn.length]);
+        }
         sheetsIn.push({ dough: c.lot.dough, mix: p.mix, roll: r.roll, doughGrams: p.grams, rings: ringsHere, holes: (withCentres ? ringsHere : 0) + extra });
       });
     });
@@ -715,17 +719,25 @@ export function planBake(input: PlanBakeInput): BakePlan {
     boxes,
   }, fryer, (index, kind, doughId, count) => {
     const queue = glazeQueues.get(keyOf(doughId))![kind];
+    const head = queue[0];
+    const previous = batchGlazes[index - 1];
+    // Most batches repeat the last one's split: share that (read-only) list rather than build thousands.
+    if (head && head.left > count && previous && previous.length === 1 && previous[0]!.glazeId === head.glazeId && previous[0]!.pieces === count) {
+      head.left -= count;
+      batchGlazes[index] = previous;
+      return head.glazeId !== null ? count : 0;
+    }
     const split: Array<{ glazeId: string | null; pieces: number }> = [];
     let left = count;
     while (left > 0 && queue.length > 0) {
-      const head = queue[0]!;
-      const take = Math.min(left, head.left);
+      const first = queue[0]!;
+      const take = Math.min(left, first.left);
       const last = split.at(-1);
-      if (last && last.glazeId === head.glazeId) last.pieces += take;
-      else split.push({ glazeId: head.glazeId, pieces: take });
-      head.left -= take;
+      if (last && last.glazeId === first.glazeId) last.pieces += take;
+      else split.push({ glazeId: first.glazeId, pieces: take });
+      first.left -= take;
       left -= take;
-      if (head.left === 0) queue.shift();
+      if (first.left === 0) queue.shift();
     }
     if (left > 0) split.push({ glazeId: null, pieces: left }); // surplus, left plain
     batchGlazes[index] = split;
@@ -744,27 +756,32 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const MIN = 60_000;
   const packSetup = durations.pack;
   const rollSetup = durations['roll-and-cut'];
-  const hasPieces = line.batches.length > 0;
+  const B = line.batches;
+  const hasPieces = B.count > 0;
   const heatMinutes = Math.max(durations['heat-oil'], heatUpMinutes(fryer));
   const lineEndRel = hasPieces ? line.packUntil + packSetup : 0;
-  // Whole seconds keep the printed times exact.
-  const abs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / 1000) * 1000;
+  // The sheet reads to the minute: every line time is rounded to a whole minute.
+  const abs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
   const fmt = instantFormatter(zone);
   const at = (rel: number) => fmt(abs(rel));
 
-  const timetable: FryTimetableEntry[] = line.batches.map((b) => ({
-    batch: b.batch,
-    at: at(b.at),
-    pieces: b.pieces,
-    waitForC: fryer.startC,
-    kind: b.kind,
-    dough: b.dough,
-    tray: b.tray,
-    lowestC: b.lowestC,
-    recoveryMinutes: b.recoveryMinutes,
-    topUpGramsBefore: b.topUpGramsBefore,
-    glazes: batchGlazes[b.batch - 1] ?? [],
-  }));
+  const timetable: FryTimetableEntry[] = new Array(B.count);
+  for (let i = 0; i < B.count; i++) {
+    const tray = line.trays[B.tray[i]! - 1]!;
+    timetable[i] = {
+      batch: i + 1,
+      at: at(B.at[i]!),
+      pieces: B.pieces[i]!,
+      waitForC: fryer.startC,
+      kind: B.kind[i] === 0 ? 'ring' : 'hole',
+      dough: tray.dough,
+      tray: tray.tray,
+      lowestC: B.lowestC[i]!,
+      recoveryMinutes: B.recoveryMinutes[i]!,
+      topUpGramsBefore: B.topUpGramsBefore[i]!,
+      glazes: batchGlazes[i] ?? [],
+    };
+  }
 
   // Each mix worked back from when its dough is first rolled.
   const lineStartRel = line.sheets[0] ? line.sheets[0].from - rollSetup : 0;
@@ -774,35 +791,47 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const rouxMinutes = durations['cook-cool-roux'];
   const rollAtMs = mixPlans.map((m) => {
     const idx = mixSheetIndex.get(m.mix);
-    const rel = idx && idx.length > 0 ? Math.min(...idx.map((i) => line.sheets[i]!.from)) : lineStartRel;
+    const rel = idx && idx.length > 0 ? idx.reduce((m, i) => Math.min(m, line.sheets[i]!.from), Infinity) : lineStartRel;
     return abs(rel);
   });
   const mixStart: number[] = mixPlans.map((_, k) => rollAtMs[k]! - (retardMin + shapeMinutes + bulkMinutes + mixMinutes) * MIN);
   for (let k = mixPlans.length - 2; k >= 0; k--) mixStart[k] = Math.min(mixStart[k]!, mixStart[k + 1]! - mixMinutes * MIN);
-  const fryWindowOf = (mixNo: number) => {
-    const trays = new Set(line.trays.filter((t) => t.mix === mixNo).map((t) => t.tray));
-    const own = line.batches.filter((b) => trays.has(b.tray));
-    return own.length > 0 ? { from: own[0]!.at, until: own.at(-1)!.at + own.at(-1)!.fryMinutes } : { from: line.fryFrom, until: line.fryUntil };
-  };
+  // Each mix's frying window, from the batches of the trays its dough filled (one pass over the batches).
+  const trayMix = line.trays.map((t) => t.mix);
+  const windows = new Map<number, { from: number; until: number }>();
+  for (let i = 0; i < B.count; i++) {
+    const mixNo = trayMix[B.tray[i]! - 1];
+    if (mixNo === null || mixNo === undefined) continue;
+    const until = B.at[i]! + B.fryMinutes[i]!;
+    const w = windows.get(mixNo);
+    if (!w) windows.set(mixNo, { from: B.at[i]!, until });
+    else w.until = until;
+  }
+  const fryWindowOf = (mixNo: number) => windows.get(mixNo) ?? { from: line.fryFrom, until: line.fryUntil };
+  // Each mix's instants, to the minute, once; the mix list and the timeline both read them.
+  const toMinute = (ms: number) => Math.round(ms / MIN) * MIN;
+  const mixTimes = mixPlans.map((m, k) => {
+    const start = toMinute(mixStart[k]!);
+    const bulkFrom = start + Math.round(mixMinutes) * MIN;
+    const bulkUntil = toMinute(bulkFrom + bulkMinutes * MIN);
+    const retardFrom = bulkUntil + Math.round(shapeMinutes) * MIN;
+    return { feed: toMinute(start - starterPeakMinutes * MIN), roux: start - Math.round(rouxMinutes) * MIN, start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(m.mix) };
+  });
   const mixes: MixSchedule[] = mixPlans.map((m, k) => {
-    const start = Math.round(mixStart[k]! / 1000) * 1000;
-    const bulkFrom = start + mixMinutes * MIN;
-    const bulkUntil = bulkFrom + bulkMinutes * MIN;
-    const retardFrom = bulkUntil + shapeMinutes * MIN;
-    const window = fryWindowOf(m.mix);
+    const t = mixTimes[k]!;
     return {
       ...m,
-      feedStarterAt: m.starter ? fmt(Math.round((start - starterPeakMinutes * MIN) / 1000) * 1000) : null,
-      cookRouxAt: m.roux ? fmt(start - rouxMinutes * MIN) : null,
-      mixAt: fmt(start),
-      bulkFrom: fmt(bulkFrom),
-      bulkUntil: fmt(Math.round(bulkUntil / 1000) * 1000),
-      shapeAt: fmt(Math.round(bulkUntil / 1000) * 1000),
-      retardFrom: fmt(Math.round(retardFrom / 1000) * 1000),
-      retardUntil: fmt(rollAtMs[k]!),
-      rollAt: fmt(rollAtMs[k]!),
-      fryFrom: at(window.from),
-      fryUntil: at(window.until),
+      feedStarterAt: m.starter ? fmt(t.feed) : null,
+      cookRouxAt: m.roux ? fmt(t.roux) : null,
+      mixAt: fmt(t.start),
+      bulkFrom: fmt(t.bulkFrom),
+      bulkUntil: fmt(t.bulkUntil),
+      shapeAt: fmt(t.bulkUntil),
+      retardFrom: fmt(t.retardFrom),
+      retardUntil: fmt(t.roll),
+      rollAt: fmt(t.roll),
+      fryFrom: at(t.window.from),
+      fryUntil: at(t.window.until),
     };
   });
 
@@ -818,29 +847,40 @@ export function planBake(input: PlanBakeInput): BakePlan {
   lookFor['final-proof'] = `Each tray out of the fridge in turn, so it is ready as the fryer is. ${lookFor['final-proof']}`;
   lookFor.glaze = `Each batch once cooled, while the next ones fry. ${lookFor.glaze}`;
   const timeline: TimelineEntry[] = [];
+  const startMs: number[] = [];
+  const texts = new Map<string, string>();
+  const textFor = (step: ScheduleStep, extra: string) => {
+    if (!extra) return lookFor[step];
+    const key = `${step}|${extra}`;
+    let text = texts.get(key);
+    if (text === undefined) texts.set(key, (text = `${extra} ${lookFor[step]}`));
+    return text;
+  };
   const entry = (step: ScheduleStep, fromMs: number, untilMs: number, mix?: number, extra = '') => {
     const minutes = Math.max(0, Math.ceil((untilMs - fromMs) / MIN - 1e-9));
-    timeline.push({ step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: extra ? `${extra} ${lookFor[step]}` : lookFor[step], ...(mix !== undefined ? { mix } : {}) });
+    startMs.push(fromMs);
+    const e: TimelineEntry = { step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: textFor(step, extra) };
+    if (mix !== undefined) e.mix = mix;
+    timeline.push(e);
   };
   const several = mixPlans.length > 1;
-  const r = (ms: number) => Math.round(ms / 1000) * 1000;
   mixPlans.forEach((m, k) => {
-    const start = r(mixStart[k]!);
+    const t = mixTimes[k]!;
     const mixNo = several ? m.mix : undefined;
     const addIns = m.portions.filter((p) => p.addIns.length > 0);
     const addWords = (when: 'after-mix' | 'at-shaping') => addIns.filter((p) => p.addAt === when)
       .map((p) => `Weigh off ${Math.round(p.baseGrams)} g for ${p.name} and fold in ${p.addIns.map((a) => `${Math.round(a.grams)} g ${a.name.toLowerCase()}`).join(', ')} (${ADD_IN_STEP_WORDS[when]}).`).join(' ');
-    if (m.starter) entry('build-starter', r(start - starterPeakMinutes * MIN), start, mixNo, `Feed ${Math.round(m.starter.build.seedGrams)} g starter with ${Math.round(m.starter.build.flourGrams)} g flour and ${Math.round(m.starter.build.waterGrams)} g water.`);
-    if (m.roux) entry('cook-cool-roux', start - rouxMinutes * MIN, start, mixNo);
-    entry('mix', start, start + mixMinutes * MIN, mixNo, addWords('after-mix'));
-    entry('bulk-fermentation', start + mixMinutes * MIN, r(start + (mixMinutes + bulkMinutes) * MIN), mixNo);
-    entry('shape-and-chill', r(start + (mixMinutes + bulkMinutes) * MIN), r(start + (mixMinutes + bulkMinutes + shapeMinutes) * MIN), mixNo, addWords('at-shaping'));
-    entry('cold-retard', r(start + (mixMinutes + bulkMinutes + shapeMinutes) * MIN), rollAtMs[k]!, mixNo);
+    if (m.starter) entry('build-starter', t.feed, t.start, mixNo, `Feed ${Math.round(m.starter.build.seedGrams)} g starter with ${Math.round(m.starter.build.flourGrams)} g flour and ${Math.round(m.starter.build.waterGrams)} g water.`);
+    if (m.roux) entry('cook-cool-roux', t.roux, t.start, mixNo);
+    entry('mix', t.start, t.bulkFrom, mixNo, addWords('after-mix'));
+    entry('bulk-fermentation', t.bulkFrom, t.bulkUntil, mixNo);
+    entry('shape-and-chill', t.bulkUntil, t.retardFrom, mixNo, addWords('at-shaping'));
+    entry('cold-retard', t.retardFrom, t.roll, mixNo);
   });
   if (hasPieces) {
     entry('heat-oil', abs(line.fryFrom - heatMinutes), abs(line.fryFrom));
     entry('roll-and-cut', abs(lineStartRel), abs(line.sheets.at(-1)!.until));
-    entry('final-proof', abs(Math.min(...line.trays.map((t) => t.proofFrom))), abs(line.trays.at(-1)!.fryAt));
+    entry('final-proof', abs(line.trays.reduce((m, t) => Math.min(m, t.proofFrom), Infinity)), abs(line.trays.reduce((m, t) => Math.max(m, t.fryAt), -Infinity)));
     entry('fry', abs(line.fryFrom), abs(line.fryUntil));
     entry('cool', abs(line.fryUntil), abs(line.fryUntil + durations.cool));
     entry('glaze', abs(line.glazeFrom), abs(line.glazeUntil));
@@ -849,8 +889,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
     entry('pack', pickupMs, pickupMs);
   }
   const stepOrder = new Map(['build-starter', 'cook-cool-roux', 'mix', 'bulk-fermentation', 'shape-and-chill', 'cold-retard', 'heat-oil', 'roll-and-cut', 'final-proof', 'fry', 'cool', 'glaze', 'pack'].map((s, i) => [s, i]));
-  timeline.sort((a, b) => Date.parse(a.startsAt) - Date.parse(b.startsAt) || (a.mix ?? 0) - (b.mix ?? 0) || stepOrder.get(a.step)! - stepOrder.get(b.step)!);
-  const firstStepMs = timeline.length > 0 ? Math.min(...timeline.map((t) => Date.parse(t.startsAt))) : pickupMs;
+  const order = timeline.map((_, i) => i).sort((a, b) => startMs[a]! - startMs[b]! || (timeline[a]!.mix ?? 0) - (timeline[b]!.mix ?? 0) || stepOrder.get(timeline[a]!.step)! - stepOrder.get(timeline[b]!.step)!);
+  const sortedTimeline = order.map((i) => timeline[i]!);
+  const firstStepMs = startMs.length > 0 ? startMs.reduce((m, x) => Math.min(m, x), Infinity) : pickupMs;
   const cutoffMs = firstStepMs - Math.ceil(requireNonNegative('schedule.cutoffMarginMinutes', input.schedule.cutoffMarginMinutes) - 1e-9) * MIN;
   const nowMs = parseInstant('now', input.now, zone);
   if (nowMs >= firstStepMs) warn('schedule_cannot_be_met', 'The first step should already have started: this schedule cannot be met.');
@@ -886,16 +927,19 @@ export function planBake(input: PlanBakeInput): BakePlan {
   }
 
   // The fry plan with the staged line's figures.
-  const ringCount = line.batches.filter((b) => b.kind === 'ring').reduce((s, b) => s + b.pieces, 0);
-  const holeCount = line.batches.filter((b) => b.kind === 'hole').reduce((s, b) => s + b.pieces, 0);
+  const counted = { pieces: [0, 0], batches: [0, 0] };
+  for (let i = 0; i < B.count; i++) {
+    counted.pieces[B.kind[i]!]! += B.pieces[i]!;
+    counted.batches[B.kind[i]!]! += 1;
+  }
   const fry: FryPlan = {
     oilLitres: fryBuilt.oil.fillLitres,
     oilGrams: fryBuilt.oil.fillGrams,
     oilStartC: eq.oil.startC,
     oilFloorC: eq.oil.floorC,
-    rings: { ...fryer.ring, count: ringCount, batches: line.batches.filter((b) => b.kind === 'ring').length },
-    holes: { ...fryer.hole, count: holeCount, batches: line.batches.filter((b) => b.kind === 'hole').length },
-    batches: line.batches.length,
+    rings: { ...fryer.ring, count: counted.pieces[0]!, batches: counted.batches[0]! },
+    holes: { ...fryer.hole, count: counted.pieces[1]!, batches: counted.batches[1]! },
+    batches: B.count,
     minutes: hasPieces ? line.fryUntil - line.fryFrom : 0,
     oilAbsorbedGrams: line.absorbedGrams,
     heatCapacityJPerK: fryer.heatCapacityJPerK,
@@ -1012,7 +1056,7 @@ export function planBake(input: PlanBakeInput): BakePlan {
       packUntil: at(lineEndRel),
     },
     glaze,
-    timeline,
+    timeline: sortedTimeline,
     firstStepAt: fmt(firstStepMs),
     preorderCutoffAt: fmt(cutoffMs),
     bulkFermentationMinutes: bulkMinutes,
