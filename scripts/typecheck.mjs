@@ -1,6 +1,7 @@
-// `npm run typecheck`: `tsc --noEmit` in every workspace (its own
-// tsconfig.json), a few at a time. Prints each error with its file; exits 1
-// if any workspace has one. `npm test` runs the same check (tests/structure).
+// `npm run typecheck`: every workspace type-checked with its own
+// tsconfig.json (scripts/lib/typecheck-workspace.mjs), a few at a time.
+// Prints each error with its file; exits 1 if any workspace has one.
+// `npm test` runs the same check (tests/structure/typecheck.test.ts).
 import fs from 'node:fs';
 import path from 'node:path';
 import { ensurePnpm, installDependencies, log, root, SetupError } from './lib/shell.mjs';

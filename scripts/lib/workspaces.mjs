@@ -35,23 +35,15 @@ export function listWorkspaces() {
 }
 
 /**
- * `tsc --noEmit -p <dir>`; resolves { dir, ok, output, ms }. Incremental
- * state goes to node_modules/.cache, so a second run only re-checks what changed.
+ * Type-checks one workspace (typecheck-workspace.mjs: its tsconfig.json, errors
+ * in its own files); resolves { dir, ok, output, ms }.
  */
 export function typecheckWorkspace(dir) {
-  const tsc = path.join(root, 'node_modules/typescript/bin/tsc');
-  const cache = path.join(root, 'node_modules/.cache/fryline-tsc');
-  fs.mkdirSync(cache, { recursive: true });
-  const args = [
-    tsc, '--noEmit', '--pretty', 'false', '-p', path.join(root, dir),
-    '--incremental', '--tsBuildInfoFile', path.join(cache, `${dir.replaceAll('/', '__')}.tsbuildinfo`),
-  ];
   const started = Date.now();
+  const script = path.join(root, 'scripts/lib/typecheck-workspace.mjs');
   return new Promise((resolve) => {
-    execFile(process.execPath, args, { cwd: root, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) => {
-      // tsc names files relative to the working folder: the repository root
-      const output = `${stdout}${stderr}`.trim();
-      resolve({ dir, ok: !err, output, ms: Date.now() - started });
+    execFile(process.execPath, [script, dir], { cwd: root, maxBuffer: 64 * 1024 * 1024 }, (err, stdout, stderr) => {
+      resolve({ dir, ok: !err, output: `${stdout}${stderr}`.trim(), ms: Date.now() - started });
     });
   });
 }

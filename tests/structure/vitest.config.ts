@@ -9,7 +9,8 @@ export default defineConfig({
     include: ['**/*.test.ts'],
     // the type-checks run two at a time inside typecheck.test.ts
     maxConcurrency: 2,
-    testTimeout: 240_000,
+    // one workspace takes well under a minute on an idle 2-core machine; generous for a busy one
+    testTimeout: 400_000,
     hookTimeout: 120_000,
   },
 });

@@ -16,10 +16,15 @@ import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
 import { waitlistRouter } from './routes/waitlist.js';
 import { webhooksRouter } from './routes/webhooks.js';
+import { staffBakeDaysRouter } from './routes/staff-bake-days.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
+import { staffMembersRouter } from './routes/staff-members.js';
+import { menuItemsRouter } from './routes/menu-items.js';
 import { productionRouter } from './routes/production.js';
-import { setupRouter } from './routes/setup.js';
 import { setContext } from './integrations/context.js';
+import { requestClock } from './middleware/request-clock.js';
+import { requestLog } from './middleware/request-log.js';
+import { checkResponsesAgainstContract } from './lib/route.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -43,10 +48,12 @@ function spa(app: express.Express, mount: string, dir: string) {
  */
 export function createApp(config: Config) {
   setContext(config);
+  checkResponsesAgainstContract(config.NODE_ENV !== 'production');
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.set('query parser', 'extended');
+  app.use(requestLog);
 
   // Everything the apps load comes from this origin; images may be data: URLs (QR codes).
   app.use(
@@ -71,6 +78,7 @@ export function createApp(config: Config) {
     }),
   );
 
+  app.use(requestClock);
   app.use(healthRouter);
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
@@ -105,9 +113,11 @@ export function createApp(config: Config) {
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);
+  app.use(staffBakeDaysRouter);
   app.use(staffOrdersRouter);
+  app.use(staffMembersRouter);
+  app.use(menuItemsRouter);
   app.use(productionRouter);
-  app.use(setupRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -7,3 +7,4 @@ export * from './orders.js';
 export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
+export * from './api.js';

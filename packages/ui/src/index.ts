@@ -2,6 +2,7 @@
 // sign-in links and the page-change helper have sub-path exports of their
 // own (`@fryline/ui/api-client`, …), so a module that needs no React pulls none.
 export { AppShell, BrandLink } from './app-shell';
+export { Caution } from './caution';
 export { ConfirmDialog } from './confirm-dialog';
 export { FieldShell, fieldAria, type FieldInputProps } from './field-shell';
 export { ModalDialog } from './modal-dialog';

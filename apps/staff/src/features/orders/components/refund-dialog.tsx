@@ -1,9 +1,9 @@
 import { useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { centsToInput, formatCents, parseCents, type RefundRequest, type StaffOrderView } from '@fryline/schemas';
+import { centsToInput, formatCents, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
-import { useRefundOrder, type RefundMade } from '../api/use-refund-order';
+import { useRefundOrder } from '../api/use-refund-order';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
 import { ModalDialog } from '@fryline/ui';
 
@@ -11,7 +11,7 @@ interface RefundDialogProps {
   /** The order as it was when the dialog opened. */
   order: StaffOrderView;
   onClose: () => void;
-  onRefunded: (made: RefundMade) => void;
+  onRefunded: (made: RefundView) => void;
 }
 
 function FieldError({ id, message }: { id: string; message: string | undefined }) {
