@@ -376,8 +376,8 @@ describe('the staged line', () => {
     for (const step of ['glaze', 'pack'] as const) {
       expect(large.timeline.find((s) => s.step === step)!.minutes).toBeGreaterThan(small.timeline.find((s) => s.step === step)!.minutes);
     }
-    const slowGlazer = planBake({ ...baseInput([order(0, 60)]), schedule: { ...DEFAULT_SCHEDULE, rates: { ...DEFAULT_SCHEDULE.rates!, glazeSecondsPerPiece: 120 } } });
-    const normal = planBake(baseInput([order(0, 60)]));
+    const slowGlazer = planBake({ ...baseInput([order(0, 40)]), schedule: { ...DEFAULT_SCHEDULE, rates: { ...DEFAULT_SCHEDULE.rates!, glazeSecondsPerPiece: 120 } } });
+    const normal = planBake(baseInput([order(0, 40)]));
     expect(minutesBetween(slowGlazer.line.glazeFrom, slowGlazer.line.glazeUntil)).toBeGreaterThan(minutesBetween(normal.line.glazeFrom, normal.line.glazeUntil));
   });
 

@@ -118,7 +118,7 @@ export interface Equipment {
   };
   proofing: {
     trays: number;
-    /** Used when the tray size is not given. */
+    /** The most rings the baker puts on a tray; a real layout on the tray size may allow fewer. */
     ringsPerTray: number;
     trayWidthMm?: number;
     trayLengthMm?: number;
@@ -692,7 +692,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const trayL = eq.proofing.trayLengthMm;
   const trayGap = eq.proofing.trayGapMm ?? DEFAULT_TRAY.trayGapMm;
   const perTray = (d: number) => (trayW && trayL ? cutsFromSheet({ widthMm: trayW, lengthMm: trayL, cutterMm: d * puff, gapMm: trayGap }) : 0);
-  const ringsPerTray = Math.max(1, trayW && trayL ? perTray(eq.cutter.outerMm) : requireWholeNonNegative('proofing.ringsPerTray', eq.proofing.ringsPerTray));
+  // The owner's rings per tray is the most they put on one; the tray's real layout can only lower it.
+  const ownerRings = requireWholeNonNegative('proofing.ringsPerTray', eq.proofing.ringsPerTray);
+  const ringsPerTray = Math.max(1, trayW && trayL ? Math.min(ownerRings, perTray(eq.cutter.outerMm)) : ownerRings);
   const holesPerTray = eq.cutter.innerMm > 0
     ? Math.max(1, trayW && trayL ? perTray(eq.cutter.innerMm) : Math.floor(ringsPerTray * ((eq.cutter.outerMm * puff + trayGap) / (eq.cutter.innerMm * puff + trayGap)) ** 2))
     : 1;
