@@ -13,8 +13,6 @@ export interface CapacityInput {
   minutesPerBatch: number;
   /** The ring centres fried as holes in their own batches, in the same window. */
   holeBatches?: { piecesPerBatch: number; minutesPerBatch: number; holesPerRing: number };
-  /** Times each tray can be used in the day (it is free again once its pieces are in the oil). Default 1. */
-  proofTurns?: number;
   proofingTrays: number;
   piecesPerTray: number;
   /** Dough one mix can hold. */
@@ -68,8 +66,7 @@ export function capacityFromEquipment(input: CapacityInput): Capacity {
     { limit: 'fry', pieces: fryCapacity(window, perBatch, minutesPerBatch, input.holeBatches) },
     {
       limit: 'proofing-trays',
-      pieces: requireWholeNonNegative('proofingTrays', input.proofingTrays) * requireWholeNonNegative('piecesPerTray', input.piecesPerTray)
-        * requireWholeNonNegative('proofTurns', input.proofTurns ?? 1),
+      pieces: requireWholeNonNegative('proofingTrays', input.proofingTrays) * requireWholeNonNegative('piecesPerTray', input.piecesPerTray),
     },
     {
       limit: 'mixer',

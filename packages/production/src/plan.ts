@@ -965,7 +965,6 @@ export function planBake(input: PlanBakeInput): BakePlan {
     holeBatches: holeCycle ? { piecesPerBatch: holeCycle.perBatch, minutesPerBatch: holeCycle.minutes, holesPerRing: 1 } : undefined,
     proofingTrays: eq.proofing.trays,
     piecesPerTray: ringsPerTray,
-    proofTurns: 1 + Math.floor(eq.frying.windowMinutes / Math.max(1, proofMinutes) + 1e-9),
     mixerCapacityGrams: eq.mixer.capacityGrams,
     mixes: eq.mixer.mixes,
     doughGramsPerPiece: (mass.ringGrams + mass.holeGrams) / (1 - (1 - cutShare.ring) ** (eq.rolling.rerolls + 1)),

@@ -161,7 +161,13 @@ export const doughVariationSchema = z.strictObject({
   flavours: z.array(z.string().trim().min(1).max(60)).max(20),
   addIns: z.array(z.strictObject({ name: z.string().trim().min(1, 'Name the add-in').max(60), gramsPerKg: nonNegative('Grams per kg of dough', 500) })).max(10).optional(),
   addAt: z.enum(addInSteps).optional(),
-  formula: formulaSchema.optional(),
+  /** Its own formula; the maths fills in the usual starter and roux figures when they are left out. */
+  formula: z.strictObject({
+    ingredients: z.array(formulaIngredientSchema).min(1, 'A formula needs ingredients').max(30),
+    starterHydrationPercent: positive('Starter hydration', 300).optional(),
+    rouxLiquidPerFlour: positive('Roux liquid per flour', 20).optional(),
+    starterFeed: z.strictObject({ flourPerSeed: positive('Flour per part of seed starter', 20), extraPercent: nonNegative('Extra starter', 100), peakHours: positive('Hours to peak', 24) }).optional(),
+  }).optional(),
 }).refine((v) => !(v.formula && v.addIns && v.addIns.length > 0), { message: 'Give add-ins or a formula of its own, not both', path: ['addIns'] });
 export type DoughVariationInput = z.infer<typeof doughVariationSchema>;
 
