@@ -469,3 +469,12 @@ describe('dough variations', () => {
     for (const b of v.fry.timetable) expect(v.line.trays[b.tray - 1]!.dough).toBe(b.dough);
   });
 });
+
+describe('the liquid temperature warning', () => {
+  it('stays quiet for warm milk in a cool 21 °C kitchen, and speaks up when the milk would have to be scalding', () => {
+    expect(codes(planBake({ ...baseInput(saturday), roomTempC: 21 }))).not.toContain('liquid_temperature_out_of_range');
+    const cold = planBake({ ...baseInput(saturday), roomTempC: 15 });
+    expect(cold.dough.liquidTemperatureC).toBeGreaterThan(45);
+    expect(codes(cold)).toContain('liquid_temperature_out_of_range');
+  });
+});

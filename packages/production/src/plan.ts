@@ -418,6 +418,8 @@ export const DEFAULT_TRAY = Object.freeze({ trayWidthMm: 330, trayLengthMm: 460,
 export const DEFAULT_BENCH_LENGTH_MM = 600;
 /** When the add-ins' share of a mix changes the dough by more than this, say so. */
 export const EGG_SHIFT_WARN_PERCENT = 2;
+/** Hottest liquid the sheet asks for without a warning. */
+export const LIQUID_MAX_C = 45;
 
 interface Lot {
   dough: string | null;
@@ -591,8 +593,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const freeWater = scaled.finalDough.find((r) => r.kind === 'water' && r.grams > 1e-6);
   const liquidLine = freeWater ?? scaled.finalDough.find((r) => r.kind === 'milk' && r.grams > 1e-6);
   const liquidName = liquidLine?.name ?? 'Water';
-  if (baseDoughGrams > 0 && (liquidC > 38 || liquidC < 2)) {
-    warn('liquid_temperature_out_of_range', liquidC > 38
+  // Common practice, no source: liquid much above about 45 °C (113 °F) stresses the starter's yeast; below 2 °C it would have to be iced.
+  if (baseDoughGrams > 0 && (liquidC > LIQUID_MAX_C || liquidC < 2)) {
+    warn('liquid_temperature_out_of_range', liquidC > LIQUID_MAX_C
       ? `To reach ${tempInBothScales(targetC)} the ${liquidName.toLowerCase()} would have to be ${tempInBothScales(liquidC)}, hot enough to harm the starter: use the roux still warm, warm the flour, or aim a little lower.`
       : `To reach ${tempInBothScales(targetC)} the ${liquidName.toLowerCase()} would have to be ${tempInBothScales(liquidC)}, colder than a fridge gives: use chilled flour or ice, or aim a little higher.`);
   }
