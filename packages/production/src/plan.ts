@@ -659,6 +659,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const withCentres = mass.holeGrams > 0;
   const sheetsIn: LineSheetInput[] = [];
   const mixSheetIndex = new Map<number, number[]>();
+  // Every dough's first roll, then the re-rolls: a dough's scraps rest while the next dough is rolled.
+  const byRoll: LineSheetInput[][] = [];
   for (const c of lotCuts) {
     const portions = mixPlans.flatMap((m) => m.portions.filter((p) => p.dough === c.lot.dough).map((p) => ({ mix: m.mix, grams: p.baseGrams + p.addIns.reduce((s, a) => s + a.grams, 0) })));
     c.rolled.rolls.forEach((r: RollStep) => {
@@ -679,14 +681,17 @@ export function planBake(input: PlanBakeInput): BakePlan {
         const ringsHere = ringSplit[i]!;
         const extra = holeSplit[i]!;
         if (ringsHere + extra === 0) return;
-        if (p.mix !== null) {
-          const list = mixSheetIndex.get(p.mix);
-          if (list) list.push(sheetsIn.length);
-          else mixSheetIndex.set(p.mix, [sheetsIn.length]);
-        }
-        sheetsIn.push({ dough: c.lot.dough, mix: p.mix, roll: r.roll, doughGrams: p.grams, rings: ringsHere, holes: (withCentres ? ringsHere : 0) + extra });
+        (byRoll[r.roll - 1] ??= []).push({ dough: c.lot.dough, mix: p.mix, roll: r.roll, doughGrams: p.grams, rings: ringsHere, holes: (withCentres ? ringsHere : 0) + extra });
       });
     });
+  }
+  for (const sheet of byRoll.flat()) {
+    if (sheet.mix !== null) {
+      const list = mixSheetIndex.get(sheet.mix);
+      if (list) list.push(sheetsIn.length);
+      else mixSheetIndex.set(sheet.mix, [sheetsIn.length]);
+    }
+    sheetsIn.push(sheet);
   }
 
   // Pieces per tray from the tray and the proofed piece's footprint.
