@@ -19,7 +19,8 @@
  *    person, in frying order; packing starts when the last piece is glazed.
  */
 import { afterTopUpC, recoveryMinutesFrom, runBatch, type BatchRun, type Fryer } from './fry.js';
-import type { PieceKind } from './plan.js';
+/** A ring or a hole (the same words as planBake's order lines). */
+type PieceKind = 'ring' | 'hole';
 
 export interface LineSheetInput {
   dough: string | null;
