@@ -232,13 +232,14 @@ export interface DoughNeed {
 }
 
 /**
- * Smallest whole-gram dough that `rollAndCut` provably turns into the pieces:
- * D = ⌈(M + w/k) / (1 − (1 − k)^(n+1))⌉, with M the pieces' mass, k the
- * smallest cut share among the cutters in use (1 − scrap, or less when a real
- * layout of small discs packs worse), n the re-rolls and w one ring disc (plus
- * one hole when extra holes are cut). Each unfinished roll wastes less than
- * one piece of each kind beyond its scrap, which the w/k term covers. D grows
- * with the rings and holes needed, so more orders never mean less dough.
+ * Dough that `rollAndCut` turns into the pieces: each kind's mass over its
+ * own best yield, D = ⌈(R·w + w/kR)/yR + (X·h + (h + w)/kH)/yH⌉, with R rings
+ * of disc w, X extra holes of h, k a cutter's share of a roll (1 − scrap, or
+ * less when a real layout of small discs packs worse), y = 1 − (1 − k)^(n+1)
+ * over n re-rolls. Each unfinished roll wastes less than one piece of each
+ * kind beyond its scrap, which the pads cover. D grows with the rings and the
+ * holes (a ring added takes at most one extra hole away), so more orders
+ * never mean less dough; the property tests check both.
  */
 export function doughForPieces(settings: RollSettings & { rings: number; holes: number }): DoughNeed {
   validateRoll(settings);
@@ -251,12 +252,16 @@ export function doughForPieces(settings: RollSettings & { rings: number; holes: 
     throw new ProductionInputError('holeGrams', 'holes need a hole cutter (holeGrams > 0)');
   }
   const piecesGrams = settings.rings * disc + extraHoles * settings.holeGrams;
-  // The worst cut share among the cutters in use; each unfinished roll wastes less than one piece of each kind.
+  // Rings and extra holes each need their mass over their own best yield (a cutter's share of every roll,
+  // re-rolls included); each unfinished roll wastes less than one piece of each kind, which the pads cover.
+  // Adding a ring adds its disc and takes at most one extra hole away, so more orders never mean less dough.
   const share = cutShares(settings);
-  const k = extraHoles > 0 ? Math.min(share.ring, share.hole) : share.ring;
-  const scrap = 1 - k;
-  const bestYield = 1 - scrap ** (settings.rerolls + 1);
-  const pad = (disc + (extraHoles > 0 ? settings.holeGrams : 0)) / k;
-  const doughGrams = piecesGrams === 0 ? 0 : Math.ceil((piecesGrams + pad) / bestYield);
+  const yieldOf = (k: number) => 1 - (1 - k) ** (settings.rerolls + 1);
+  const ringYield = yieldOf(share.ring);
+  const holeYield = yieldOf(share.hole);
+  const ringPart = settings.rings > 0 ? (settings.rings * disc + disc / share.ring) / ringYield : 0;
+  const holePart = extraHoles > 0 ? (extraHoles * settings.holeGrams + (settings.holeGrams + disc) / share.hole) / holeYield : 0;
+  const doughGrams = piecesGrams === 0 ? 0 : Math.ceil(ringPart + holePart);
+  const bestYield = piecesGrams === 0 ? ringYield : piecesGrams / ((settings.rings * disc) / ringYield + (extraHoles * settings.holeGrams) / holeYield);
   return { doughGrams, piecesGrams, extraHoles, bestYield };
 }
