@@ -16,3 +16,4 @@ export * from './mixes.js';
 export * from './line.js';
 export * from './defaults.js';
 export { formatInstant, instantFormatter, parseInstant, readLocalTime, requireTimeZone, type LocalTimeReading } from './time.js';
+export * from './sales.js';

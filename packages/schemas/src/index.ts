@@ -8,3 +8,4 @@ export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
 export * from './api.js';
+export * from './owner-ops.js';
