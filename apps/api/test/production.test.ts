@@ -46,6 +46,41 @@ describe('the production sheet route', () => {
     expect(res.body.plan.cautions.join(' ')).toMatch(/water/i);
   });
 
+  it('returns the dough temperature, the mixes, the fry timetable, the fat taken up and the warnings as data', async () => {
+    const day = await openDay(stack);
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'customer@fryline.test');
+    await orderAndPay(stack, customer, mixedDozen(day));
+    const { plan } = (await baker.getJson(`/api/bake-days/${day.id}/plan`)).body;
+    expect(typeof plan.dough.liquidTemperatureC).toBe('number');
+    expect(plan.mixes.length).toBeGreaterThan(0);
+    for (const mix of plan.mixes) {
+      expect(mix.doughGrams).toBeGreaterThan(0);
+      expect(Array.isArray(mix.ingredients)).toBe(true);
+    }
+    expect(plan.fry.timetable.length).toBe(plan.fry.batches);
+    expect(plan.fry.timetable[0]).toMatchObject({ batch: 1, pieces: expect.any(Number), waitForC: expect.any(Number) });
+    expect(plan.fry.oilAbsorbedGrams).toBeGreaterThan(0);
+    for (const w of plan.warnings) expect(Object.keys(w).sort()).toEqual(['code', 'message']);
+  });
+
+  it('makes a flavour\'s pieces from the dough the owner named for it, and keeps them apart in the fryer', async () => {
+    const day = await openDay(stack);
+    const brown = day.menu.find((m) => m.flavour === 'Brown butter');
+    expect(brown).toBeDefined();
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'customer@fryline.test');
+    await orderAndPay(stack, customer, {
+      bakeDayId: day.id,
+      pickupWindowId: day.pickupWindows[0]!.id,
+      boxes: [{ size: 'half-dozen', items: [{ menuItemId: brown!.id, quantity: 6 }] }],
+    });
+    const { plan } = (await baker.getJson(`/api/bake-days/${day.id}/plan`)).body;
+    expect(plan.mixes.some((m: any) => m.formulaOf === 'brown-butter')).toBe(true);
+    const brownBatches = plan.fry.timetable.filter((b: any) => b.dough === 'brown-butter' && b.kind === 'ring');
+    expect(brownBatches.reduce((s: number, b: any) => s + b.pieces, 0)).toBeGreaterThanOrEqual(6);
+  });
+
   it('keeps the formula version a day was planned with until the baker switches on purpose', async () => {
     const day = await openDay(stack);
     const first = await baker.getJson(`/api/bake-days/${day.id}/plan`);
@@ -74,6 +109,31 @@ describe('the production sheet route', () => {
 });
 
 describe('equipment and capacity', () => {
+  it('stores the desired dough temperature, the burner, the pot, the trays, the baker\'s rates and the flavoured doughs', async () => {
+    const { updatedAt: _u, ...body } = (await owner.getJson('/api/production/settings')).body;
+    const changed = structuredClone(body);
+    changed.dough.temperature = { ...changed.dough.temperature, targetC: 26, frictionC: 8, flourC: 19 };
+    changed.dough.eggClass = 'medium';
+    changed.dough.variations = [{ id: 'orange-zest', name: 'Orange zest dough', flavours: ['Orange'], addIns: [{ name: 'Orange zest', gramsPerKg: 12 }], addAt: 'at-shaping' }];
+    changed.equipment.burner = { watts: 3000, efficiencyPercent: 45 };
+    changed.equipment.pot = { ...changed.equipment.pot, massGrams: 3000, material: 'stainless-steel', heightMm: 180 };
+    changed.equipment.proofing = { ...changed.equipment.proofing, trayWidthMm: 300, trayLengthMm: 400 };
+    changed.equipment.mixer = { capacityGrams: 6000, mixes: 3 };
+    changed.schedule.rates = { rollMinutesPerSheet: 9, rerollRestMinutes: 15, glazeSecondsPerPiece: 6, packSecondsPerBox: 30 };
+    const saved = await owner.send('PUT', '/api/production/settings', changed);
+    expect(saved.status).toBe(200);
+    const again = (await owner.getJson('/api/production/settings')).body;
+    expect(again.dough).toEqual(changed.dough);
+    expect(again.equipment.burner).toEqual({ watts: 3000, efficiencyPercent: 45 });
+    expect(again.equipment.pot).toMatchObject({ massGrams: 3000, material: 'stainless-steel', heightMm: 180 });
+    expect(again.schedule.rates.rollMinutesPerSheet).toBe(9);
+    const clash = structuredClone(changed);
+    clash.dough.variations.push({ id: 'orange-two', name: 'Another', flavours: ['orange'], addIns: [] });
+    const refused = await owner.send('PUT', '/api/production/settings', clash);
+    expect(refused.status).toBe(400);
+    expect((await owner.getJson('/api/production/settings')).body.dough.variations).toHaveLength(1);
+  });
+
   it('lets only the owner change equipment; bad settings get 400 and change nothing', async () => {
     const settings = (await owner.getJson('/api/production/settings')).body;
     const { updatedAt: _u, ...body } = settings;
@@ -87,6 +147,7 @@ describe('equipment and capacity', () => {
     good.equipment.proofing.trays = 4;
     const saved = await owner.send('PUT', '/api/production/settings', good);
     expect(saved.status).toBe(200);
+    expect(saved.body.dough.temperature.targetC).toBeCloseTo(body.dough.temperature.targetC, 9);
     const capacity = await owner.getJson('/api/production/capacity');
     expect(capacity.body).toMatchObject({ pieces: 48, limitedBy: 'proofing-trays' });
   });

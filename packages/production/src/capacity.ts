@@ -1,7 +1,8 @@
 /**
  * Bake-day capacity from the equipment: the fewest rings any one piece of kit
- * allows. A ring's centre becomes a doughnut hole, so holes ride along with
- * rings and are not counted separately here.
+ * allows. A ring's centre becomes a doughnut hole; the holes fry in batches
+ * of their own, so the fryer's figure counts the hole batches that go with
+ * the rings in the same window.
  */
 import { ProductionInputError, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
 
@@ -10,6 +11,8 @@ export interface CapacityInput {
   piecesPerBatch: number;
   /** Frying both sides plus the oil's recovery before the next batch. */
   minutesPerBatch: number;
+  /** The ring centres fried as holes in their own batches, in the same window. */
+  holeBatches?: { piecesPerBatch: number; minutesPerBatch: number; holesPerRing: number };
   proofingTrays: number;
   piecesPerTray: number;
   /** Dough one mix can hold. */
@@ -35,6 +38,19 @@ export interface Capacity {
   candidates: CapacityCandidate[];
 }
 
+/** Most rings n with ⌈n/r⌉ ring batches and ⌈n·h/hb⌉ hole batches inside the window. */
+function fryCapacity(window: number, perBatch: number, minutesPerBatch: number, holes: CapacityInput['holeBatches']): number {
+  if (!holes || holes.holesPerRing === 0) return Math.floor(window / minutesPerBatch + 1e-9) * perBatch;
+  const holeBatch = requireWholeNonNegative('holeBatches.piecesPerBatch', holes.piecesPerBatch);
+  const holeMinutes = requirePositive('holeBatches.minutesPerBatch', holes.minutesPerBatch);
+  const perRing = requireNonNegative('holeBatches.holesPerRing', holes.holesPerRing);
+  if (perBatch === 0 || holeBatch === 0) return 0;
+  const time = (n: number) => Math.ceil(n / perBatch - 1e-9) * minutesPerBatch + Math.ceil((n * perRing) / holeBatch - 1e-9) * holeMinutes;
+  let n = Math.floor(window / (minutesPerBatch / perBatch + (holeMinutes * perRing) / holeBatch)) + perBatch;
+  while (n > 0 && time(n) > window + 1e-9) n--;
+  return n;
+}
+
 /**
  * min(whole fry batches in the window × pieces per batch, trays × pieces per
  * tray, mixer grams × mixes ÷ grams per piece, fridge grams ÷ grams per
@@ -47,7 +63,7 @@ export function capacityFromEquipment(input: CapacityInput): Capacity {
   const gramsPerPiece = requirePositive('doughGramsPerPiece', input.doughGramsPerPiece);
   const down = (x: number) => Math.floor(x + 1e-9);
   const candidates: CapacityCandidate[] = [
-    { limit: 'fry', pieces: down(window / minutesPerBatch) * perBatch },
+    { limit: 'fry', pieces: fryCapacity(window, perBatch, minutesPerBatch, input.holeBatches) },
     {
       limit: 'proofing-trays',
       pieces: requireWholeNonNegative('proofingTrays', input.proofingTrays) * requireWholeNonNegative('piecesPerTray', input.piecesPerTray),

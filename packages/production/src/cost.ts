@@ -6,7 +6,8 @@
  *
  * A piece's cost = the dough it takes (its share of the scrap included) +
  * the frying fat it takes up + its share of the pot's oil (one fill spread
- * over `oilBakesPerFill` bake days and over the dough fried, by mass) + glaze.
+ * over `oilBakesPerFill` bake days and over a full day's dough, by mass) + glaze.
+ * Nothing in it depends on how many pieces are ordered tonight.
  */
 import { ProductionInputError, requirePositive, requireWholeNonNegative, requireNonNegative } from './errors.js';
 import type { ScaledIngredient } from './formula.js';
@@ -35,14 +36,17 @@ export interface BoxOffer {
 export interface CostInput {
   /** Overall formula lines, scaled (portion lines are skipped). */
   ingredients: ScaledIngredient[];
+  /** Dough the `ingredients` make (any amount: prices per gram follow from it). */
   doughGrams: number;
+  /** Dough mixed tonight, for `doughCents`; default `doughGrams`. */
+  mixedDoughGrams?: number;
   ringGrams: number;
   holeGrams: number;
   /** Dough cut into pieces ÷ dough mixed. */
   cutYield: number;
   fatAbsorbedGramsPerRing: number;
   oilFillGrams: number;
-  /** Dough mass fried tonight (all pieces). */
+  /** Dough mass the pot's fill is spread over on one bake day (a full day's, so a piece's cost does not depend on tonight's count). */
   friedGrams: number;
   glazes: GlazeRecipe[];
   prices: Prices;
@@ -136,5 +140,6 @@ export function costBake(input: CostInput): CostPlan {
     const marginCents = priceCents - costCents;
     return { id: box.id, name: box.name, priceCents, costCents, marginCents, marginPercent: priceCents > 0 ? (marginCents / priceCents) * 100 : null };
   });
-  return { doughCents: roundHalfUp(doughCents), perPiece, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
+  const mixed = input.mixedDoughGrams !== undefined ? requireNonNegative('mixedDoughGrams', input.mixedDoughGrams) : input.doughGrams;
+  return { doughCents: roundHalfUp(doughPerGram * mixed), perPiece, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
 }

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { cutLayout, cutPositions, cutsFromSheet, doughForPieces, rollAndCut } from './cutting.js';
+import { cutLayout, cutPositions, cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare } from './cutting.js';
 
 /** Densest packing of equal circles, π/(2√3) = 0.9068996821… (ProofWiki; OEIS A093766). */
 const HEX_BOUND = 0.9068996821;
@@ -99,5 +99,26 @@ describe('roll and re-roll (about 30 % scrap per roll; re-roll once or twice: tr
 
   it('refuses more than a handful of re-rolls', () => {
     expect(() => rollAndCut({ doughGrams: 1000, ringGrams: 60, holeGrams: 10, scrapPercent: 30, rerolls: 9, ringsWanted: 1, extraHolesWanted: 0 })).toThrow(/re-rolls/);
+  });
+});
+
+describe('holes-only sheets (hexagonal packing: π/(2√3) = 0.9069, ProofWiki; OEIS A093766)', () => {
+  const bench = { widthMm: 400, lengthMm: 600, cutterMm: 25, gapMm: 5 };
+
+  it('small discs with gaps cut less than 63 % of a real sheet, and never more than the bound scaled by (d/(d+gap))²', () => {
+    const share = sheetCutShare(bench);
+    expect(share).toBeLessThan(0.63);
+    expect(share).toBeLessThanOrEqual(HEX_BOUND * (25 / 30) ** 2);
+    expect(share).toBeGreaterThan(0.5); // a real layout comes close to the bound on a big sheet
+  });
+
+  it('a holes-only order gets enough dough for what a real layout cuts, not for the 70 % a ring cutter manages', () => {
+    const settings = { ringGrams: 62, holeGrams: 7.5, scrapPercent: 30, rerolls: 1, holeCutShare: sheetCutShare(bench) };
+    const need = doughForPieces({ ...settings, rings: 0, holes: 300 });
+    const naive = doughForPieces({ ...settings, holeCutShare: undefined, rings: 0, holes: 300 });
+    expect(need.doughGrams).toBeGreaterThan(naive.doughGrams);
+    const cut = rollAndCut({ ...settings, doughGrams: need.doughGrams, ringsWanted: 0, extraHolesWanted: need.extraHoles });
+    expect(cut.short).toEqual({ rings: 0, holes: 0 });
+    for (const roll of cut.rolls) expect(roll.extraHoles * 7.5).toBeLessThanOrEqual(roll.doughGrams * sheetCutShare(bench) + 1e-9);
   });
 });

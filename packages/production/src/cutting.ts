@@ -108,6 +108,31 @@ export interface RollSettings {
   scrapPercent: number;
   /** Times the scraps are re-rolled after the first roll (usually 1–2). */
   rerolls: number;
+  /**
+   * Share of a roll's dough that the ring cutter can take, when a real layout
+   * on the bench sheet allows less than 1 − scrap (see `sheetCutShare`).
+   * Default 1 − scrap.
+   */
+  ringCutShare?: number;
+  /** The same for the hole cutter: small discs with gaps pack worse. Default 1 − scrap. */
+  holeCutShare?: number;
+}
+
+/**
+ * Share of a sheet's dough a cutter takes in the best real layout: cuts ×
+ * disc area ÷ sheet area (never the packing bound: a finite sheet with gaps
+ * falls below π/(2√3)).
+ */
+export function sheetCutShare(sheet: Sheet): number {
+  const count = cutsFromSheet(sheet);
+  return (count * Math.PI * sheet.cutterMm * sheet.cutterMm) / 4 / (sheet.widthMm * sheet.lengthMm);
+}
+
+function cutShares(settings: RollSettings): { ring: number; hole: number } {
+  const keep = 1 - settings.scrapPercent / 100;
+  const ring = Math.min(keep, settings.ringCutShare ?? keep);
+  const hole = Math.min(keep, settings.holeCutShare ?? keep);
+  return { ring, hole };
 }
 
 export interface RollInput extends RollSettings {
@@ -145,6 +170,8 @@ function validateRoll(settings: RollSettings): void {
   requireInRange('scrapPercent', settings.scrapPercent, 0, 90);
   requireWholeNonNegative('rerolls', settings.rerolls);
   if (settings.rerolls > 5) throw new ProductionInputError('rerolls', 'more than 5 re-rolls makes the dough too tough');
+  if (settings.ringCutShare !== undefined) requireInRange('ringCutShare', settings.ringCutShare, 0.05, 1);
+  if (settings.holeCutShare !== undefined) requireInRange('holeCutShare', settings.holeCutShare, 0.05, 1);
 }
 
 /**
@@ -161,23 +188,23 @@ export function rollAndCut(input: RollInput): RollResult {
     throw new ProductionInputError('holeGrams', 'extra holes need a hole cutter (holeGrams > 0)');
   }
   const disc = input.ringGrams + input.holeGrams;
-  const keep = 1 - input.scrapPercent / 100;
+  const share = cutShares(input);
   let dough = input.doughGrams;
   let ringsLeft = input.ringsWanted;
   let holesLeft = input.extraHolesWanted;
   const rolls: RollStep[] = [];
   for (let roll = 1; roll <= input.rerolls + 1; roll++) {
-    let usable = dough * keep;
-    let rings = Math.min(ringsLeft, Math.floor(usable / disc + EPS));
-    usable -= rings * disc;
-    const extraHoles = holesLeft > 0 ? Math.min(holesLeft, Math.floor(usable / input.holeGrams + EPS)) : 0;
-    usable -= extraHoles * input.holeGrams;
+    // Dough "footprint" left on the sheet: a ring takes disc/share of it, a hole hole/share.
+    let footprint = dough;
+    let rings = Math.min(ringsLeft, Math.floor((footprint * share.ring) / disc + EPS));
+    footprint -= (rings * disc) / share.ring;
+    const extraHoles = holesLeft > 0 ? Math.min(holesLeft, Math.floor((Math.max(0, footprint) * share.hole) / input.holeGrams + EPS)) : 0;
+    footprint -= extraHoles > 0 ? (extraHoles * input.holeGrams) / share.hole : 0;
     ringsLeft -= rings;
     holesLeft -= extraHoles;
     if (ringsLeft === 0 && holesLeft === 0) {
-      const surplus = Math.floor(usable / disc + EPS);
+      const surplus = Math.floor((Math.max(0, footprint) * share.ring) / disc + EPS);
       rings += surplus;
-      usable -= surplus * disc;
     }
     const scrapGrams = Math.max(0, dough - rings * disc - extraHoles * input.holeGrams);
     rolls.push({ roll, doughGrams: dough, rings, extraHoles, scrapGrams });
@@ -205,11 +232,14 @@ export interface DoughNeed {
 }
 
 /**
- * Smallest whole-gram dough that `rollAndCut` provably turns into the pieces:
- * D = ⌈(M + disc/(1 − s)) / (1 − s^(n+1))⌉, with M the pieces' mass, s the
- * scrap share and n the re-rolls. Each unfinished roll wastes less than one
- * disc beyond its scrap share, which the disc/(1 − s) term covers. D grows
- * with the rings and holes needed, so more orders never mean less dough.
+ * Dough that `rollAndCut` turns into the pieces: each kind's mass over its
+ * own best yield, D = ⌈(R·w + w/kR)/yR + (X·h + (h + w)/kH)/yH⌉, with R rings
+ * of disc w, X extra holes of h, k a cutter's share of a roll (1 − scrap, or
+ * less when a real layout of small discs packs worse), y = 1 − (1 − k)^(n+1)
+ * over n re-rolls. Each unfinished roll wastes less than one piece of each
+ * kind beyond its scrap, which the pads cover. D grows with the rings and the
+ * holes (a ring added takes at most one extra hole away), so more orders
+ * never mean less dough; the property tests check both.
  */
 export function doughForPieces(settings: RollSettings & { rings: number; holes: number }): DoughNeed {
   validateRoll(settings);
@@ -222,7 +252,16 @@ export function doughForPieces(settings: RollSettings & { rings: number; holes: 
     throw new ProductionInputError('holeGrams', 'holes need a hole cutter (holeGrams > 0)');
   }
   const piecesGrams = settings.rings * disc + extraHoles * settings.holeGrams;
-  const bestYield = 1 - s ** (settings.rerolls + 1);
-  const doughGrams = piecesGrams === 0 ? 0 : Math.ceil((piecesGrams + disc / (1 - s)) / bestYield);
+  // Rings and extra holes each need their mass over their own best yield (a cutter's share of every roll,
+  // re-rolls included); each unfinished roll wastes less than one piece of each kind, which the pads cover.
+  // Adding a ring adds its disc and takes at most one extra hole away, so more orders never mean less dough.
+  const share = cutShares(settings);
+  const yieldOf = (k: number) => 1 - (1 - k) ** (settings.rerolls + 1);
+  const ringYield = yieldOf(share.ring);
+  const holeYield = yieldOf(share.hole);
+  const ringPart = settings.rings > 0 ? (settings.rings * disc + disc / share.ring) / ringYield : 0;
+  const holePart = extraHoles > 0 ? (extraHoles * settings.holeGrams + (settings.holeGrams + disc) / share.hole) / holeYield : 0;
+  const doughGrams = piecesGrams === 0 ? 0 : Math.ceil(ringPart + holePart);
+  const bestYield = piecesGrams === 0 ? ringYield : piecesGrams / ((settings.rings * disc) / ringYield + (extraHoles * settings.holeGrams) / holeYield);
   return { doughGrams, piecesGrams, extraHoles, bestYield };
 }

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { DEFAULT_FORMULA } from './defaults.js';
 import { ProductionInputError } from './errors.js';
 import {
-  flourForDough, scaleFormula, starterPercentFromPrefermentedFlour, wholeEggs, type Formula, type ScaledIngredient,
+  EGG_CLASS_OZ_PER_DOZEN, eggEdibleGrams, flourForDough, LARGE_EGG_GRAMS, scaleFormula, starterPercentFromPrefermentedFlour, wholeEggs, type Formula, type ScaledIngredient,
 } from './formula.js';
 import { gToOz, ozToG } from './units.js';
 
@@ -242,5 +242,21 @@ describe('properties (fast-check)', () => {
         expect(scaled.finalDough.every((r) => r.grams >= 0)).toBe(true);
       }),
     );
+  });
+});
+
+describe('eggs in the shell (USDA AMS 56, weight classes: least net weight of a dozen)', () => {
+  it('a large egg, 24 oz a dozen less 12 % shell (USDA SR Legacy 01123 refuse), is the 50 g edible egg of SR Legacy', () => {
+    expect(EGG_CLASS_OZ_PER_DOZEN).toMatchObject({ medium: 21, large: 24, 'extra-large': 27 });
+    expect((24 * 28.349523125) / 12).toBeCloseTo(56.7, 1);
+    expect(eggEdibleGrams('large')).toBeCloseTo(49.9, 1);
+    expect(Math.abs(eggEdibleGrams('large') - LARGE_EGG_GRAMS)).toBeLessThan(0.5);
+    expect(eggEdibleGrams('medium')).toBeCloseTo((21 * 28.349523125 / 12) * 0.88, 9);
+  });
+
+  it('the shopping count follows the class: 300 g of egg is 6 large but 7 medium eggs', () => {
+    expect(wholeEggs(300, 3000, eggEdibleGrams('large'))!.count).toBe(6);
+    expect(wholeEggs(300, 3000, eggEdibleGrams('medium'))!.count).toBe(7);
+    expect(wholeEggs(300, 3000, eggEdibleGrams('extra-large'))!.count).toBe(5);
   });
 });

@@ -12,6 +12,7 @@
  * dough (what goes into the mixer besides the starter and the roux).
  */
 import { ProductionInputError, requireNonNegative, requirePositive } from './errors.js';
+import { GRAMS_PER_OUNCE } from './units.js';
 
 export const INGREDIENT_KINDS = [
   'flour', 'water', 'milk', 'egg', 'butter', 'sugar', 'salt',
@@ -36,6 +37,19 @@ export const WATER_FRACTION = {
 
 /** Edible part of one large egg, grams (USDA SR Legacy, NDB 01123). */
 export const LARGE_EGG_GRAMS = 50;
+
+/** Shell-egg weight classes: least net weight of a dozen, ounces (USDA AMS 56). */
+export const EGG_CLASS_OZ_PER_DOZEN = { medium: 21, large: 24, 'extra-large': 27, jumbo: 30 } as const;
+export type EggClass = keyof typeof EGG_CLASS_OZ_PER_DOZEN;
+/** Shell as a share of a whole egg's weight (USDA SR Legacy, NDB 01123: refuse 12 %). */
+export const EGG_SHELL_SHARE = 0.12;
+
+/** Edible grams of one egg of a weight class: the class's dozen weight ÷ 12, less the shell. */
+export function eggEdibleGrams(eggClass: EggClass): number {
+  const oz = EGG_CLASS_OZ_PER_DOZEN[eggClass];
+  if (oz === undefined) throw new ProductionInputError('eggClass', `must be one of ${Object.keys(EGG_CLASS_OZ_PER_DOZEN).join(', ')}`);
+  return ((oz * GRAMS_PER_OUNCE) / 12) * (1 - EGG_SHELL_SHARE);
+}
 
 export interface FormulaIngredient {
   name: string;
@@ -253,7 +267,7 @@ export function wholeEggs(eggGrams: number, doughGrams: number, gramsPerEgg = LA
     grams: eggGrams,
     count,
     gramsPerEgg,
-    rule: `nearest whole egg of ${gramsPerEgg} g (halves up), at least 1; or weigh ${Math.round(eggGrams)} g of beaten egg`,
+    rule: `nearest whole egg of ${Math.round(gramsPerEgg)} g (halves up), at least 1; or weigh ${Math.round(eggGrams)} g of beaten egg`,
     massChangeGrams,
     doughGramsWithWholeEggs: doughGrams + massChangeGrams,
   };
@@ -399,4 +413,23 @@ export function scaleFormula(formula: Formula, doughGrams: number): ScaledFormul
     eggs: wholeEggs(grams(t.egg), doughGrams),
     warnings: rangeWarnings(t, hydrationWithCarriedWaterPercent),
   };
+}
+
+/** Fat per gram of ingredient, USDA SR Legacy (NDB 01077 milk, 01123 egg, 01145/01001 butter, 20083 bread flour). */
+export const FAT_FRACTION = { wholeMilk: 0.0325, wholeEgg: 0.0951, butter: 0.8111, breadFlour: 0.0166 } as const;
+
+/** Share of the dough's mass that is fat, from the flour, milk, egg and butter lines (other lines counted fat-free). */
+export function doughFatShare(formula: Formula): number {
+  validateFormula(formula);
+  let fat = 0;
+  let sum = 0;
+  for (const l of formula.ingredients) {
+    if (isPortionKind(l.kind)) continue;
+    sum += l.percent;
+    if (l.kind === 'flour') fat += l.percent * FAT_FRACTION.breadFlour;
+    else if (l.kind === 'milk') fat += l.percent * FAT_FRACTION.wholeMilk;
+    else if (l.kind === 'egg') fat += l.percent * FAT_FRACTION.wholeEgg;
+    else if (l.kind === 'butter') fat += l.percent * FAT_FRACTION.butter;
+  }
+  return sum > 0 ? fat / sum : 0;
 }

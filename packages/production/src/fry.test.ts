@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_EQUIPMENT } from './defaults.js';
+import { DEFAULT_EQUIPMENT, DEFAULT_FORMULA } from './defaults.js';
+import { doughFatShare } from './formula.js';
 import {
-  fryBatchSize, oilDensity, oilMassGrams, oilTempAfterLoad, oilVolumeLitres, piecesInPot, planFry,
+  absorbedFatGrams, batchLowestC, friedPieceGrams, fryBatchSize, oilDensity, oilMassGrams, oilTempAfterLoad, oilVolumeLitres, pieceHeatJ, piecesInPot, planFry,
 } from './fry.js';
 import { pieceMass } from './pieces.js';
 import { fToC, inToMm, ozToG } from './units.js';
@@ -65,11 +66,26 @@ describe('fry batch size', () => {
     }
   });
 
-  it('takes the most pieces the heat balance allows: one more would cool the oil below the floor, unless the pot is full', () => {
-    const batch = fryBatchSize({ ...check, potDiameterMm: 600 });
+  it('takes the most pieces the heat balance allows: one more would dip the oil below the floor, unless the pot is full', () => {
+    const pot = { massGrams: 4500, material: 'cast-iron' as const };
+    const burner = { watts: 2500, efficiencyPercent: 40 };
+    const batch = fryBatchSize({ ...check, potDiameterMm: 600, pot, burner });
     expect(batch.limitedBy).toBe('heat');
-    const oneMore = oilTempAfterLoad({ oilGrams: batch.oilGrams, oilStartC: check.oilStartC, pieces: batch.pieces + 1, pieceGrams: check.pieceGrams, doughTempC: 24 });
-    expect(oneMore).toBeLessThan(fToC(350));
+    const lowest = (n: number) => batchLowestC({ startC: check.oilStartC, loadJ: n * batch.pieceHeatJ, netWatts: batch.netWatts, seconds: 60, heatCapacityJPerK: batch.heatCapacityJPerK });
+    expect(lowest(batch.pieces)).toBeGreaterThanOrEqual(fToC(350) - 1e-9);
+    expect(lowest(batch.pieces + 1)).toBeLessThan(fToC(350));
+  });
+
+  it('a piece draws its warming to 100 °C plus the steam of the water it loses (steam tables: 2257 J/g at 100 °C)', () => {
+    // 60 g at 24 °C, c 2.7 J/gK, 10 % water lost: 60·2.7·76 + 6·2257 J.
+    expect(pieceHeatJ({ grams: 60, doughTempC: 24, doughSpecificHeatJPerGK: 2.7, waterLossPercent: 10 })).toBeCloseTo(60 * 2.7 * 76 + 6 * 2257, 6);
+  });
+
+  it('the pot and the burner carry more pieces than the oil alone (first law: heat store C = m·c summed)', () => {
+    const alone = fryBatchSize({ ...check, potDiameterMm: 600 });
+    const withKit = fryBatchSize({ ...check, potDiameterMm: 600, pot: { massGrams: 4500, material: 'cast-iron' }, burner: { watts: 2500 } });
+    expect(withKit.heatCapacityJPerK).toBeCloseTo(alone.heatCapacityJPerK + 4500 * 0.45, 6); // cast iron 0.45 J/gK (from memory)
+    expect(withKit.byHeat).toBeGreaterThan(alone.byHeat);
   });
 
   it('energy balance: heat lost by the oil equals heat gained by the dough (first law)', () => {
@@ -87,19 +103,87 @@ describe('fry plan', () => {
       recoveryMinutes: 1.5,
     });
 
-  it('fat taken up is about 2 oz per dozen (Professional Baking, frying fat care)', () => {
+  it('fat taken up is 15–25 % of the fried weight (BAKERpedia doughnut frying) and grows with the piece', () => {
+    const small = absorbedFatGrams({ grams: 30 });
+    const large = absorbedFatGrams({ grams: 60 });
+    expect(large).toBeCloseTo(2 * small, 9);
+    for (const grams of [8, 30, 60, 90]) {
+      const share = absorbedFatGrams({ grams }) / friedPieceGrams({ grams });
+      expect(share).toBeGreaterThanOrEqual(0.15);
+      expect(share).toBeLessThanOrEqual(0.25);
+    }
+    // Derived from USDA SR Legacy 18255: a 62 g ring losing about 10 % water takes up about 16 g.
+    expect(absorbedFatGrams({ grams: 62 })).toBeGreaterThan(14);
+    expect(absorbedFatGrams({ grams: 62 })).toBeLessThan(18);
     const plan = fryRings(12);
-    expect(plan.oilAbsorbedGrams).toBeCloseTo(ozToG(2), 9);
+    expect(plan.oilAbsorbedGrams).toBeCloseTo(12 * absorbedFatGrams({ grams: 60 }), 9);
+    expect(plan.oilAbsorbedGrams).toBeGreaterThan(2 * ozToG(2)); // the old 2-oz-a-dozen figure was 2–4× low
   });
 
-  it('minutes = batches × 2 sides + recovery between batches (about 1 min a side: doughnut equipment makers\' tips)', () => {
-    const plan = fryRings(10);
+  it('minutes = batches × 2 sides + the handling time between batches when the burner keeps up (about 1 min a side: doughnut equipment makers\' tips)', () => {
+    const plan = planFry({
+      potDiameterMm: 260, oilDepthMm: 75, oilStartC: 190, oilFloorC: 182, doughTempC: 24,
+      pot: { massGrams: 4500 }, burner: { watts: 6000, efficiencyPercent: 50 },
+      rings: { count: 10, grams: 60, diameterMm: 76, secondsPerSide: 60 },
+      holes: { count: 0, grams: 8, diameterMm: 25, secondsPerSide: 45 },
+      recoveryMinutes: 0.5,
+    });
     expect(plan.rings.batches).toBe(Math.ceil(10 / plan.rings.perBatch));
-    expect(plan.minutes).toBeCloseTo(plan.rings.batches * 2 + (plan.rings.batches - 1) * 1.5, 9);
+    expect(plan.minutes).toBeCloseTo(plan.rings.batches * 2 + (plan.rings.batches - 1) * 0.5, 9);
+  });
+
+  it('a weak burner makes the oil wait: recovery = C·ΔT / P (first law)', () => {
+    const weak = planFry({
+      potDiameterMm: 260, oilDepthMm: 75, oilStartC: 190, oilFloorC: 182, doughTempC: 24,
+      burner: { watts: 500, efficiencyPercent: 40 },
+      rings: { count: 9, grams: 60, diameterMm: 76, secondsPerSide: 60 },
+      holes: { count: 0, grams: 8, diameterMm: 25, secondsPerSide: 45 },
+      recoveryMinutes: 0.5,
+    });
+    expect(weak.minutes).toBeGreaterThan(weak.rings.batches * 2 + (weak.rings.batches - 1) * 0.5);
+    const heatUp = weak.heatUpMinutes;
+    expect(heatUp).toBeCloseTo((weak.heatCapacityJPerK * (190 - 20)) / 200 / 60, 6);
+  });
+
+  it('the oil stands higher hot: the freeboard check uses the density at frying temperature (JAOCS 1999: −0.00064 g/cm³ per °C)', () => {
+    const plan = planFry({
+      potDiameterMm: 260, oilDepthMm: 100, oilStartC: 190, oilFloorC: 182, doughTempC: 24, potHeightMm: 160,
+      rings: { count: 3, grams: 60, diameterMm: 76, secondsPerSide: 60 },
+      holes: { count: 0, grams: 8, diameterMm: 25, secondsPerSide: 45 },
+      recoveryMinutes: 0.5,
+    });
+    expect(plan.oil.hotDepthWithBatchMm).toBeGreaterThan(100 * (0.92 / (0.92 - 0.00064 * 170)) - 1e-9);
+    expect(plan.warnings.some((w) => w.includes('to the rim'))).toBe(true);
   });
 
   it('warns when the start temperature is outside 350–375 °F (doughnut equipment makers\' tips)', () => {
     const plan = fryRings(1, fToC(390));
     expect(plan.warnings.some((w) => w.includes('outside the usual'))).toBe(true);
+  });
+});
+
+describe('a glazed ring against USDA SR Legacy 18255 (glazed yeast doughnut, medium 3¾ in: 60–64 g, 22.70 g fat per 100 g; hole 13 g)', () => {
+  // A 3 in cutter puffs to about 3¾ in (our puff factor 1.25); rolled ⅜ in thick, with a thin glaze of about 10 g (from memory).
+  const ring = pieceMass({ outerMm: inToMm(3), innerMm: inToMm(1), thicknessMm: inToMm(3 / 8), densityGPerCm3: 1.18 });
+  const dough = ring.ringGrams;
+  const fat = absorbedFatGrams({ grams: dough });
+  const glazed = friedPieceGrams({ grams: dough }) + 10;
+
+  it('weighs what a medium glazed doughnut weighs', () => {
+    expect(inToMm(3) * 1.25).toBeCloseTo(inToMm(3.75), 9);
+    expect(glazed).toBeGreaterThanOrEqual(60);
+    expect(glazed).toBeLessThanOrEqual(64);
+  });
+
+  it('carries the fat a glazed yeast doughnut carries: the dough\'s own (USDA fat per 100 g of milk 3.25, egg 9.51, butter 81.11, bread flour 1.66) plus what it takes up', () => {
+    const share = (dough * doughFatShare(DEFAULT_FORMULA) + fat) / glazed;
+    expect(share * 100).toBeGreaterThan(22.7 - 1.5);
+    expect(share * 100).toBeLessThan(22.7 + 1.5);
+  });
+
+  it('our default hole (25 mm cutter, 13 mm thick) fried and glazed weighs about a USDA hole, 13 g', () => {
+    const hole = pieceMass({ outerMm: DEFAULT_EQUIPMENT.cutter.outerMm, innerMm: DEFAULT_EQUIPMENT.cutter.innerMm, thicknessMm: 13, densityGPerCm3: 1.18 }).holeGrams;
+    const glazedHole = friedPieceGrams({ grams: hole }) + 4; // our vanilla glaze: 4 g a hole
+    expect(Math.abs(glazedHole - 13)).toBeLessThanOrEqual(1.5);
   });
 });

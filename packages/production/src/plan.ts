@@ -3,21 +3,36 @@
  * production sheet. Pure: every input, the current instant and the time zone
  * included, comes in as a parameter; instants go out as ISO-8601 strings.
  *
- * Order of work: pieces to make (orders + spare) → dough that provably cuts
- * them (so more orders never mean less dough) → formula grams, starter and
- * roux → first roll and re-rolls → fry batches → glaze → schedule backwards
- * from the first pickup → capacity → cost → cautions.
+ * Order of work: pieces to make (orders + spare) for each dough → dough that
+ * provably cuts them (so more orders never mean less dough) → mixes that fit
+ * the bowl, each scaled with whole eggs, its own starter and roux → the
+ * liquid temperature for the desired dough temperature → first roll and
+ * re-rolls, sheet by sheet → the staged line: trays proofed in turn, fry
+ * batches through the pot's heat balance, glazing behind the fryer, packing
+ * → each mix's day-before steps worked back from when its dough is rolled →
+ * capacity → cost → cautions and warnings.
  */
 import { allergenCaution, distinctAllergens, HOME_FOOD_RULES_CAUTION, hotOilCautions } from './cautions.js';
 import { capacityFromEquipment, type Capacity } from './capacity.js';
 import { costBake, type BoxOffer, type CostPlan, type Prices } from './cost.js';
-import { cutsFromSheet, doughForPieces, rollAndCut, type RollResult } from './cutting.js';
-import { ProductionInputError, requireFinite, requireNonNegative, requireWholeNonNegative } from './errors.js';
-import { scaleFormula, type Formula, type RouxPlan, type ScaledFormula, type StarterPlan } from './formula.js';
-import { FAT_ABSORBED_GRAMS_PER_DOZEN, planFry, type FryPlan } from './fry.js';
+import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, type RollResult, type RollStep } from './cutting.js';
+import { ProductionInputError, requireFinite, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
+import {
+  eggEdibleGrams, scaleFormula, type EggClass, type EggCount, type Formula, type RouxPlan, type ScaledFormula, type StarterPlan,
+} from './formula.js';
+import { buildFryer, heatUpMinutes, oilWarnings, type Burner, type Fryer, type FryPlan, type FryTimetableEntry, type PotMaterial } from './fry.js';
 import { glazeAmounts, type GlazeAmount, type GlazeNeed, type GlazeRecipe } from './glaze.js';
+import { stageLine, type LineSheetInput, type StagedLine } from './line.js';
+import { ADD_IN_STEP_WORDS, planMixes, validateVariations, type DoughShare, type DoughVariation, type MixPlan } from './mixes.js';
 import { effectivePieceMass } from './pieces.js';
-import { buildSchedule, FRIDGE_MAX_C, lookForTexts, type StepDurations, type TimelineStep } from './schedule.js';
+import { FRIDGE_MAX_C, lookForTexts, STEP_TITLES, YEAST_NO_GROWTH_C, YEAST_OPTIMUM_C, type ScheduleStep, type StepDurations } from './schedule.js';
+import {
+  DEFAULT_DOUGH_TEMPERATURE, driftingFermentationMinutes, fermentationMinutes, liquidTemperatureC,
+  type DoughTemperatureSettings, type TemperatureFactor,
+} from './temperature.js';
+import { instantFormatter, parseInstant, readLocalTime, requireTimeZone } from './time.js';
+import { tempInBothScales } from './units.js';
+import { warning, type PlanWarning, type WarningCode } from './warnings.js';
 
 export type PieceKind = 'ring' | 'hole';
 
@@ -29,6 +44,8 @@ export interface OrderLine {
   /** Glaze recipe id, or null for plain. */
   glaze: string | null;
   quantity: number;
+  /** Dough variation id (see `doughs`); absent or null for the base dough. */
+  dough?: string | null;
 }
 
 export interface SpareAllowance {
@@ -43,13 +60,35 @@ export interface SpareAllowance {
 }
 
 export interface Equipment {
-  pot: { diameterMm: number; oilDepthMm: number };
-  oil: { startC: number; floorC: number; densityAt20C?: number; specificHeatJPerGK?: number; smokePointC?: number };
+  pot: {
+    diameterMm: number;
+    oilDepthMm: number;
+    /** Inside height of the pot, for the freeboard check. */
+    heightMm?: number;
+    /** Empty pot; it heats and cools with the oil. */
+    massGrams?: number;
+    material?: PotMaterial;
+  };
+  oil: {
+    startC: number;
+    floorC: number;
+    densityAt20C?: number;
+    specificHeatJPerGK?: number;
+    smokePointC?: number;
+    /** Top up before the cold level falls below this. Default 40 mm. */
+    minDepthMm?: number;
+    /** Keep at least this between the hot oil (with a batch in) and the rim. Default 75 mm. */
+    minFreeboardMm?: number;
+  };
+  /** The burner under the pot. Default 2.5 kW, 40 % of it reaching the oil. */
+  burner?: Burner;
   cutter: { outerMm: number; innerMm: number };
   rolling: {
     thicknessMm: number;
     /** Width the dough is rolled to on the bench. */
     widthMm: number;
+    /** Longest sheet the bench takes. Default 600 mm. */
+    benchLengthMm?: number;
     gapMm: number;
     scrapPercent: number;
     rerolls: number;
@@ -61,26 +100,63 @@ export interface Equipment {
   frying: {
     ringSecondsPerSide: number;
     holeSecondsPerSide: number;
+    /** Least minutes between batches (lift out, drain, load); the oil's own recovery is added when longer. */
     recoveryMinutes: number;
     /** Time the fryer is available on the bake day (for capacity). */
     windowMinutes: number;
     puffFactor?: number;
     turnClearanceMm?: number;
     doughSpecificHeatJPerGK?: number;
+    /** @deprecated Ignored: fat taken up now follows the piece's weight (absorbedFatPercent). */
     fatAbsorbedGramsPerDozen?: number;
-    /** Dough temperature going into the oil; default the room temperature. */
+    /** Fat taken up, percent of the fried weight. Default 22 (15–25 published). */
+    absorbedFatPercent?: number;
+    /** Water lost in the fryer, percent of the dough. Default 10. */
+    waterLossPercent?: number;
+    /** Dough temperature going into the oil; default the proofing temperature. */
     doughTempC?: number;
   };
-  proofing: { trays: number; ringsPerTray: number };
-  mixer: { capacityGrams: number; mixes: number };
+  proofing: {
+    trays: number;
+    /** The most rings the baker puts on a tray; a real layout on the tray size may allow fewer. */
+    ringsPerTray: number;
+    trayWidthMm?: number;
+    trayLengthMm?: number;
+    /** Room to grow between proofed pieces. Default 10 mm. */
+    trayGapMm?: number;
+  };
+  mixer: {
+    /** Dough the bowl takes in one mix. */
+    capacityGrams: number;
+    /** Mixes there is time for. */
+    mixes: number;
+  };
   fridge: { doughGrams: number };
 }
 
+/** The baker's own rates for the steps that grow with the quantity. */
+export interface WorkRates {
+  /** Rolling one sheet and cutting it. */
+  rollMinutesPerSheet: number;
+  /** Scraps pressed together rest this long before the re-roll. */
+  rerollRestMinutes: number;
+  glazeSecondsPerPiece: number;
+  packSecondsPerBox: number;
+}
+
 export interface PlanScheduleSettings {
-  /** Minutes per step; the fry step is computed from the fry plan. */
+  /**
+   * Minutes per step. Bulk fermentation, final proof and the starter's peak
+   * are given at `bulkReferenceTempC` and scaled; mix and shape are per mix;
+   * cold retard is the least time in the fridge; heat-oil is the least time
+   * (the burner may need longer); roll-and-cut, glaze and pack are each
+   * step's fixed set-up, on top of the rates. The fry step is computed.
+   */
   durationsMinutes: Omit<StepDurations, 'fry'>;
+  /** Temperature at which the fermentation times hold. */
   bulkReferenceTempC: number;
   cutoffMarginMinutes: number;
+  rates?: WorkRates;
 }
 
 export interface AllergenList {
@@ -106,6 +182,14 @@ export interface PlanBakeInput {
   glazes: GlazeRecipe[];
   boxes?: BoxOffer[];
   allergens: AllergenList;
+  /** Desired dough temperature and what goes into it. Default DDT 80 °F, stand-mixer friction. */
+  doughTemperature?: DoughTemperatureSettings;
+  /** Flavoured doughs the order lines can name. */
+  doughs?: DoughVariation[];
+  /** Eggs bought by this weight class. Default large. */
+  eggClass?: EggClass;
+  /** Boxes to pack tonight (default: a box per dozen rings and per 15 holes). */
+  boxesToPack?: number;
 }
 
 export interface PieceCounts {
@@ -130,6 +214,8 @@ export interface CutsPlan extends RollResult {
   surplus: { rings: number; holes: number };
   /** The first roll as one sheet at the bench width, and how many rings a real layout fits in it. */
   firstRollSheet: { widthMm: number; lengthMm: number; ringsThatFit: number };
+  /** Share of a sheet's dough each cutter takes in a real layout (scrap allowance applied on top). */
+  cutShare: { ring: number; hole: number };
 }
 
 export interface StarterSheet extends StarterPlan {
@@ -138,24 +224,133 @@ export interface StarterSheet extends StarterPlan {
   hoursBeforeMix: number;
 }
 
+export interface DoughTemperaturePlan {
+  targetC: number;
+  frictionC: number;
+  /** The temperatures counted besides the liquid's. */
+  factors: TemperatureFactor[];
+  /** The line whose temperature is set: free water, or the milk when the formula has no free water. */
+  liquid: string;
+  liquidTemperatureC: number;
+}
+
+export interface PlanDough extends ScaledFormula {
+  /** Temperature to bring the liquid to, so the dough comes out of the mixer at the desired temperature. */
+  liquidTemperatureC: number;
+  temperature: DoughTemperaturePlan;
+}
+
+export interface MixSchedule extends MixPlan {
+  feedStarterAt: string | null;
+  cookRouxAt: string | null;
+  mixAt: string;
+  bulkFrom: string;
+  bulkUntil: string;
+  shapeAt: string;
+  retardFrom: string;
+  retardUntil: string;
+  /** Its dough's first sheet goes on the bench. */
+  rollAt: string;
+  /** Its pieces' frying window. */
+  fryFrom: string;
+  fryUntil: string;
+}
+
+export interface VariationPlan {
+  id: string | null;
+  name: string;
+  rings: number;
+  holes: number;
+  /** Dough for this flavour, add-ins included. */
+  doughGrams: number;
+  addIns: Array<{ name: string; grams: number }>;
+  addAt: string | null;
+  /** Its own formula, or the base dough. */
+  ownFormula: boolean;
+}
+
+export interface LineTrayPlan {
+  tray: number;
+  kind: PieceKind;
+  dough: string | null;
+  pieces: number;
+  sheet: number;
+  cutAt: string;
+  proofFrom: string;
+  fryAt: string;
+}
+
+export interface LineSheetPlan {
+  sheet: number;
+  dough: string | null;
+  mix: number | null;
+  roll: number;
+  doughGrams: number;
+  rings: number;
+  holes: number;
+  from: string;
+  until: string;
+}
+
+export interface LinePlan {
+  piecesPerTray: { ring: number; hole: number };
+  trays: LineTrayPlan[];
+  sheets: LineSheetPlan[];
+  /** Most trays proofing at once. */
+  traysInUse: number;
+  proofMinutes: number;
+  glazeFrom: string;
+  glazeUntil: string;
+  packFrom: string;
+  packUntil: string;
+}
+
+export interface TimelineEntry {
+  step: ScheduleStep;
+  title: string;
+  startsAt: string;
+  endsAt: string;
+  /** Whole minutes, rounded up. */
+  minutes: number;
+  lookFor: string;
+  /** The mix this step belongs to (several mixes); absent for the bake day's line. */
+  mix?: number;
+}
+
+export interface Shopping {
+  eggClass: EggClass;
+  /** Whole eggs in the shell, all mixes. */
+  eggs: number;
+  /** Oil for a fresh fill and tonight's top-ups. */
+  oilFreshGrams: number;
+  /** Oil for the top-ups alone (oil kept from the last bake). */
+  oilTopUpGrams: number;
+}
+
 export interface BakePlan {
   pieces: PiecesSummary;
-  dough: ScaledFormula;
+  dough: PlanDough;
   roux: RouxPlan | null;
   starter: StarterSheet | null;
+  mixes: MixSchedule[];
+  variations: VariationPlan[];
   cuts: CutsPlan;
   fry: FryPlan;
+  line: LinePlan;
   glaze: GlazeAmount[];
-  timeline: TimelineStep[];
+  timeline: TimelineEntry[];
   firstStepAt: string;
   preorderCutoffAt: string;
   bulkFermentationMinutes: number;
+  finalProofMinutes: number;
+  starterPeakHours: number | null;
+  shopping: Shopping;
   capacity: Capacity;
   cost: CostPlan;
   /** Safety and legal cautions (hot oil, allergens, home-food rules). */
   cautions: string[];
-  /** Planning notes: ranges, timing, capacity. */
-  warnings: string[];
+  /** Planning warnings; none for a common bake. */
+  warnings: PlanWarning[];
 }
 
 function summariseOrders(orders: OrderLine[]): OrderLine[] {
@@ -169,11 +364,12 @@ function summariseOrders(orders: OrderLine[]): OrderLine[] {
     if (o.kind !== 'ring' && o.kind !== 'hole') throw new ProductionInputError(`orders[${i}].kind`, 'must be ring or hole');
     if (o.glaze !== null && typeof o.glaze !== 'string') throw new ProductionInputError(`orders[${i}].glaze`, 'must be a glaze id or null');
     if (!Number.isInteger(o.quantity) || o.quantity < 0) requireWholeNonNegative(`orders[${i}].quantity`, o.quantity);
+    const dough = o.dough ?? null;
     const seen = byId.get(o.menuItemId);
     if (!seen) {
-      byId.set(o.menuItemId, { menuItemId: o.menuItemId, name: o.name, kind: o.kind, glaze: o.glaze, quantity: o.quantity });
-    } else if (seen.kind !== o.kind || seen.glaze !== o.glaze) {
-      throw new ProductionInputError(`orders[${i}]`, `menu item ${o.menuItemId} appears with a different kind or glaze`);
+      byId.set(o.menuItemId, { menuItemId: o.menuItemId, name: o.name, kind: o.kind, glaze: o.glaze, quantity: o.quantity, dough });
+    } else if (seen.kind !== o.kind || seen.glaze !== o.glaze || (seen.dough ?? null) !== dough) {
+      throw new ProductionInputError(`orders[${i}]`, `menu item ${o.menuItemId} appears with a different kind, glaze or dough`);
     } else {
       seen.quantity += o.quantity;
     }
@@ -214,17 +410,59 @@ function requireParts(input: PlanBakeInput): void {
   if (!Array.isArray(input.allergens.dough)) throw new ProductionInputError('allergens.dough', 'must be a list');
 }
 
+/** Defaults for the settings added after the first production sheet; stored settings without them still plan. */
+export const DEFAULT_RATES: WorkRates = Object.freeze({ rollMinutesPerSheet: 12, rerollRestMinutes: 10, glazeSecondsPerPiece: 8, packSecondsPerBox: 40 });
+export const DEFAULT_BURNER: Burner = Object.freeze({ watts: 2500, efficiencyPercent: 40 });
+export const DEFAULT_POT_BODY = Object.freeze({ heightMm: 170, massGrams: 4500, material: 'cast-iron' as PotMaterial });
+export const DEFAULT_TRAY = Object.freeze({ trayWidthMm: 330, trayLengthMm: 460, trayGapMm: 10 });
+export const DEFAULT_BENCH_LENGTH_MM = 600;
+/** When the add-ins' share of a mix changes the dough by more than this, say so. */
+export const EGG_SHIFT_WARN_PERCENT = 2;
+/** Hottest liquid the sheet asks for without a warning. */
+export const LIQUID_MAX_C = 45;
+
+interface Lot {
+  dough: string | null;
+  rings: number;
+  holes: number;
+  /** Glaze queue per kind, in the order the pieces are glazed. */
+  queue: Record<PieceKind, Array<{ glazeId: string | null; left: number }>>;
+}
+
+function keyOf(dough: string | null): string {
+  return dough ?? '';
+}
+
+/** Integer shares of `total` in proportion to `weights` (largest remainders, in order). */
+function apportion(total: number, weights: number[]): number[] {
+  const sum = weights.reduce((s, w) => s + w, 0);
+  if (sum <= 0 || total === 0) return weights.map(() => 0);
+  const exact = weights.map((w) => (total * w) / sum);
+  const out = exact.map((x) => Math.floor(x + 1e-9));
+  let left = total - out.reduce((s, x) => s + x, 0);
+  const order = exact.map((x, i) => [x - Math.floor(x + 1e-9), i] as const).sort((a, b) => b[0] - a[0] || a[1] - b[1]);
+  for (let k = 0; left > 0 && k < order.length; k++, left--) out[order[k]![1]]! += 1;
+  return out;
+}
+
 export function planBake(input: PlanBakeInput): BakePlan {
   requireParts(input);
   const { equipment: eq } = input;
+  const zone = requireTimeZone('timeZone', input.timeZone);
   const roomTempC = requireFinite('roomTempC', input.roomTempC);
   const items = summariseOrders(input.orders);
+  const variations = validateVariations(input.doughs);
   const glazeIds = new Set(input.glazes.map((g) => g.id));
   items.forEach((item) => {
     if (item.glaze !== null && !glazeIds.has(item.glaze)) {
       throw new ProductionInputError('orders', `menu item ${item.menuItemId} uses unknown glaze "${item.glaze}"`);
     }
+    if (item.dough && !variations.has(item.dough)) {
+      throw new ProductionInputError('orders', `menu item ${item.menuItemId} names unknown dough "${item.dough}"`);
+    }
   });
+  const warnings: PlanWarning[] = [];
+  const warn = (code: WarningCode, message: string) => warnings.push(warning(code, message));
 
   // Pieces to make.
   const sparePct = requireNonNegative('spare.percent', input.spare.percent);
@@ -254,15 +492,429 @@ export function planBake(input: PlanBakeInput): BakePlan {
     byGlaze: glazeNeeds(items, spareGlaze, { rings: rings.spare, holes: holes.spare }),
   };
 
-  // Dough, formula, cuts.
-  const rollSettings = { ...mass, scrapPercent: eq.rolling.scrapPercent, rerolls: eq.rolling.rerolls };
-  const need = doughForPieces({ ...rollSettings, rings: rings.toMake, holes: holes.toMake });
-  const dough = scaleFormula(input.formula, need.doughGrams);
-  const rolled = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: rings.toMake, extraHolesWanted: need.extraHoles });
-  if (rolled.short.rings > 0 || rolled.short.holes > 0) {
-    throw new Error('internal: the planned dough did not cut every piece'); // doughForPieces guarantees it
+  // Lots: one per dough, pieces kept apart so each flavour's glazes land on its own pieces.
+  const lots = new Map<string, Lot>();
+  const lotOf = (dough: string | null): Lot => {
+    let lot = lots.get(keyOf(dough));
+    if (!lot) {
+      lot = { dough, rings: 0, holes: 0, queue: { ring: [], hole: [] } };
+      lots.set(keyOf(dough), lot);
+    }
+    return lot;
+  };
+  lotOf(null);
+  for (const v of variations.values()) if (items.some((i) => i.dough === v.id && i.quantity > 0)) lotOf(v.id);
+  for (const item of items) {
+    if (item.quantity === 0) continue;
+    const lot = lotOf(item.dough ?? null);
+    if (item.kind === 'ring') lot.rings += item.quantity;
+    else lot.holes += item.quantity;
+    lot.queue[item.kind].push({ glazeId: item.glaze, left: item.quantity });
   }
-  const firstRoll = rolled.rolls[0];
+  const baseLot = lotOf(null);
+  baseLot.rings += rings.spare;
+  baseLot.holes += holes.spare;
+  if (rings.spare > 0) baseLot.queue.ring.push({ glazeId: spareGlaze, left: rings.spare });
+  if (holes.spare > 0) baseLot.queue.hole.push({ glazeId: spareGlaze, left: holes.spare });
+
+  // Cut shares from real layouts on the bench sheet; the scrap allowance applies on top.
+  const benchLengthMm = requirePositive('rolling.benchLengthMm', eq.rolling.benchLengthMm ?? DEFAULT_BENCH_LENGTH_MM);
+  const bench = (cutterMm: number) => ({ widthMm: eq.rolling.widthMm, lengthMm: benchLengthMm, cutterMm, gapMm: eq.rolling.gapMm });
+  const keep = 1 - eq.rolling.scrapPercent / 100;
+  const ringShareRaw = sheetCutShare(bench(eq.cutter.outerMm));
+  const holeShareRaw = eq.cutter.innerMm > 0 ? sheetCutShare(bench(eq.cutter.innerMm)) : keep;
+  if (ringShareRaw === 0) {
+    warn('cutter_wider_than_sheet', `The ${Math.round(eq.cutter.outerMm)} mm cutter does not fit on a sheet rolled ${Math.round(eq.rolling.widthMm)} mm wide: no ring can be cut. Roll wider or use a smaller cutter; the plan below assumes the usual ${Math.round(keep * 100)} % cut.`);
+  }
+  const cutShare = { ring: ringShareRaw > 0 ? Math.min(keep, ringShareRaw) : keep, hole: holeShareRaw > 0 ? Math.min(keep, holeShareRaw) : keep };
+  const rollSettings = { ...mass, scrapPercent: eq.rolling.scrapPercent, rerolls: eq.rolling.rerolls, ringCutShare: Math.max(0.05, cutShare.ring), holeCutShare: Math.max(0.05, cutShare.hole) };
+
+  // Dough each lot needs, and its cuts.
+  const lotList = [...lots.values()];
+  const lotCuts = lotList.map((lot) => {
+    const need = doughForPieces({ ...rollSettings, rings: lot.rings, holes: lot.holes });
+    const rolled = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles });
+    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece'); // doughForPieces guarantees it
+    return { lot, need, rolled };
+  });
+  const baseCut = lotCuts[0]!;
+
+  // Mixes: each formula split to fit the bowl; add-in flavours take their share of the base dough.
+  const eggClass = input.eggClass ?? 'large';
+  const gramsPerEgg = eggEdibleGrams(eggClass);
+  const shareOf = (c: (typeof lotCuts)[number]): DoughShare => {
+    const v = c.lot.dough ? variations.get(c.lot.dough) : undefined;
+    return { dough: c.lot.dough, name: v?.name ?? 'Plain dough', grams: c.need.doughGrams, addIns: v?.formula ? [] : v?.addIns ?? [], addAt: v?.addIns?.length ? v.addAt ?? 'after-mix' : null };
+  };
+  const baseShares = lotCuts.filter((c) => !(c.lot.dough && variations.get(c.lot.dough)?.formula)).map(shareOf);
+  const ownGroups = lotCuts.filter((c) => c.lot.dough && variations.get(c.lot.dough)?.formula)
+    .map((c) => ({ formulaOf: c.lot.dough, formula: variations.get(c.lot.dough!)!.formula!, shares: [shareOf(c)] }));
+  const mixPlans = planMixes([{ formulaOf: null, formula: input.formula, shares: baseShares }, ...ownGroups], eq.mixer.capacityGrams, gramsPerEgg);
+  const baseDoughGrams = mixPlans.filter((m) => m.formulaOf === null).reduce((s, m) => s + m.doughGrams, 0);
+  const scaled = scaleFormula(input.formula, baseDoughGrams);
+  const baseMixes = mixPlans.filter((m) => m.formulaOf === null);
+  const eggs: EggCount | null = scaled.eggs
+    ? (() => {
+        const count = baseMixes.reduce((s, m) => s + (m.eggs?.count ?? 0), 0);
+        const massChangeGrams = count * gramsPerEgg - scaled.eggs.grams;
+        return {
+          ...scaled.eggs,
+          count,
+          gramsPerEgg,
+          rule: `whole ${eggClass} eggs (about ${Math.round(gramsPerEgg)} g without the shell), rounded for each mix; or weigh ${Math.round(scaled.eggs.grams)} g of beaten egg`,
+          massChangeGrams,
+          doughGramsWithWholeEggs: baseDoughGrams + massChangeGrams,
+        };
+      })()
+    : null;
+  for (const m of mixPlans) {
+    if (m.eggs && m.doughGrams > 0 && Math.abs(m.eggs.massChangeGrams) / m.doughGrams > EGG_SHIFT_WARN_PERCENT / 100) {
+      warn('egg_rounding_shift', `Mix ${m.mix}: ${m.eggs.count} whole egg${m.eggs.count === 1 ? '' : 's'} instead of ${Math.round(m.eggs.grams)} g changes the dough by ${m.eggs.massChangeGrams > 0 ? '+' : ''}${Math.round(m.eggs.massChangeGrams)} g (${(Math.abs(m.eggs.massChangeGrams) / m.doughGrams * 100).toFixed(1)} %): weigh ${Math.round(m.eggs.grams)} g of beaten egg instead.`);
+      break;
+    }
+  }
+  const mixesByFormula = new Map<string, number>();
+  for (const m of mixPlans) mixesByFormula.set(keyOf(m.formulaOf), (mixesByFormula.get(keyOf(m.formulaOf)) ?? 0) + 1);
+  if (mixPlans.length > eq.mixer.mixes) {
+    const total = mixPlans.reduce((s, m) => s + m.doughGrams, 0);
+    warn('bowl_too_small', `Tonight's ${(total / 1000).toFixed(1)} kg of dough needs ${mixPlans.length} mixes in the ${(eq.mixer.capacityGrams / 1000).toFixed(1)} kg bowl, more than the ${eq.mixer.mixes} there is time for: the plan schedules all ${mixPlans.length}, one after another. Check the times below or take fewer orders.`);
+  }
+
+  // Desired dough temperature → the liquid's temperature.
+  const dt = { ...DEFAULT_DOUGH_TEMPERATURE, ...input.doughTemperature };
+  const targetC = requireFinite('doughTemperature.targetC', dt.targetC);
+  const factors: TemperatureFactor[] = [
+    { name: 'Room', tempC: roomTempC },
+    { name: 'Flour', tempC: dt.flourC ?? roomTempC },
+  ];
+  if (scaled.starter) factors.push({ name: 'Starter', tempC: dt.starterC ?? roomTempC });
+  if (scaled.roux) factors.push({ name: 'Milk roux', tempC: dt.rouxC ?? roomTempC });
+  const liquidC = liquidTemperatureC({ targetC, frictionC: dt.frictionC, factors });
+  const freeWater = scaled.finalDough.find((r) => r.kind === 'water' && r.grams > 1e-6);
+  const liquidLine = freeWater ?? scaled.finalDough.find((r) => r.kind === 'milk' && r.grams > 1e-6);
+  const liquidName = liquidLine?.name ?? 'Water';
+  // Common practice, no source: liquid much above about 45 °C (113 °F) stresses the starter's yeast; below 2 °C it would have to be iced.
+  if (baseDoughGrams > 0 && (liquidC > LIQUID_MAX_C || liquidC < 2)) {
+    warn('liquid_temperature_out_of_range', liquidC > LIQUID_MAX_C
+      ? `To reach ${tempInBothScales(targetC)} the ${liquidName.toLowerCase()} would have to be ${tempInBothScales(liquidC)}, hot enough to harm the starter: use the roux still warm, warm the flour, or aim a little lower.`
+      : `To reach ${tempInBothScales(targetC)} the ${liquidName.toLowerCase()} would have to be ${tempInBothScales(liquidC)}, colder than a fridge gives: use chilled flour or ice, or aim a little higher.`);
+  }
+  const dough: PlanDough = {
+    ...scaled,
+    eggs,
+    liquidTemperatureC: liquidC,
+    temperature: { targetC, frictionC: dt.frictionC, factors, liquid: liquidName, liquidTemperatureC: liquidC },
+  };
+  scaled.warnings.forEach((w) => warn('formula_outside_usual_range', w));
+
+  // Fermentation times from the dough's own temperature.
+  const durations = input.schedule.durationsMinutes;
+  for (const step of Object.keys(durations) as Array<keyof typeof durations>) requireNonNegative(`schedule.durationsMinutes.${step}`, durations[step]);
+  const refC = requireFinite('schedule.bulkReferenceTempC', input.schedule.bulkReferenceTempC);
+  const proofC = dt.proofC ?? roomTempC;
+  const bulkMinutes = driftingFermentationMinutes({ referenceMinutes: durations['bulk-fermentation'], referenceTempC: refC, startC: targetC, surroundC: roomTempC, settleMinutes: dt.bulkSettleMinutes });
+  const proofMinutes = driftingFermentationMinutes({ referenceMinutes: durations['final-proof'], referenceTempC: refC, startC: FRIDGE_MAX_C, surroundC: proofC, settleMinutes: dt.proofSettleMinutes });
+  const peakHoursRef = input.formula.starterFeed?.peakHours ?? 4;
+  const starterPeakMinutes = scaled.starter ? fermentationMinutes(peakHoursRef * 60, refC, dt.starterC ?? roomTempC) : 0;
+  if (roomTempC < YEAST_NO_GROWTH_C) {
+    warn('room_too_cold', `Room at ${tempInBothScales(roomTempC)}: yeast barely grows below about ${YEAST_NO_GROWTH_C} °C, so the bulk time cannot be trusted.`);
+  } else if (roomTempC > YEAST_OPTIMUM_C) {
+    warn('room_too_warm', `Room at ${tempInBothScales(roomTempC)} is above the yeast's optimum (about ${YEAST_OPTIMUM_C} °C): the bulk time is a rough guess and the dough sours fast.`);
+  }
+
+  // The pot.
+  const doughInOilC = eq.frying.doughTempC ?? proofC;
+  const fryBuilt = buildFryer({
+    potDiameterMm: eq.pot.diameterMm,
+    oilDepthMm: eq.pot.oilDepthMm,
+    oilStartC: eq.oil.startC,
+    oilFloorC: eq.oil.floorC,
+    doughTempC: doughInOilC,
+    puffFactor: eq.frying.puffFactor,
+    turnClearanceMm: eq.frying.turnClearanceMm,
+    oilSpecificHeatJPerGK: eq.oil.specificHeatJPerGK,
+    doughSpecificHeatJPerGK: eq.frying.doughSpecificHeatJPerGK,
+    oilDensityAt20C: eq.oil.densityAt20C,
+    smokePointC: eq.oil.smokePointC,
+    pot: { massGrams: eq.pot.massGrams ?? DEFAULT_POT_BODY.massGrams, material: eq.pot.material ?? DEFAULT_POT_BODY.material },
+    burner: eq.burner ?? DEFAULT_BURNER,
+    potHeightMm: eq.pot.heightMm ?? DEFAULT_POT_BODY.heightMm,
+    minFreeboardMm: eq.oil.minFreeboardMm,
+    minOilDepthMm: eq.oil.minDepthMm,
+    kitchenC: roomTempC,
+    absorbedFatPercent: eq.frying.absorbedFatPercent,
+    waterLossPercent: eq.frying.waterLossPercent,
+    rings: { count: 0, grams: mass.ringGrams, diameterMm: eq.cutter.outerMm, secondsPerSide: eq.frying.ringSecondsPerSide },
+    holes: { count: 0, grams: mass.holeGrams, diameterMm: eq.cutter.innerMm, secondsPerSide: eq.frying.holeSecondsPerSide },
+    recoveryMinutes: eq.frying.recoveryMinutes,
+  });
+  const { fryer } = fryBuilt;
+  if (fryBuilt.ringSize.byHeat === 0 || (fryBuilt.holeSize && fryBuilt.holeSize.byHeat === 0)) {
+    warn('one_piece_cools_oil', 'Even one piece cools this oil below the lowest frying temperature: use more oil, a wider pot, a stronger burner or smaller pieces.');
+  }
+  oilWarnings({ oilStartC: eq.oil.startC, smokePointC: eq.oil.smokePointC, oilDepthMm: eq.pot.oilDepthMm }, fryBuilt.oil).forEach((w) => warnings.push(w));
+
+  // Sheets: each mix's share of a dough rolled on its own, then the dough's scraps re-rolled.
+  const sheetMaxGrams = (eq.rolling.widthMm * benchLengthMm * eq.rolling.thicknessMm * eq.rolling.doughDensityGPerCm3) / 1000;
+  const withCentres = mass.holeGrams > 0;
+  const sheetsIn: LineSheetInput[] = [];
+  const mixSheetIndex = new Map<number, number[]>();
+  // Every dough's first roll, then the re-rolls: a dough's scraps rest while the next dough is rolled.
+  const byRoll: LineSheetInput[][] = [];
+  for (const c of lotCuts) {
+    const portions = mixPlans.flatMap((m) => m.portions.filter((p) => p.dough === c.lot.dough).map((p) => ({ mix: m.mix, grams: p.baseGrams + p.addIns.reduce((s, a) => s + a.grams, 0) })));
+    c.rolled.rolls.forEach((r: RollStep) => {
+      if (r.doughGrams <= 0 || r.rings + r.extraHoles === 0) return;
+      const parts = r.roll === 1 && portions.length > 0
+        ? portions.flatMap((p) => {
+            const n = Math.max(1, Math.ceil(p.grams / sheetMaxGrams - 1e-9));
+            return Array.from({ length: n }, () => ({ mix: p.mix as number | null, grams: p.grams / n }));
+          })
+        : (() => {
+            const n = Math.max(1, Math.ceil(r.doughGrams / sheetMaxGrams - 1e-9));
+            return Array.from({ length: n }, () => ({ mix: null as number | null, grams: r.doughGrams / n }));
+          })();
+      const weights = parts.map((p) => p.grams);
+      const ringSplit = apportion(r.rings, weights);
+      const holeSplit = apportion(r.extraHoles, weights);
+      parts.forEach((p, i) => {
+        const ringsHere = ringSplit[i]!;
+        const extra = holeSplit[i]!;
+        if (ringsHere + extra === 0) return;
+        (byRoll[r.roll - 1] ??= []).push({ dough: c.lot.dough, mix: p.mix, roll: r.roll, doughGrams: p.grams, rings: ringsHere, holes: (withCentres ? ringsHere : 0) + extra });
+      });
+    });
+  }
+  for (const sheet of byRoll.flat()) {
+    if (sheet.mix !== null) {
+      const list = mixSheetIndex.get(sheet.mix);
+      if (list) list.push(sheetsIn.length);
+      else mixSheetIndex.set(sheet.mix, [sheetsIn.length]);
+    }
+    sheetsIn.push(sheet);
+  }
+
+  // Pieces per tray from the tray and the proofed piece's footprint.
+  const puff = eq.frying.puffFactor ?? 1.25;
+  const trayW = eq.proofing.trayWidthMm;
+  const trayL = eq.proofing.trayLengthMm;
+  const trayGap = eq.proofing.trayGapMm ?? DEFAULT_TRAY.trayGapMm;
+  const perTray = (d: number) => (trayW && trayL ? cutsFromSheet({ widthMm: trayW, lengthMm: trayL, cutterMm: d * puff, gapMm: trayGap }) : 0);
+  // The owner's rings per tray is the most they put on one; the tray's real layout can only lower it.
+  const ownerRings = requireWholeNonNegative('proofing.ringsPerTray', eq.proofing.ringsPerTray);
+  const ringsPerTray = Math.max(1, trayW && trayL ? Math.min(ownerRings, perTray(eq.cutter.outerMm)) : ownerRings);
+  const holesPerTray = eq.cutter.innerMm > 0
+    ? Math.max(1, trayW && trayL ? perTray(eq.cutter.innerMm) : Math.floor(ringsPerTray * ((eq.cutter.outerMm * puff + trayGap) / (eq.cutter.innerMm * puff + trayGap)) ** 2))
+    : 1;
+
+  // The staged line.
+  const rates = { ...DEFAULT_RATES, ...input.schedule.rates };
+  requirePositive('schedule.rates.rollMinutesPerSheet', rates.rollMinutesPerSheet);
+  requireNonNegative('schedule.rates.rerollRestMinutes', rates.rerollRestMinutes);
+  requireNonNegative('schedule.rates.glazeSecondsPerPiece', rates.glazeSecondsPerPiece);
+  requireNonNegative('schedule.rates.packSecondsPerBox', rates.packSecondsPerBox);
+  const boxes = input.boxesToPack !== undefined ? requireWholeNonNegative('boxesToPack', input.boxesToPack) : Math.ceil(rings.ordered / 12) + Math.ceil(holes.ordered / 15);
+  const glazeQueues = new Map(lotList.map((l) => [keyOf(l.dough), { ring: l.queue.ring.map((q) => ({ ...q })), hole: l.queue.hole.map((q) => ({ ...q })) }]));
+  const batchGlazes: Array<Array<{ glazeId: string | null; pieces: number }>> = [];
+  const line: StagedLine = stageLine(sheetsIn, {
+    rollMinutesPerSheet: rates.rollMinutesPerSheet,
+    rerollRestMinutes: rates.rerollRestMinutes,
+    proofMinutes,
+    trays: requireWholeNonNegative('proofing.trays', eq.proofing.trays),
+    ringsPerTray,
+    holesPerTray,
+    coolMinutes: durations.cool,
+    glazeSecondsPerPiece: rates.glazeSecondsPerPiece,
+    packSecondsPerBox: rates.packSecondsPerBox,
+    boxes,
+  }, fryer, (index, kind, doughId, count) => {
+    const queue = glazeQueues.get(keyOf(doughId))![kind];
+    const head = queue[0];
+    const previous = batchGlazes[index - 1];
+    // Most batches repeat the last one's split: share that (read-only) list rather than build thousands.
+    if (head && head.left > count && previous && previous.length === 1 && previous[0]!.glazeId === head.glazeId && previous[0]!.pieces === count) {
+      head.left -= count;
+      batchGlazes[index] = previous;
+      return head.glazeId !== null ? count : 0;
+    }
+    const split: Array<{ glazeId: string | null; pieces: number }> = [];
+    let left = count;
+    while (left > 0 && queue.length > 0) {
+      const first = queue[0]!;
+      const take = Math.min(left, first.left);
+      const last = split.at(-1);
+      if (last && last.glazeId === first.glazeId) last.pieces += take;
+      else split.push({ glazeId: first.glazeId, pieces: take });
+      first.left -= take;
+      left -= take;
+      if (first.left === 0) queue.shift();
+    }
+    if (left > 0) split.push({ glazeId: null, pieces: left }); // surplus, left plain
+    batchGlazes[index] = split;
+    return split.reduce((s, g) => s + (g.glazeId !== null ? g.pieces : 0), 0);
+  });
+
+  // Anchor the line: packing ends as the first pickup starts.
+  const pickup = readLocalTime(input.firstPickupStartsAt, zone);
+  if (pickup.reading === 'nonexistent') {
+    warn('nonexistent_local_time', `The first pickup time ${input.firstPickupStartsAt} does not exist in ${zone} (the clocks skip that hour that night); it is read as ${instantFormatter(zone)(pickup.millis)}. Set a time outside the skipped hour.`);
+  } else if (pickup.reading === 'ambiguous') {
+    const fmt = instantFormatter(zone);
+    warn('ambiguous_local_time', `The first pickup time ${input.firstPickupStartsAt} happens twice in ${zone} (the clocks go back that night); it is read as the first, ${fmt(pickup.millis)}, not ${fmt(pickup.alternativeMillis ?? pickup.millis)}. Give the offset to choose.`);
+  }
+  const pickupMs = pickup.millis;
+  const MIN = 60_000;
+  const packSetup = durations.pack;
+  const rollSetup = durations['roll-and-cut'];
+  const B = line.batches;
+  const hasPieces = B.count > 0;
+  const heatMinutes = Math.max(durations['heat-oil'], heatUpMinutes(fryer));
+  const lineEndRel = hasPieces ? line.packUntil + packSetup : 0;
+  // The sheet reads to the minute: every line time is rounded to a whole minute.
+  const abs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
+  const fmt = instantFormatter(zone);
+  const at = (rel: number) => fmt(abs(rel));
+
+  const timetable: FryTimetableEntry[] = new Array(B.count);
+  for (let i = 0; i < B.count; i++) {
+    const tray = line.trays[B.tray[i]! - 1]!;
+    timetable[i] = {
+      batch: i + 1,
+      at: at(B.at[i]!),
+      pieces: B.pieces[i]!,
+      waitForC: fryer.startC,
+      kind: B.kind[i] === 0 ? 'ring' : 'hole',
+      dough: tray.dough,
+      tray: tray.tray,
+      lowestC: B.lowestC[i]!,
+      recoveryMinutes: B.recoveryMinutes[i]!,
+      topUpGramsBefore: B.topUpGramsBefore[i]!,
+      glazes: batchGlazes[i] ?? [],
+    };
+  }
+
+  // Each mix worked back from when its dough is first rolled.
+  const lineStartRel = line.sheets[0] ? line.sheets[0].from - rollSetup : 0;
+  const mixMinutes = durations.mix;
+  const shapeMinutes = durations['shape-and-chill'];
+  const retardMin = durations['cold-retard'];
+  const rouxMinutes = durations['cook-cool-roux'];
+  const rollAtMs = mixPlans.map((m) => {
+    const idx = mixSheetIndex.get(m.mix);
+    const rel = idx && idx.length > 0 ? idx.reduce((m, i) => Math.min(m, line.sheets[i]!.from), Infinity) : lineStartRel;
+    return abs(rel);
+  });
+  const mixStart: number[] = mixPlans.map((_, k) => rollAtMs[k]! - (retardMin + shapeMinutes + bulkMinutes + mixMinutes) * MIN);
+  for (let k = mixPlans.length - 2; k >= 0; k--) mixStart[k] = Math.min(mixStart[k]!, mixStart[k + 1]! - mixMinutes * MIN);
+  // Each mix's frying window, from the batches of the trays its dough filled (one pass over the batches).
+  const trayMix = line.trays.map((t) => t.mix);
+  const windows = new Map<number, { from: number; until: number }>();
+  for (let i = 0; i < B.count; i++) {
+    const mixNo = trayMix[B.tray[i]! - 1];
+    if (mixNo === null || mixNo === undefined) continue;
+    const until = B.at[i]! + B.fryMinutes[i]!;
+    const w = windows.get(mixNo);
+    if (!w) windows.set(mixNo, { from: B.at[i]!, until });
+    else w.until = until;
+  }
+  const fryWindowOf = (mixNo: number) => windows.get(mixNo) ?? { from: line.fryFrom, until: line.fryUntil };
+  // Each mix's instants, to the minute, once; the mix list and the timeline both read them.
+  const toMinute = (ms: number) => Math.round(ms / MIN) * MIN;
+  const mixTimes = mixPlans.map((m, k) => {
+    const start = toMinute(mixStart[k]!);
+    const bulkFrom = start + Math.round(mixMinutes) * MIN;
+    const bulkUntil = toMinute(bulkFrom + bulkMinutes * MIN);
+    const retardFrom = bulkUntil + Math.round(shapeMinutes) * MIN;
+    return { feed: toMinute(start - starterPeakMinutes * MIN), roux: start - Math.round(rouxMinutes) * MIN, start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(m.mix) };
+  });
+  const mixes: MixSchedule[] = mixPlans.map((m, k) => {
+    const t = mixTimes[k]!;
+    return {
+      ...m,
+      feedStarterAt: m.starter ? fmt(t.feed) : null,
+      cookRouxAt: m.roux ? fmt(t.roux) : null,
+      mixAt: fmt(t.start),
+      bulkFrom: fmt(t.bulkFrom),
+      bulkUntil: fmt(t.bulkUntil),
+      shapeAt: fmt(t.bulkUntil),
+      retardFrom: fmt(t.retardFrom),
+      retardUntil: fmt(t.roll),
+      rollAt: fmt(t.roll),
+      fryFrom: at(t.window.from),
+      fryUntil: at(t.window.until),
+    };
+  });
+
+  // The timeline: each mix's steps, then the bake day's line.
+  const lookFor = lookForTexts({
+    oilStartC: eq.oil.startC,
+    thicknessMm: eq.rolling.thicknessMm,
+    rouxCookC: scaled.roux?.cookToC ?? 65,
+    fridgeMaxC: FRIDGE_MAX_C,
+    starterPeakHours: Math.round((starterPeakMinutes / 60) * 10) / 10,
+  });
+  lookFor.mix = `Bring the ${liquidName.toLowerCase()} to ${tempInBothScales(liquidC)} so the dough comes out at ${tempInBothScales(targetC)}. ${lookFor.mix}`;
+  lookFor['final-proof'] = `Each tray out of the fridge in turn, so it is ready as the fryer is. ${lookFor['final-proof']}`;
+  lookFor.glaze = `Each batch once cooled, while the next ones fry. ${lookFor.glaze}`;
+  const timeline: TimelineEntry[] = [];
+  const startMs: number[] = [];
+  const texts = new Map<string, string>();
+  const textFor = (step: ScheduleStep, extra: string) => {
+    if (!extra) return lookFor[step];
+    const key = `${step}|${extra}`;
+    let text = texts.get(key);
+    if (text === undefined) texts.set(key, (text = `${extra} ${lookFor[step]}`));
+    return text;
+  };
+  const entry = (step: ScheduleStep, fromMs: number, untilMs: number, mix?: number, extra = '') => {
+    const minutes = Math.max(0, Math.ceil((untilMs - fromMs) / MIN - 1e-9));
+    startMs.push(fromMs);
+    const e: TimelineEntry = { step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: textFor(step, extra) };
+    if (mix !== undefined) e.mix = mix;
+    timeline.push(e);
+  };
+  const several = mixPlans.length > 1;
+  mixPlans.forEach((m, k) => {
+    const t = mixTimes[k]!;
+    const mixNo = several ? m.mix : undefined;
+    const addIns = m.portions.filter((p) => p.addIns.length > 0);
+    const addWords = (when: 'after-mix' | 'at-shaping') => addIns.filter((p) => p.addAt === when)
+      .map((p) => `Weigh off ${Math.round(p.baseGrams)} g for ${p.name} and fold in ${p.addIns.map((a) => `${Math.round(a.grams)} g ${a.name.toLowerCase()}`).join(', ')} (${ADD_IN_STEP_WORDS[when]}).`).join(' ');
+    if (m.starter) entry('build-starter', t.feed, t.start, mixNo, `Feed ${Math.round(m.starter.build.seedGrams)} g starter with ${Math.round(m.starter.build.flourGrams)} g flour and ${Math.round(m.starter.build.waterGrams)} g water.`);
+    if (m.roux) entry('cook-cool-roux', t.roux, t.start, mixNo);
+    entry('mix', t.start, t.bulkFrom, mixNo, addWords('after-mix'));
+    entry('bulk-fermentation', t.bulkFrom, t.bulkUntil, mixNo);
+    entry('shape-and-chill', t.bulkUntil, t.retardFrom, mixNo, addWords('at-shaping'));
+    entry('cold-retard', t.retardFrom, t.roll, mixNo);
+  });
+  if (hasPieces) {
+    entry('heat-oil', abs(line.fryFrom - heatMinutes), abs(line.fryFrom));
+    entry('roll-and-cut', abs(lineStartRel), abs(line.sheets.at(-1)!.until));
+    entry('final-proof', abs(line.trays.reduce((m, t) => Math.min(m, t.proofFrom), Infinity)), abs(line.trays.reduce((m, t) => Math.max(m, t.fryAt), -Infinity)));
+    entry('fry', abs(line.fryFrom), abs(line.fryUntil));
+    entry('cool', abs(line.fryUntil), abs(line.fryUntil + durations.cool));
+    entry('glaze', abs(line.glazeFrom), abs(line.glazeUntil));
+    entry('pack', abs(line.packFrom), abs(lineEndRel));
+  } else {
+    entry('pack', pickupMs, pickupMs);
+  }
+  const stepOrder = new Map(['build-starter', 'cook-cool-roux', 'mix', 'bulk-fermentation', 'shape-and-chill', 'cold-retard', 'heat-oil', 'roll-and-cut', 'final-proof', 'fry', 'cool', 'glaze', 'pack'].map((s, i) => [s, i]));
+  const order = timeline.map((_, i) => i).sort((a, b) => startMs[a]! - startMs[b]! || (timeline[a]!.mix ?? 0) - (timeline[b]!.mix ?? 0) || stepOrder.get(timeline[a]!.step)! - stepOrder.get(timeline[b]!.step)!);
+  const sortedTimeline = order.map((i) => timeline[i]!);
+  const firstStepMs = startMs.length > 0 ? startMs.reduce((m, x) => Math.min(m, x), Infinity) : pickupMs;
+  const cutoffMs = firstStepMs - Math.ceil(requireNonNegative('schedule.cutoffMarginMinutes', input.schedule.cutoffMarginMinutes) - 1e-9) * MIN;
+  const nowMs = parseInstant('now', input.now, zone);
+  if (nowMs >= firstStepMs) warn('schedule_cannot_be_met', 'The first step should already have started: this schedule cannot be met.');
+  else if (nowMs >= cutoffMs) warn('cutoff_passed', 'The pre-order cut-off has passed.');
+
+  // Cuts, summed over the doughs.
+  const rollsSum: RollStep[] = baseCut.rolled.rolls.map((r0, i) => {
+    const all = lotCuts.map((c) => c.rolled.rolls[i]!);
+    return { roll: r0.roll, doughGrams: all.reduce((s, x) => s + x.doughGrams, 0), rings: all.reduce((s, x) => s + x.rings, 0), extraHoles: all.reduce((s, x) => s + x.extraHoles, 0), scrapGrams: all.reduce((s, x) => s + x.scrapGrams, 0) };
+  });
+  const cutRings = lotCuts.reduce((s, c) => s + c.rolled.rings, 0);
+  const cutHoles = lotCuts.reduce((s, c) => s + c.rolled.holes, 0);
+  const firstRoll = rollsSum[0];
   const sheetLengthMm = firstRoll && firstRoll.doughGrams > 0
     ? (firstRoll.doughGrams * 1000) / (eq.rolling.doughDensityGPerCm3 * eq.rolling.thicknessMm * eq.rolling.widthMm)
     : 0;
@@ -270,133 +922,174 @@ export function planBake(input: PlanBakeInput): BakePlan {
     ? cutsFromSheet({ widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, cutterMm: eq.cutter.outerMm, gapMm: eq.rolling.gapMm })
     : 0;
   const cuts: CutsPlan = {
-    ...rolled,
-    surplus: { rings: rolled.rings - rings.toMake, holes: rolled.holes - holes.toMake },
+    rolls: rollsSum,
+    rings: cutRings,
+    holes: cutHoles,
+    extraHoles: lotCuts.reduce((s, c) => s + c.rolled.extraHoles, 0),
+    scrapGrams: lotCuts.reduce((s, c) => s + c.rolled.scrapGrams, 0),
+    short: { rings: 0, holes: 0 },
+    surplus: { rings: cutRings - rings.toMake, holes: cutHoles - holes.toMake },
     firstRollSheet: { widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, ringsThatFit },
+    cutShare,
   };
+  if (firstRoll && ringShareRaw > 0 && firstRoll.rings > ringsThatFit && ringsThatFit > 0) {
+    warn('sheet_fits_fewer', `Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits about ${ringsThatFit} rings, not the ${firstRoll.rings} planned: cut closer together or expect more re-rolled dough.`);
+  }
 
-  // Fry.
-  const doughTempC = eq.frying.doughTempC ?? roomTempC;
-  const fatPerDozen = eq.frying.fatAbsorbedGramsPerDozen ?? FAT_ABSORBED_GRAMS_PER_DOZEN;
-  const fry = planFry({
-    potDiameterMm: eq.pot.diameterMm,
-    oilDepthMm: eq.pot.oilDepthMm,
+  // The fry plan with the staged line's figures.
+  const counted = { pieces: [0, 0], batches: [0, 0] };
+  for (let i = 0; i < B.count; i++) {
+    counted.pieces[B.kind[i]!]! += B.pieces[i]!;
+    counted.batches[B.kind[i]!]! += 1;
+  }
+  const fry: FryPlan = {
+    oilLitres: fryBuilt.oil.fillLitres,
+    oilGrams: fryBuilt.oil.fillGrams,
     oilStartC: eq.oil.startC,
     oilFloorC: eq.oil.floorC,
-    doughTempC,
-    puffFactor: eq.frying.puffFactor,
-    turnClearanceMm: eq.frying.turnClearanceMm,
-    oilSpecificHeatJPerGK: eq.oil.specificHeatJPerGK,
-    doughSpecificHeatJPerGK: eq.frying.doughSpecificHeatJPerGK,
-    oilDensityAt20C: eq.oil.densityAt20C,
-    smokePointC: eq.oil.smokePointC,
-    rings: { count: cuts.rings, grams: mass.ringGrams, diameterMm: eq.cutter.outerMm, secondsPerSide: eq.frying.ringSecondsPerSide },
-    holes: { count: cuts.holes, grams: mass.holeGrams, diameterMm: eq.cutter.innerMm, secondsPerSide: eq.frying.holeSecondsPerSide },
-    recoveryMinutes: eq.frying.recoveryMinutes,
-    fatAbsorbedGramsPerDozen: fatPerDozen,
-  });
+    rings: { ...fryer.ring, count: counted.pieces[0]!, batches: counted.batches[0]! },
+    holes: { ...fryer.hole, count: counted.pieces[1]!, batches: counted.batches[1]! },
+    batches: B.count,
+    minutes: hasPieces ? line.fryUntil - line.fryFrom : 0,
+    oilAbsorbedGrams: line.absorbedGrams,
+    heatCapacityJPerK: fryer.heatCapacityJPerK,
+    burnerNetWatts: fryer.netWatts,
+    heatUpMinutes: heatUpMinutes(fryer),
+    oil: { ...fryBuilt.oil, absorbedGrams: line.absorbedGrams, topUpGrams: line.topUpGrams, freshFillToBuyGrams: fryBuilt.oil.fillGrams + line.topUpGrams },
+    timetable,
+    warnings: [],
+  };
 
   const glaze = glazeAmounts(input.glazes, pieces.byGlaze);
 
-  // Schedule.
-  const starterPeakHours = dough.starter?.build.feedHoursBeforeMix ?? 4;
-  const schedule = buildSchedule({
-    firstPickupStartsAt: input.firstPickupStartsAt,
-    timeZone: input.timeZone,
-    durationsMinutes: { ...input.schedule.durationsMinutes, fry: fry.minutes },
-    roomTempC,
-    bulkReferenceTempC: input.schedule.bulkReferenceTempC,
-    cutoffMarginMinutes: input.schedule.cutoffMarginMinutes,
-    now: input.now,
-    lookFor: lookForTexts({
-      oilStartC: eq.oil.startC,
-      thicknessMm: eq.rolling.thicknessMm,
-      rouxCookC: dough.roux?.cookToC ?? 65,
-      fridgeMaxC: FRIDGE_MAX_C,
-      starterPeakHours,
-    }),
-  });
-  const minutesOf = (step: TimelineStep['step']) => schedule.timeline.find((s) => s.step === step)?.minutes ?? 0;
-  const starter: StarterSheet | null = dough.starter
-    ? {
-        ...dough.starter,
-        feedAt: schedule.timeline[0]?.startsAt ?? schedule.firstStepAt,
-        hoursBeforeMix: (minutesOf('build-starter') + minutesOf('cook-cool-roux')) / 60,
-      }
-    : null;
-
-  // Capacity (independent of tonight's orders).
-  const ringBatchMinutes = (2 * eq.frying.ringSecondsPerSide) / 60 + eq.frying.recoveryMinutes;
+  // Capacity (independent of tonight's orders), hole batches counted in the fry window.
+  const cycle = (kind: PieceKind) => ({ perBatch: fryer[kind].perBatch, minutes: runBatchCycle(fryer, kind) });
+  const ringCycle = cycle('ring');
+  const holeCycle = withCentres ? cycle('hole') : null;
   const capacity = capacityFromEquipment({
     fryWindowMinutes: eq.frying.windowMinutes,
-    piecesPerBatch: fry.rings.perBatch,
-    minutesPerBatch: ringBatchMinutes,
+    piecesPerBatch: ringCycle.perBatch,
+    minutesPerBatch: ringCycle.minutes,
+    holeBatches: holeCycle ? { piecesPerBatch: holeCycle.perBatch, minutesPerBatch: holeCycle.minutes, holesPerRing: 1 } : undefined,
     proofingTrays: eq.proofing.trays,
-    piecesPerTray: eq.proofing.ringsPerTray,
+    piecesPerTray: ringsPerTray,
     mixerCapacityGrams: eq.mixer.capacityGrams,
     mixes: eq.mixer.mixes,
-    doughGramsPerPiece: (mass.ringGrams + mass.holeGrams) / need.bestYield,
+    doughGramsPerPiece: (mass.ringGrams + mass.holeGrams) / (1 - (1 - cutShare.ring) ** (eq.rolling.rerolls + 1)),
     fridgeDoughGrams: eq.fridge.doughGrams,
   });
 
-  // Cost.
-  const cutGrams = cuts.rings * mass.ringGrams + cuts.holes * mass.holeGrams;
+  // Cost per piece from the formula and the equipment only, never from tonight's count.
+  const perKilo = scaleFormula(input.formula, 1000);
+  const fullDayFriedGrams = capacity.pieces * (mass.ringGrams + mass.holeGrams);
   const cost = costBake({
-    ingredients: dough.ingredients,
-    doughGrams: dough.doughGrams,
+    ingredients: perKilo.ingredients,
+    doughGrams: 1000,
+    mixedDoughGrams: baseDoughGrams,
     ringGrams: mass.ringGrams,
     holeGrams: mass.holeGrams,
-    cutYield: need.doughGrams > 0 ? cutGrams / need.doughGrams : need.bestYield,
-    fatAbsorbedGramsPerRing: fatPerDozen / 12,
-    oilFillGrams: fry.oilGrams,
-    friedGrams: cutGrams,
+    cutYield: 1 - (1 - cutShare.ring) ** (eq.rolling.rerolls + 1),
+    fatAbsorbedGramsPerRing: fryer.ring.fatGramsPerPiece,
+    oilFillGrams: fryBuilt.oil.fillGrams,
+    friedGrams: fullDayFriedGrams > 0 ? fullDayFriedGrams : mass.ringGrams,
     glazes: input.glazes,
     prices: input.prices,
     boxes: input.boxes ?? [],
   });
 
-  // Cautions and warnings.
+  // Cautions and the remaining warnings.
   const glazesUsed = new Set(glaze.map((g) => g.glazeId));
+  const doughsUsed = lotList.filter((l) => l.dough && l.rings + l.holes > 0).map((l) => variations.get(l.dough!)?.allergens);
   const allergens = distinctAllergens([
     rings.toMake + holes.toMake > 0 ? input.allergens.dough : [],
+    ...doughsUsed,
     ...items.filter((i) => i.quantity > 0).map((i) => input.allergens.byMenuItem?.[i.menuItemId]),
     ...input.glazes.filter((g) => glazesUsed.has(g.id)).map((g) => g.allergens),
   ]);
   const cautions = [...hotOilCautions(eq.oil.startC, eq.oil.floorC), allergenCaution(allergens), HOME_FOOD_RULES_CAUTION];
-
-  const warnings = [...dough.warnings, ...fry.warnings, ...schedule.warnings];
-  if (starter) {
-    const { from, to } = starter.build.peakWindowHours;
-    if (starter.hoursBeforeMix < from || starter.hoursBeforeMix > to) {
-      warnings.push(`The starter is fed ${starter.hoursBeforeMix.toFixed(1)} h before the mix; it peaks about ${from}–${to} h after a feed. Adjust the starter or roux step.`);
-    }
+  if (fry.oil.topUpGrams > 0) {
+    cautions.push('Topping up: pour fresh oil slowly down the side of the pot between batches, never while pieces are in, and wait for the thermometer before the next batch.');
   }
+
   if (rings.toMake > capacity.pieces) {
-    warnings.push(`Tonight's ${rings.toMake} rings are more than the equipment's capacity of ${capacity.pieces} (limited by ${capacity.limitedBy}).`);
+    warn('over_capacity', `Tonight's ${rings.toMake} rings are more than the equipment's capacity of ${capacity.pieces} (limited by ${capacity.limitedBy}).`);
   }
   if (fry.minutes > eq.frying.windowMinutes) {
-    warnings.push(`Frying takes about ${Math.ceil(fry.minutes)} min, longer than the ${eq.frying.windowMinutes} min fry window.`);
+    warn('fry_longer_than_window', `Frying takes about ${Math.ceil(fry.minutes)} min, longer than the ${eq.frying.windowMinutes} min fry window.`);
   }
-  if (firstRoll && firstRoll.rings > ringsThatFit && ringsThatFit > 0) {
-    warnings.push(`Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits about ${ringsThatFit} rings, not the ${firstRoll.rings} planned: cut closer together or expect more re-rolled dough.`);
+  const totalDough = mixPlans.reduce((s, m) => s + m.doughGrams, 0);
+  if (totalDough > eq.fridge.doughGrams) {
+    warn('fridge_too_small', `Tonight's ${(totalDough / 1000).toFixed(1)} kg of dough is more than the ${(eq.fridge.doughGrams / 1000).toFixed(1)} kg the fridge holds for the cold retard.`);
   }
-  if (cost.missingPrices.length > 0) warnings.push(`No price for: ${cost.missingPrices.join(', ')} (counted as free).`);
+  if (cost.missingPrices.length > 0) warn('missing_prices', `No price for: ${cost.missingPrices.join(', ')} (counted as free).`);
+
+  const firstMix = mixes[0];
+  const starter: StarterSheet | null = scaled.starter
+    ? { ...scaled.starter, build: { ...scaled.starter.build, feedHoursBeforeMix: starterPeakMinutes / 60 }, feedAt: firstMix?.feedStarterAt ?? fmt(firstStepMs), hoursBeforeMix: starterPeakMinutes / 60 }
+    : null;
+  const variationPlans: VariationPlan[] = lotCuts.map((c) => {
+    const v = c.lot.dough ? variations.get(c.lot.dough) : undefined;
+    const addIns = (v && !v.formula ? v.addIns ?? [] : []);
+    const ratio = addIns.reduce((s, a) => s + a.gramsPerKg, 0) / 1000;
+    const base = c.need.doughGrams / (1 + ratio);
+    return {
+      id: c.lot.dough,
+      name: v?.name ?? 'Plain dough',
+      rings: c.lot.rings,
+      holes: c.lot.holes,
+      doughGrams: c.need.doughGrams,
+      addIns: addIns.map((a) => ({ name: a.name, grams: (a.gramsPerKg * base) / 1000 })),
+      addAt: addIns.length > 0 ? ADD_IN_STEP_WORDS[v?.addAt ?? 'after-mix'] : null,
+      ownFormula: Boolean(v?.formula),
+    };
+  }).filter((v) => v.id === null || v.rings + v.holes > 0);
 
   return {
     pieces,
     dough,
-    roux: dough.roux,
+    roux: scaled.roux,
     starter,
+    mixes,
+    variations: variationPlans,
     cuts,
     fry,
+    line: {
+      piecesPerTray: { ring: ringsPerTray, hole: holesPerTray },
+      trays: line.trays.map((t) => ({ tray: t.tray, kind: t.kind, dough: t.dough, pieces: t.pieces, sheet: t.sheet, cutAt: at(t.cutAt), proofFrom: at(t.proofFrom), fryAt: at(t.fryAt) })),
+      sheets: line.sheets.map((s) => ({ sheet: s.sheet, dough: s.dough, mix: s.mix, roll: s.roll, doughGrams: s.doughGrams, rings: s.rings, holes: s.holes, from: at(s.from), until: at(s.until) })),
+      traysInUse: line.traysInUse,
+      proofMinutes,
+      glazeFrom: at(line.glazeFrom),
+      glazeUntil: at(line.glazeUntil),
+      packFrom: at(line.packFrom),
+      packUntil: at(lineEndRel),
+    },
     glaze,
-    timeline: schedule.timeline,
-    firstStepAt: schedule.firstStepAt,
-    preorderCutoffAt: schedule.preorderCutoffAt,
-    bulkFermentationMinutes: schedule.bulkFermentationMinutes,
+    timeline: sortedTimeline,
+    firstStepAt: fmt(firstStepMs),
+    preorderCutoffAt: fmt(cutoffMs),
+    bulkFermentationMinutes: bulkMinutes,
+    finalProofMinutes: proofMinutes,
+    starterPeakHours: scaled.starter ? starterPeakMinutes / 60 : null,
+    shopping: {
+      eggClass,
+      eggs: mixPlans.reduce((s, m) => s + (m.eggs?.count ?? 0), 0),
+      oilFreshGrams: fry.oil.freshFillToBuyGrams,
+      oilTopUpGrams: fry.oil.topUpGrams,
+    },
     capacity,
     cost,
     cautions,
     warnings,
   };
+}
+
+/** Minutes from one full batch going in to the next: both sides, then the handling time or the oil's climb back. */
+function runBatchCycle(fryer: Fryer, kind: PieceKind): number {
+  const k = fryer[kind];
+  const load = k.perBatch * k.pieceHeatJ;
+  const fryS = 2 * k.secondsPerSide;
+  const endC = Math.min(fryer.startC, fryer.startC - (load - fryer.netWatts * fryS) / fryer.heatCapacityJPerK);
+  const climb = fryer.netWatts > 0 ? (fryer.heatCapacityJPerK * (fryer.startC - endC)) / fryer.netWatts / 60 : 0;
+  return fryS / 60 + Math.max(fryer.handlingMinutes, climb);
 }

@@ -1,11 +1,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_SCHEDULE } from './defaults.js';
 import { ProductionInputError } from './errors.js';
 import { buildSchedule, fermentationMinutes, SCHEDULE_STEPS, type ScheduleInput, type StepDurations } from './schedule.js';
 import { fToC } from './units.js';
 
-const durations: StepDurations = { ...DEFAULT_SCHEDULE.durationsMinutes, fry: 90 };
+// A sequential schedule of our own (buildSchedule runs steps one after another).
+const durations: StepDurations = {
+  'build-starter': 210, 'cook-cool-roux': 45, mix: 20, 'bulk-fermentation': 240, 'shape-and-chill': 15, 'cold-retard': 600,
+  'roll-and-cut': 30, 'final-proof': 150, 'heat-oil': 25, fry: 90, cool: 10, glaze: 20, pack: 20,
+};
 const totalMinutes = Object.values(durations).reduce((s, m) => s + m, 0); // 1475 min = 24 h 35 min
 
 const input = (over: Partial<ScheduleInput>): ScheduleInput => ({

@@ -5,8 +5,9 @@
  * scaled: fermentation roughly doubles in speed for each +17 °F (+9.44 °C).
  */
 import { ProductionInputError, requireFinite, requireNonNegative } from './errors.js';
+import { fermentationMinutes } from './temperature.js';
 import { formatInstant, parseInstant, requireTimeZone } from './time.js';
-import { fDeltaToC, fToC, tempInBothScales } from './units.js';
+import { fToC, tempInBothScales } from './units.js';
 
 export const SCHEDULE_STEPS = [
   'build-starter', 'cook-cool-roux', 'mix', 'bulk-fermentation', 'shape-and-chill', 'cold-retard',
@@ -33,16 +34,7 @@ export const STEP_TITLES: Record<ScheduleStep, string> = {
 /** Minutes per step; bulk fermentation at the reference temperature. */
 export type StepDurations = Record<ScheduleStep, number>;
 
-/** Rise in temperature that doubles the fermentation rate: 17 °F. */
-export const DOUBLING_RISE_C = fDeltaToC(17);
-
-/** Bulk time at `tempC`, from the time at `referenceTempC`. */
-export function fermentationMinutes(referenceMinutes: number, referenceTempC: number, tempC: number): number {
-  requireNonNegative('referenceMinutes', referenceMinutes);
-  requireFinite('referenceTempC', referenceTempC);
-  requireFinite('tempC', tempC);
-  return referenceMinutes * 2 ** ((referenceTempC - tempC) / DOUBLING_RISE_C);
-}
+export { DOUBLING_RISE_C, fermentationMinutes } from './temperature.js';
 
 /** A fridge holds food at or below 40 °F. */
 export const FRIDGE_MAX_C = fToC(40);

@@ -27,3 +27,113 @@ export function formatInstant(millis: number, timeZone: string): string {
   if (iso === null) throw new ProductionInputError('instant', `cannot be shown in ${timeZone}`);
   return iso;
 }
+
+const HOUR_MS = 3_600_000;
+
+function offsetText(minutes: number): string {
+  const sign = minutes < 0 ? '-' : '+';
+  const abs = Math.abs(minutes);
+  return `${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+}
+
+const DAY_MS = 24 * HOUR_MS;
+const TWO_DIGITS = Array.from({ length: 60 }, (_, i) => (i < 10 ? `0${i}` : String(i)));
+
+interface ZoneCache {
+  zone: IANAZone;
+  /** Offset for a whole UTC day, or null when it changes that day. */
+  days: Map<number, number | null>;
+  /** Offset for an hour of a changing day, or null when it changes within that hour. */
+  hours: Map<number, number | null>;
+  /** "YYYY-MM-DDTHH:" by local hour. */
+  prefixes: Map<number, string>;
+  offsetTexts: Map<number, string>;
+  /** Whole-minute instants already printed. */
+  minutes: Map<number, string>;
+}
+
+const zoneCaches = new Map<string, ZoneCache>();
+
+function zoneCache(timeZone: string): ZoneCache {
+  let cache = zoneCaches.get(timeZone);
+  if (!cache || cache.prefixes.size > 200_000 || cache.minutes.size > 500_000) {
+    cache = { zone: IANAZone.create(timeZone), days: new Map(), hours: new Map(), prefixes: new Map(), offsetTexts: new Map(), minutes: new Map() };
+    zoneCaches.set(timeZone, cache);
+  }
+  return cache;
+}
+
+/** The zone's offset over the span of length `span` that holds `millis`, or null when it changes in that span (cached). */
+function steadyOffset(c: ZoneCache, cache: Map<number, number | null>, span: number, millis: number): number | null {
+  const index = Math.floor(millis / span);
+  let o = cache.get(index);
+  if (o === undefined) {
+    const a = c.zone.offset(index * span);
+    o = a === c.zone.offset((index + 1) * span - 1) ? a : null;
+    cache.set(index, o);
+  }
+  return o;
+}
+
+/** The zone's offset at `millis` in minutes, or null inside the hour when it changes. */
+function cachedOffset(c: ZoneCache, millis: number): number | null {
+  return steadyOffset(c, c.days, DAY_MS, millis) ?? steadyOffset(c, c.hours, HOUR_MS, millis);
+}
+
+/**
+ * A formatter for many instants in one zone (the staged line prints
+ * thousands): the zone's offset is looked up once per day, or once per hour
+ * on a day when it changes (a zone changes its offset at most once in a day),
+ * and kept between calls; the hour when it changes is formatted exactly.
+ * Whole seconds, printed as formatInstant prints them; whole minutes are
+ * remembered, since a bake day's sheet repeats them.
+ */
+export function instantFormatter(timeZone: string): (millis: number) => string {
+  const c = zoneCache(requireTimeZone('timeZone', timeZone));
+  return (millis: number) => {
+    const minute = millis / 60_000; // a small integer for whole minutes: a fast map key
+    const wholeMinute = Number.isInteger(minute);
+    if (wholeMinute) {
+      const seen = c.minutes.get(minute);
+      if (seen !== undefined) return seen;
+    }
+    const offset = cachedOffset(c, millis);
+    if (offset === null || millis % 1000 !== 0) return formatInstant(millis, timeZone);
+    const local = millis + offset * 60_000;
+    const localHour = Math.floor(local / HOUR_MS);
+    let prefix = c.prefixes.get(localHour);
+    if (prefix === undefined) {
+      prefix = new Date(localHour * HOUR_MS).toISOString().slice(0, 14);
+      c.prefixes.set(localHour, prefix);
+    }
+    let suffix = c.offsetTexts.get(offset);
+    if (suffix === undefined) {
+      suffix = offsetText(offset);
+      c.offsetTexts.set(offset, suffix);
+    }
+    const inHour = local - localHour * HOUR_MS;
+    const text = prefix + TWO_DIGITS[Math.floor(inHour / 60_000)]! + ':' + TWO_DIGITS[Math.floor((inHour % 60_000) / 1000)]! + suffix;
+    if (wholeMinute) c.minutes.set(minute, text);
+    return text;
+  };
+}
+
+export type LocalTimeReading = 'exact' | 'offset-given' | 'ambiguous' | 'nonexistent';
+
+/**
+ * How a wall-clock time without an offset reads in a zone: once, twice (the
+ * hour repeated when clocks go back: we take the first, earlier instant, so
+ * the bake is ready in time either way) or never (the hour skipped when
+ * clocks go forward: luxon moves it forward by the gap).
+ */
+export function readLocalTime(iso: string, timeZone: string): { reading: LocalTimeReading; millis: number; alternativeMillis?: number } {
+  const millis = parseInstant('localTime', iso, timeZone);
+  if (/([zZ]|[+-]\d{2}(:?\d{2})?)$/.test(iso.trim())) return { reading: 'offset-given', millis };
+  const zone = IANAZone.create(timeZone);
+  const wall = DateTime.fromISO(iso, { zone: 'UTC' }).toMillis(); // the wall-clock fields as if in UTC
+  const offsets = new Set([zone.offset(wall - 24 * HOUR_MS), zone.offset(wall), zone.offset(wall + 24 * HOUR_MS)]);
+  const fits = [...offsets].map((o) => wall - o * 60_000).filter((m) => zone.offset(m) === (wall - m) / 60_000).sort((a, b) => a - b);
+  if (fits.length === 0) return { reading: 'nonexistent', millis };
+  if (fits.length > 1) return { reading: 'ambiguous', millis: fits[0]!, alternativeMillis: fits[fits.length - 1]! };
+  return { reading: 'exact', millis };
+}

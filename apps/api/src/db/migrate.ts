@@ -10,6 +10,7 @@ const migrations = {
   '0010-bake-day-counter': () => import('./migrations/0010-bake-day-counter.js'),
   '0021-owner-ops': () => import('./migrations/0021-owner-ops.js'),
   '0030-hardening': () => import('./migrations/0030-hardening.js'),
+  '0040-production-line': () => import('./migrations/0040-production-line.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

@@ -9,6 +9,8 @@ export class ProductionSettings extends Model<InferAttributes<ProductionSettings
   declare glazes: ProductionSettingsInput['glazes'];
   declare prices: ProductionSettingsInput['prices'];
   declare roomTempC: number;
+  /** Null until saved: the defaults apply. */
+  declare dough: CreationOptional<ProductionSettingsInput['dough'] | null>;
   declare updatedBy: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -30,6 +32,7 @@ export class ProductionSettings extends Model<InferAttributes<ProductionSettings
             return Number(this.getDataValue('roomTempC'));
           },
         },
+        dough: { type: DataTypes.JSONB, allowNull: true },
         updatedBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

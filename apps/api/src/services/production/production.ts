@@ -1,11 +1,13 @@
 import { DateTime } from 'luxon';
 import {
-  DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, ProductionInputError, planBake,
+  DEFAULT_DOUGH_ALLERGENS, DEFAULT_DOUGH_TEMPERATURE_SETTINGS, DEFAULT_DOUGH_VARIATIONS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, ProductionInputError, planBake,
   type BakePlan, type BoxOffer, type Formula, type OrderLine, type PlanBakeInput,
 } from '@fryline/production';
-import { boxLabel, boxPieces, type FormulaInput, type PlanMeta, type PlanResponse, type ProductionSettingsInput } from '@fryline/schemas';
+import {
+  boxLabel, boxPieces, type DoughSettingsInput, type FormulaInput, type PlanMeta, type PlanResponse, type ProductionSettingsInput,
+} from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
-import { orderCountsByStatus, orderedLines } from '../../db/queries/plan.js';
+import { boxesToPack, orderCountsByStatus, orderedLines } from '../../db/queries/plan.js';
 import { BakeDay, FormulaVersion, ProductionSettings } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit/audit.js';
@@ -15,19 +17,33 @@ import { setCapacityKeepingSold } from '../bake-day-edit/capacity.js';
 /** Fallback prices (cents per kg) when the owner has entered none: our own round figures. */
 const DEFAULT_PRICES: ProductionSettingsInput['prices'] = { centsPerKg: {}, fryingOilCentsPerKg: 300, oilBakesPerFill: 3 };
 
-export const defaultProductionSettings = (): ProductionSettingsInput => ({
+/** The demo's flavoured doughs, and the menu flavours that take them. */
+const DEFAULT_FLAVOURS: Record<string, string[]> = { 'lemon-zest': ['Lemon zest'], 'brown-butter': ['Brown butter'] };
+
+export const defaultDoughSettings = (): DoughSettingsInput => ({
+  temperature: structuredClone(DEFAULT_DOUGH_TEMPERATURE_SETTINGS) as DoughSettingsInput['temperature'],
+  variations: structuredClone(DEFAULT_DOUGH_VARIATIONS).map((v) => ({ ...v, flavours: DEFAULT_FLAVOURS[v.id] ?? [] })) as DoughSettingsInput['variations'],
+  eggClass: 'large',
+});
+
+export const defaultProductionSettings = (): Required<ProductionSettingsInput> => ({
   equipment: structuredClone(DEFAULT_PLAN_SETTINGS.equipment) as ProductionSettingsInput['equipment'],
   schedule: structuredClone(DEFAULT_PLAN_SETTINGS.schedule) as ProductionSettingsInput['schedule'],
   spare: structuredClone(DEFAULT_PLAN_SETTINGS.spare) as ProductionSettingsInput['spare'],
   glazes: structuredClone(DEFAULT_PLAN_SETTINGS.glazes) as ProductionSettingsInput['glazes'],
   prices: structuredClone(DEFAULT_PRICES),
   roomTempC: 22,
+  dough: defaultDoughSettings(),
 });
 
-export async function getProductionSettings(): Promise<ProductionSettingsInput & { updatedAt: string | null }> {
+export async function getProductionSettings(): Promise<Required<ProductionSettingsInput> & { updatedAt: string | null }> {
   const row = await ProductionSettings.findByPk(1);
   if (!row) return { ...defaultProductionSettings(), updatedAt: null };
-  return { equipment: row.equipment, schedule: row.schedule, spare: row.spare, glazes: row.glazes, prices: row.prices, roomTempC: row.roomTempC, updatedAt: row.updatedAt.toISOString() };
+  return {
+    equipment: row.equipment, schedule: row.schedule, spare: row.spare, glazes: row.glazes, prices: row.prices, roomTempC: row.roomTempC,
+    dough: row.dough ?? defaultDoughSettings(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
 }
 
 /** Checks settings with the maths itself (a plan with no orders), so nothing unusable is saved. */
@@ -77,16 +93,30 @@ export async function saveFormula(userId: string, formula: FormulaInput, note: s
   });
 }
 
+/** Which dough each menu flavour takes (case-insensitive), from the owner's flavoured doughs. */
+function doughByFlavour(dough: DoughSettingsInput): Map<string, string> {
+  return new Map(dough.variations.flatMap((v) => v.flavours.map((f) => [f.trim().toLowerCase(), v.id] as const)));
+}
+
+/** What a plan is worked out from; `dough` is null in settings saved before it existed. */
+type PlanningSettings = Omit<ProductionSettingsInput, 'dough'> & { dough?: DoughSettingsInput | null };
+
 function planInput(
-  settings: ProductionSettingsInput,
+  settings: PlanningSettings,
   formula: Formula,
   orders: OrderLine[],
   when: { firstPickupStartsAt: string; timeZone: string; now: string },
   boxes: BoxOffer[],
   byMenuItem: Record<string, string[]> = {},
+  boxCount?: number,
 ): PlanBakeInput {
+  const dough = settings.dough ?? defaultDoughSettings();
   return {
     orders,
+    doughTemperature: dough.temperature,
+    doughs: dough.variations.map(({ flavours: _flavours, ...v }) => v),
+    eggClass: dough.eggClass,
+    ...(boxCount !== undefined ? { boxesToPack: boxCount } : {}),
     spare: settings.spare,
     formula,
     equipment: settings.equipment,
@@ -119,18 +149,21 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   const pinned = day.formulaVersionId ? await FormulaVersion.findByPk(day.formulaVersionId) : null;
   const formula = pinned ? { id: pinned.id, version: pinned.version, note: pinned.note, formula: pinned.formula } : latest;
 
-  const [lines, counts, settings] = await Promise.all([
+  const [lines, counts, settings, boxCount] = await Promise.all([
     orderedLines(day.id),
     orderCountsByStatus(day.id),
     getProductionSettings(),
+    boxesToPack(day.id),
   ]);
   const known = new Set(settings.glazes.map((g) => g.id));
+  const doughs = doughByFlavour(settings.dough);
   const orders: OrderLine[] = lines.map((l) => ({
     menuItemId: l.menu_item_id,
     name: l.name,
     kind: l.kind,
     glaze: l.glaze_recipe_id && known.has(l.glaze_recipe_id) ? l.glaze_recipe_id : null,
     quantity: l.quantity,
+    dough: doughs.get(l.flavour.trim().toLowerCase()) ?? null,
   }));
   const boxes: BoxOffer[] = (day.boxes ?? []).map((b) => ({
     id: b.size,
@@ -143,7 +176,7 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   let plan: BakePlan;
   try {
     plan = planBake(
-      planInput(settings, formula.formula as Formula, orders, { firstPickupStartsAt: windows[0].startsAt.toISOString(), timeZone: day.timeZone, now: now.toISOString() }, boxes, byMenuItem),
+      planInput(settings, formula.formula as Formula, orders, { firstPickupStartsAt: windows[0].startsAt.toISOString(), timeZone: day.timeZone, now: now.toISOString() }, boxes, byMenuItem, boxCount),
     );
   } catch (err) {
     if (err instanceof ProductionInputError) throw new AppError('plan_failed', `The plan can't be worked out: ${err.field} ${err.message}`, 409);
@@ -179,7 +212,7 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
  * customers can read it. Pure: settings and formula are passed in.
  */
 export function cutoffFromSchedule(
-  settings: Pick<ProductionSettingsInput, 'spare' | 'equipment' | 'schedule' | 'roomTempC' | 'prices' | 'glazes'>,
+  settings: PlanningSettings,
   formula: Formula,
   firstPickupStartsAt: string,
   timeZone: string,
@@ -187,7 +220,7 @@ export function cutoffFromSchedule(
   now: Date,
 ): Date {
   const plan = planBake(
-    planInput(settings as ProductionSettingsInput, formula, rings > 0 ? [{ menuItemId: 'full-day', name: 'A full day', kind: 'ring', glaze: null, quantity: rings }] : [], {
+    planInput(settings, formula, rings > 0 ? [{ menuItemId: 'full-day', name: 'A full day', kind: 'ring', glaze: null, quantity: rings }] : [], {
       firstPickupStartsAt,
       timeZone,
       now: now.toISOString(),

@@ -1,6 +1,7 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { get, useController, type UseFormReturn } from 'react-hook-form';
 import type { ProductionSettingsInput } from '@fryline/schemas';
+import { cDeltaToF, fDeltaToC } from '@fryline/production';
 import { tempFromUnit, tempSymbol, tempToUnit, trimmed, type TempUnit } from '../../../lib/units';
 import type { SettingsField as FieldDef, SettingsPath } from '../model/settings-fields';
 import { FieldShell, fieldAria } from '@fryline/ui';
@@ -20,7 +21,20 @@ export function fieldError(form: SettingsForm, name: string): string | undefined
 export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; field: FieldDef; tempUnit: TempUnit }) {
   const id = fieldId(field.name);
   const error = fieldError(form, field.name);
-  const unit = field.temperature ? tempSymbol(tempUnit) : field.unit;
+  const unit = field.temperature || field.temperatureDifference ? tempSymbol(tempUnit) : field.unit;
+  if (field.choices) {
+    return (
+      <FieldShell id={id} label={field.label} optional={field.optional} help={field.help} error={error}>
+        <select id={id} className="field-input" {...fieldAria(id, field.help, error)} {...form.register(field.name)}>
+          {field.choices.map((choice) => (
+            <option key={choice.value} value={choice.value}>
+              {choice.label}
+            </option>
+          ))}
+        </select>
+      </FieldShell>
+    );
+  }
   const inputProps = {
     id,
     type: 'number',
@@ -31,8 +45,8 @@ export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; f
   };
   return (
     <FieldShell id={id} label={field.label} unit={unit} optional={field.optional} help={field.help} error={error}>
-      {field.temperature ? (
-        <TemperatureInput form={form} name={field.name} unit={tempUnit} inputProps={inputProps} />
+      {field.temperature || field.temperatureDifference ? (
+        <TemperatureInput form={form} name={field.name} unit={tempUnit} inputProps={inputProps} difference={field.temperatureDifference} optional={field.optional} />
       ) : (
         <input
           {...inputProps}
@@ -88,19 +102,27 @@ function TemperatureInput({
   name,
   unit,
   inputProps,
+  difference = false,
+  optional = false,
 }: {
   form: SettingsForm;
   name: FieldDef['name'];
   unit: TempUnit;
   inputProps: Record<string, unknown>;
+  /** A rise or fall (friction): no 32° offset between the scales. */
+  difference?: boolean;
+  /** Blank means "not set". */
+  optional?: boolean;
 }) {
   const { field } = useController({ control: form.control, name });
   const celsius = typeof field.value === 'number' ? field.value : Number.NaN;
-  const shown = (c: number) => (Number.isFinite(c) ? trimmed(tempToUnit(c, unit), 1) : '');
+  const toUnit = (c: number) => (difference ? (unit === 'C' ? c : cDeltaToF(c)) : tempToUnit(c, unit));
+  const fromUnit = (v: number) => (difference ? (unit === 'C' ? v : fDeltaToC(v)) : tempFromUnit(v, unit));
+  const shown = (c: number) => (Number.isFinite(c) ? trimmed(toUnit(c), 1) : '');
   const [text, setText] = useState(() => shown(celsius));
 
   useEffect(() => {
-    const typed = text === '' ? Number.NaN : tempFromUnit(Number(text), unit);
+    const typed = text === '' ? Number.NaN : fromUnit(Number(text));
     const same = Number.isNaN(typed) ? Number.isNaN(celsius) : Math.abs(typed - celsius) < 0.05;
     if (!same) setText(shown(celsius));
     // Only an outside change (a reset, another scale) rewrites what was typed.
@@ -115,7 +137,7 @@ function TemperatureInput({
       onBlur={field.onBlur}
       onChange={(event) => {
         setText(event.target.value);
-        field.onChange(event.target.value === '' ? Number.NaN : tempFromUnit(Number(event.target.value), unit));
+        field.onChange(event.target.value === '' ? (optional ? undefined : Number.NaN) : fromUnit(Number(event.target.value)));
       }}
     />
   );

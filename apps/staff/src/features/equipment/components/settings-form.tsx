@@ -9,6 +9,7 @@ import type { Capacity } from '@fryline/production';
 import { useSaveSettings } from '../api/use-save-settings';
 import { settingsMessages } from '../model/glazes';
 import { limitNames, placeServerErrors, settingsGroups, toSettingsValues } from '../model/settings-fields';
+import { DoughsSection } from './doughs-section';
 import { GlazesSection } from './glazes-section';
 import { PricesSection } from './prices-section';
 import { SettingsField } from './settings-field';
@@ -73,6 +74,7 @@ export function SettingsForm({
           </div>
         </fieldset>
       ))}
+      <DoughsSection form={form} />
       <GlazesSection form={form} savedIds={savedGlazeIds} />
       <PricesSection form={form} />
       {problems.length > 0 && (

@@ -26,8 +26,9 @@ describe('the equipment form', () => {
   it('has an input for every number it names, and names each only once', () => {
     const values = toSettingsValues(storedSettings());
     for (const name of settingsFieldNames) {
-      const optional = settingsGroups.flatMap((g) => g.fields).find((f) => f.name === name)?.optional;
-      if (!optional) expect(typeof get(values, name), name).toBe('number');
+      const field = settingsGroups.flatMap((g) => g.fields).find((f) => f.name === name);
+      if (field?.choices) expect(field.choices.map((c) => c.value), name).toContain(get(values, name));
+      else if (!field?.optional) expect(typeof get(values, name), name).toBe('number');
     }
     expect(new Set(settingsFieldNames).size).toBe(settingsFieldNames.length);
   });

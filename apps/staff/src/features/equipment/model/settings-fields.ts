@@ -4,8 +4,8 @@
  * the form's values; only their inputs show the chosen scale.
  */
 import type { Path } from 'react-hook-form';
-import { scheduleStepIds, type ProductionSettingsInput } from '@fryline/schemas';
-import type { CapacityLimit } from '@fryline/production';
+import { scheduleStepIds, type ProductionSettingsInput, type ProductionSettingsView } from '@fryline/schemas';
+import { DEFAULT_BENCH_LENGTH_MM, DEFAULT_BURNER, DEFAULT_PLAN_SETTINGS, DEFAULT_POT_BODY, DEFAULT_RATES, DEFAULT_TRAY, type CapacityLimit } from '@fryline/production';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 
 export type SettingsPath = Path<ProductionSettingsInput>;
@@ -21,6 +21,10 @@ export interface SettingsField {
   /** Whole numbers only. */
   whole?: boolean;
   temperature?: boolean;
+  /** A temperature rise (mixer friction): shown in the chosen scale without the 32° offset. */
+  temperatureDifference?: boolean;
+  /** A choice from a list instead of a number. */
+  choices?: ReadonlyArray<{ value: string; label: string }>;
 }
 
 export interface SettingsGroup {
@@ -31,7 +35,7 @@ export interface SettingsGroup {
 }
 
 const stepLabels: Record<(typeof scheduleStepIds)[number], string> = {
-  'build-starter': 'Build the starter',
+  'build-starter': 'Build the starter (not used: the starter\'s peak sets it)',
   'cook-cool-roux': 'Cook and cool the milk roux',
   mix: 'Mix to windowpane',
   'bulk-fermentation': 'Bulk fermentation (at the temperature below)',
@@ -51,9 +55,26 @@ export const settingsGroups: SettingsGroup[] = [
     title: 'Pot and oil',
     fields: [
       { name: 'equipment.pot.diameterMm', label: 'Pot diameter', unit: 'mm', help: 'Inside, at the oil line.' },
-      { name: 'equipment.pot.oilDepthMm', label: 'Oil depth', unit: 'mm' },
-      { name: 'equipment.oil.startC', label: 'Oil start temperature', temperature: true },
-      { name: 'equipment.oil.floorC', label: 'Lowest oil temperature', temperature: true, help: 'Wait for the oil to come back above this between batches.' },
+      { name: 'equipment.pot.oilDepthMm', label: 'Oil depth', unit: 'mm', help: 'Measured cold, when poured.' },
+      { name: 'equipment.pot.heightMm', label: 'Pot height', unit: 'mm', help: 'Inside; hot oil with a batch in must stay well below the rim.' },
+      { name: 'equipment.pot.massGrams', label: 'Empty pot', unit: 'g', help: 'A heavy pot holds heat and the oil recovers faster.' },
+      {
+        name: 'equipment.pot.material',
+        label: 'Pot metal',
+        choices: [
+          { value: 'cast-iron', label: 'Cast iron (enamelled or bare)' },
+          { value: 'carbon-steel', label: 'Carbon steel' },
+          { value: 'stainless-steel', label: 'Stainless steel' },
+          { value: 'aluminium', label: 'Aluminium' },
+          { value: 'copper', label: 'Copper' },
+        ],
+      },
+      { name: 'equipment.burner.watts', label: 'Burner power', unit: 'W', help: 'A home gas burner gives roughly 1,500–3,000 W.' },
+      { name: 'equipment.burner.efficiencyPercent', label: 'Share reaching the oil', unit: '%', optional: true, help: 'About 40 % for gas; more for induction.' },
+      { name: 'equipment.oil.startC', label: 'Oil start temperature', temperature: true, help: 'The reading to wait for before each batch.' },
+      { name: 'equipment.oil.floorC', label: 'Lowest oil temperature', temperature: true, help: 'Many bakers keep the oil between 360 °F and 375 °F.' },
+      { name: 'equipment.oil.minDepthMm', label: 'Top up below', unit: 'mm', optional: true, help: 'Cold depth at which to add oil. Blank: 40 mm.' },
+      { name: 'equipment.oil.minFreeboardMm', label: 'Room above the hot oil', unit: 'mm', optional: true, help: 'Blank: 75 mm.' },
     ],
   },
   {
@@ -64,6 +85,7 @@ export const settingsGroups: SettingsGroup[] = [
       { name: 'equipment.cutter.innerMm', label: 'Cutter hole', unit: 'mm', help: '0 for a cutter without a centre.' },
       { name: 'equipment.rolling.thicknessMm', label: 'Rolled thickness', unit: 'mm' },
       { name: 'equipment.rolling.widthMm', label: 'Bench width', unit: 'mm', help: 'How wide the dough is rolled.' },
+      { name: 'equipment.rolling.benchLengthMm', label: 'Bench length', unit: 'mm', help: 'The longest sheet you roll in one go.' },
       { name: 'equipment.rolling.gapMm', label: 'Gap between cuts', unit: 'mm' },
       { name: 'equipment.rolling.scrapPercent', label: 'Scraps per roll', unit: '%', help: 'About 30 % is usual.' },
       { name: 'equipment.rolling.rerolls', label: 'Re-rolls', whole: true, help: 'Once or twice: re-rolled dough gets tough.' },
@@ -78,7 +100,8 @@ export const settingsGroups: SettingsGroup[] = [
     fields: [
       { name: 'equipment.frying.ringSecondsPerSide', label: 'Ring, each side', unit: 's' },
       { name: 'equipment.frying.holeSecondsPerSide', label: 'Hole, each side', unit: 's' },
-      { name: 'equipment.frying.recoveryMinutes', label: 'Oil recovery between batches', unit: 'min' },
+      { name: 'equipment.frying.recoveryMinutes', label: 'Least time between batches', unit: 'min', help: 'Lift out, drain, load; longer when the oil needs it.' },
+      { name: 'equipment.frying.absorbedFatPercent', label: 'Fat taken up', unit: '% of fried weight', optional: true, help: '15–25 % is usual. Blank: 22 %.' },
       { name: 'equipment.frying.windowMinutes', label: 'Time for frying on a bake day', unit: 'min' },
     ],
   },
@@ -87,8 +110,11 @@ export const settingsGroups: SettingsGroup[] = [
     title: 'Proofing, mixer and fridge',
     fields: [
       { name: 'equipment.proofing.trays', label: 'Proofing trays', whole: true },
-      { name: 'equipment.proofing.ringsPerTray', label: 'Rings per tray', whole: true },
-      { name: 'equipment.mixer.capacityGrams', label: 'Dough per mix', unit: 'g' },
+      { name: 'equipment.proofing.ringsPerTray', label: 'Most rings on a tray', whole: true },
+      { name: 'equipment.proofing.trayWidthMm', label: 'Tray width', unit: 'mm' },
+      { name: 'equipment.proofing.trayLengthMm', label: 'Tray length', unit: 'mm' },
+      { name: 'equipment.proofing.trayGapMm', label: 'Room between pieces on a tray', unit: 'mm', optional: true },
+      { name: 'equipment.mixer.capacityGrams', label: 'Bowl capacity', unit: 'g', help: 'Dough one mix can hold; more dough is mixed in turns.' },
       { name: 'equipment.mixer.mixes', label: 'Mixes there is time for', whole: true },
       { name: 'equipment.fridge.doughGrams', label: 'Dough the fridge holds', unit: 'g', help: 'During the cold retard.' },
     ],
@@ -97,19 +123,53 @@ export const settingsGroups: SettingsGroup[] = [
     id: 'room',
     title: 'Room and spare',
     fields: [
-      { name: 'roomTempC', label: 'Room temperature', temperature: true, help: 'Sets the bulk fermentation time.' },
+      { name: 'roomTempC', label: 'Room temperature', temperature: true, help: 'The dough drifts towards it during bulk fermentation.' },
       { name: 'spare.percent', label: 'Spare on top of the orders', unit: '%' },
+    ],
+  },
+  {
+    id: 'dough-temperature',
+    title: 'Dough temperature',
+    intro: 'The sheet works out how warm the liquid must be so the dough leaves the mixer at the temperature you aim for; fermentation times follow that temperature.',
+    fields: [
+      { name: 'dough.temperature.targetC', label: 'Desired dough temperature', temperature: true, help: '78–82 °F is usual for yeast-raised doughnuts.' },
+      { name: 'dough.temperature.frictionC', label: 'Mixer friction', temperatureDifference: true, help: 'The warmth the mixer adds: about 20 °F for a stand mixer, 5 °F by hand.' },
+      { name: 'dough.temperature.flourC', label: 'Flour temperature', temperature: true, optional: true, help: 'Blank: the room’s.' },
+      { name: 'dough.temperature.starterC', label: 'Starter temperature', temperature: true, optional: true, help: 'Blank: the room’s.' },
+      { name: 'dough.temperature.rouxC', label: 'Roux temperature', temperature: true, optional: true, help: 'Blank: cooled to the room’s.' },
+      { name: 'dough.temperature.proofC', label: 'Proofing temperature', temperature: true, optional: true, help: 'A proofing box; blank: the room’s.' },
+      {
+        name: 'dough.eggClass',
+        label: 'Eggs you buy',
+        choices: [
+          { value: 'medium', label: 'Medium' },
+          { value: 'large', label: 'Large' },
+          { value: 'extra-large', label: 'Extra large' },
+          { value: 'jumbo', label: 'Jumbo' },
+        ],
+      },
+    ],
+  },
+  {
+    id: 'rates',
+    title: 'Your pace',
+    intro: 'How long the work takes you; rolling, glazing and packing grow with the quantity.',
+    fields: [
+      { name: 'schedule.rates.rollMinutesPerSheet', label: 'Roll and cut one sheet', unit: 'min' },
+      { name: 'schedule.rates.rerollRestMinutes', label: 'Rest the scraps before re-rolling', unit: 'min' },
+      { name: 'schedule.rates.glazeSecondsPerPiece', label: 'Glaze one piece', unit: 's' },
+      { name: 'schedule.rates.packSecondsPerBox', label: 'Pack one box', unit: 's' },
     ],
   },
   {
     id: 'schedule',
     title: 'Schedule',
-    intro: 'Minutes for each step; frying time is worked out from the fry batches.',
+    intro: 'Minutes for each step. Bulk fermentation and the final proof are at the temperature below and follow the dough’s; mixing and shaping are per mix; the cold retard is the least time in the fridge; rolling, glazing and packing are the set-up on top of your pace. Frying is worked out batch by batch.',
     fields: [
       ...scheduleStepIds.map(
         (step): SettingsField => ({ name: `schedule.durationsMinutes.${step}`, label: stepLabels[step], unit: 'min', whole: true }),
       ),
-      { name: 'schedule.bulkReferenceTempC', label: 'Room temperature for that bulk time', temperature: true },
+      { name: 'schedule.bulkReferenceTempC', label: 'Dough temperature for those times', temperature: true },
       {
         name: 'schedule.cutoffMarginMinutes',
         label: 'Pre-orders close before the first step',
@@ -123,9 +183,23 @@ export const settingsGroups: SettingsGroup[] = [
 export const settingsFieldNames: SettingsPath[] = settingsGroups.flatMap((group) => group.fields.map((field) => field.name));
 
 /** The stored settings as the form's starting values (the save date is not part of the form). */
-export function toSettingsValues(settings: ProductionSettingsInput & { updatedAt?: string | null }): ProductionSettingsInput {
+export function toSettingsValues(settings: (ProductionSettingsInput | ProductionSettingsView) & { updatedAt?: string | null }): ProductionSettingsInput {
   const { updatedAt: _ignored, ...stored } = settings;
-  const values = structuredClone(stored);
+  const values = structuredClone(stored) as ProductionSettingsInput;
+  // Settings saved before these fields existed get the values the plan would use.
+  const eq = values.equipment;
+  eq.pot = { ...DEFAULT_POT_BODY, ...eq.pot };
+  eq.burner = { ...DEFAULT_BURNER, ...eq.burner };
+  eq.oil = { ...eq.oil, minDepthMm: eq.oil.minDepthMm, minFreeboardMm: eq.oil.minFreeboardMm };
+  eq.rolling = { ...eq.rolling, benchLengthMm: eq.rolling.benchLengthMm ?? DEFAULT_BENCH_LENGTH_MM };
+  eq.proofing = { trayWidthMm: DEFAULT_TRAY.trayWidthMm, trayLengthMm: DEFAULT_TRAY.trayLengthMm, ...eq.proofing, trayGapMm: eq.proofing.trayGapMm };
+  eq.frying = { ...eq.frying, absorbedFatPercent: eq.frying.absorbedFatPercent };
+  values.schedule = { ...values.schedule, rates: { ...DEFAULT_RATES, ...values.schedule.rates } };
+  values.dough ??= { temperature: structuredClone(DEFAULT_PLAN_SETTINGS.doughTemperature!) as NonNullable<ProductionSettingsInput['dough']>['temperature'], variations: [], eggClass: 'large' };
+  {
+    const t = values.dough.temperature;
+    values.dough = { ...values.dough, temperature: { ...t, flourC: t.flourC, starterC: t.starterC, rouxC: t.rouxC, proofC: t.proofC } };
+  }
   // Blank optional fields are held as undefined; give them their keys so an untouched form compares equal.
   const { rolling } = values.equipment;
   values.equipment.rolling = { ...rolling, measuredRingGrams: rolling.measuredRingGrams, measuredHoleGrams: rolling.measuredHoleGrams };

@@ -10,6 +10,11 @@ export function storedSettings(): ProductionSettingsInput & { updatedAt: string 
     glazes: structuredClone(DEFAULT_PLAN_SETTINGS.glazes) as ProductionSettingsInput['glazes'],
     prices: { centsPerKg: {}, fryingOilCentsPerKg: 300 },
     roomTempC: 22,
+    dough: {
+      temperature: structuredClone(DEFAULT_PLAN_SETTINGS.doughTemperature!) as NonNullable<ProductionSettingsInput['dough']>['temperature'],
+      variations: [{ id: 'lemon-zest', name: 'Lemon zest dough', flavours: ['Lemon zest'], addIns: [{ name: 'Lemon zest', gramsPerKg: 10 }], addAt: 'after-mix' }],
+      eggClass: 'large',
+    },
     updatedAt: '2030-01-01T00:00:00Z',
   };
 }

@@ -1,5 +1,5 @@
 import type { BakePlan } from '@fryline/production';
-import { formatMass, formatPercent, type Units } from '../../../lib/units';
+import { formatMass, formatPercent, formatTemp, type Units } from '../../../lib/units';
 import { mixerLines } from '../model/sheet';
 import { cell, Facts, num, SheetSection, TableHead } from './sheet-section';
 
@@ -8,10 +8,17 @@ export function DoughSection({ plan, units }: { plan: BakePlan; units: Units }) 
   const { dough, pieces } = plan;
   const mass = (grams: number) => formatMass(grams, units.mass);
   const eggs = dough.eggs;
+  const t = dough.temperature;
   return (
     <SheetSection id="dough" title="Dough">
       <Facts
         facts={[
+          {
+            label: `${t.liquid} at`,
+            value: formatTemp(dough.liquidTemperatureC, units.temp),
+            note: `for dough at ${formatTemp(t.targetC, units.temp)}`,
+            hint: `counting ${t.factors.map((f) => `${f.name.toLowerCase()} ${formatTemp(f.tempC, units.temp)}`).join(', ')} and the mixer's warmth`,
+          },
           {
             label: 'Dough to mix',
             value: mass(dough.doughGrams),
@@ -43,7 +50,7 @@ export function DoughSection({ plan, units }: { plan: BakePlan; units: Units }) 
         <caption className="pb-1 text-left font-extrabold">Into the mixer</caption>
         <TableHead columns={['Ingredient', num('Weight')]} screenOnly />
         <tbody>
-          {mixerLines(dough).map((line) => (
+          {mixerLines(dough, plan.shopping.eggClass).map((line) => (
             <tr key={line.name}>
               <th scope="row" className={cell.row}>
                 {line.name}

@@ -36,11 +36,29 @@ export function FrySection({ fry, units }: { fry: FryPlan; units: Units }) {
       <Facts
         facts={[
           { label: 'Fry batches', value: fry.batches },
-          { label: 'Frying takes', value: `about ${formatMinutes(Math.ceil(fry.minutes))}`, hint: 'with the oil recovering between batches' },
-          { label: 'Oil', value: formatVolume(fry.oilLitres, units.mass), note: formatMass(fry.oilGrams, units.mass) },
-          { label: 'Oil taken up', value: formatMass(fry.oilAbsorbedGrams, units.mass), hint: 'by tonight’s pieces' },
+          { label: 'Frying takes', value: `about ${formatMinutes(Math.ceil(fry.minutes))}`, hint: 'waiting for trays and for the oil to come back' },
+          { label: 'Heat the oil', value: `about ${formatMinutes(Math.ceil(fry.heatUpMinutes))}`, hint: `${Math.round(fry.burnerNetWatts)} W reaching the oil` },
           { label: 'Start at', value: formatTemp(fry.oilStartC, units.temp) },
           { label: 'Never below', value: formatTemp(fry.oilFloorC, units.temp), hint: 'wait for the oil to come back' },
+          { label: 'Oil in the pot', value: formatVolume(fry.oil.fillLitres, units.mass), note: formatMass(fry.oil.fillGrams, units.mass) },
+          {
+            label: 'Oil taken up',
+            value: formatMass(fry.oilAbsorbedGrams, units.mass),
+            note: `${formatMass(fry.rings.fatGramsPerPiece, units.mass)} a ring`,
+            hint: 'about a fifth of each fried piece',
+          },
+          fry.oil.topUpGrams > 0 && {
+            label: 'Top-up oil',
+            value: formatMass(fry.oil.topUpGrams, units.mass),
+            hint: `whenever about ${formatMass(fry.oil.topUpEveryGrams, units.mass)} has gone; see the timetable`,
+          },
+          { label: 'Oil to buy', value: formatMass(fry.oil.freshFillToBuyGrams, units.mass), note: 'a fresh fill and the top-ups' },
+          fry.oil.freeboardMm !== null && {
+            label: 'Room above the hot oil',
+            value: `${Math.round(fry.oil.freeboardMm)} mm`,
+            note: `keep at least ${Math.round(fry.oil.minFreeboardMm)} mm`,
+            hint: 'hot oil stands higher, and a batch foams',
+          },
         ]}
       />
     </SheetSection>

@@ -10,7 +10,7 @@ import { useUnits } from '../../../lib/use-units';
 import { useCan } from '../../../app/session/staff-member';
 import type { PlanResponse } from '@fryline/schemas';
 import { productionQueries } from '../../../lib/queries/production-queries';
-import { cutoffWarning } from '../model/sheet';
+import { warningMessages } from '../model/sheet';
 import { BakeDayPicker } from './bake-day-picker';
 import { CostSection } from './cost-section';
 import { CountsSection } from './counts-section';
@@ -19,6 +19,8 @@ import { DoughSection } from './dough-section';
 import { FormulaNotice } from './formula-notice';
 import { FrySection } from './fry-section';
 import { GlazeSection } from './glaze-section';
+import { LineSection } from './line-section';
+import { MixesSection } from './mixes-section';
 import { RouxSection } from './roux-section';
 import { ScheduleSection } from './schedule-section';
 import { SheetCautions, SheetWarnings } from './sheet-notes';
@@ -83,8 +85,7 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
   const isOwner = useCan('owner');
   const { plan, meta } = data;
   const zone = meta.bakeDay.timeZone;
-  const cutoff = cutoffWarning(plan, meta);
-  const warnings = cutoff ? [...plan.warnings, cutoff] : plan.warnings;
+  const warnings = warningMessages(plan, meta);
 
   return (
     <div className="production-sheet flex flex-col gap-4">
@@ -110,10 +111,12 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
         <SheetWarnings warnings={warnings} />
         <CountsSection plan={plan} meta={meta} />
         <DoughSection plan={plan} units={units} />
+        <MixesSection mixes={plan.mixes} variations={plan.variations} timeZone={zone} units={units} />
         {plan.roux && <RouxSection roux={plan.roux} units={units} />}
         {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
         <CutsSection cuts={plan.cuts} units={units} />
         <FrySection fry={plan.fry} units={units} />
+        <LineSection plan={plan} timeZone={zone} units={units} />
         <GlazeSection glazes={plan.glaze} units={units} />
         {isOwner && <CostSection cost={plan.cost} />}
         <ScheduleSection timeline={plan.timeline} timeZone={zone} />

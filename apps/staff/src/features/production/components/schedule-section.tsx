@@ -1,10 +1,10 @@
-import type { TimelineStep } from '@fryline/production';
+import type { TimelineEntry } from '@fryline/production';
 import { formatMinutes } from '../../../lib/units';
 import { scheduleRows } from '../model/sheet';
 import { cell, SheetSection, TableHead } from './sheet-section';
 
 /** The clock-time schedule, worked back from the first pickup, in the bake day's time zone. */
-export function ScheduleSection({ timeline, timeZone }: { timeline: readonly TimelineStep[]; timeZone: string }) {
+export function ScheduleSection({ timeline, timeZone }: { timeline: readonly TimelineEntry[]; timeZone: string }) {
   return (
     <SheetSection id="schedule" title="Schedule" wide>
       <table className="w-full">
@@ -12,7 +12,7 @@ export function ScheduleSection({ timeline, timeZone }: { timeline: readonly Tim
         <TableHead columns={['When', 'Step, and what to look for']} screenOnly />
         <tbody>
           {scheduleRows(timeline, timeZone).map((row) => (
-            <tr key={row.step}>
+            <tr key={row.key}>
               <td className={`${cell.text} tabular-nums`}>
                 <span className="sheet-when block font-extrabold whitespace-nowrap">{row.starts}</span>
                 <span className="sheet-note block text-sm whitespace-nowrap text-muted">to {row.ends}</span>

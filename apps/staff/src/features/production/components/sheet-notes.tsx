@@ -1,6 +1,6 @@
 import { Caution } from '@fryline/ui';
 
-/** Planning notes worked out with the sheet: ranges, timing, capacity. */
+/** Planning notes worked out with the sheet, in words: ranges, timing, capacity, eggs, the bowl, the clock. */
 export function SheetWarnings({ warnings }: { warnings: readonly string[] }) {
   if (warnings.length === 0) return null;
   return (

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { scaleFormula, type BakePlan, type TimelineStep } from '@fryline/production';
 import type { PlanMeta } from '@fryline/schemas';
-import { countRows, cutoffWarning, dayInZone, formulaStatus, mixerLines, scheduleRows } from './sheet';
+import { countRows, cutoffWarning, dayInZone, formulaStatus, mixerLines, scheduleRows, timetableRows, warningMessages } from './sheet';
 
 const step = (startsAt: string, endsAt: string, minutes: number): TimelineStep => ({
   step: 'cold-retard',
@@ -127,5 +127,34 @@ describe('counts and the formula line', () => {
     expect(formulaStatus({ formula: { id: null, version: 0, note: '' }, latestFormulaVersion: 0 }).label).toBe(
       'the built-in starting formula',
     );
+  });
+});
+
+describe('the staged line on the sheet', () => {
+  it('lists each fry batch at its local clock time with the dough and the glazes that follow, and says the warnings in words', async () => {
+    const { DEFAULT_DOUGH_ALLERGENS, DEFAULT_PLAN_SETTINGS, planBake } = await import('@fryline/production');
+    const plan = planBake({
+      orders: [
+        { menuItemId: 'a', name: 'Lemon ring', kind: 'ring', glaze: 'vanilla-milk-glaze', quantity: 5, dough: 'lemon-zest' },
+        { menuItemId: 'b', name: 'Plain ring', kind: 'ring', glaze: null, quantity: 4 },
+      ],
+      ...DEFAULT_PLAN_SETTINGS,
+      roomTempC: 22,
+      firstPickupStartsAt: '2026-12-05T09:00',
+      timeZone: 'America/Denver',
+      now: '2026-12-01T12:00:00-07:00',
+      prices: { centsPerKg: {}, fryingOilCentsPerKg: 300 },
+      allergens: { dough: DEFAULT_DOUGH_ALLERGENS },
+    });
+    const rows = timetableRows(plan, 'America/Denver');
+    expect(rows).toHaveLength(plan.fry.timetable.length);
+    expect(rows[0]!.at).toMatch(/^\d{1,2}:\d{2}\s?(am|pm)$/i);
+    const lemon = rows.filter((r) => r.pieces.includes('lemon zest dough'));
+    expect(lemon.reduce((s, r) => s + Number(r.pieces.split(' ')[0]), 0)).toBeGreaterThanOrEqual(5);
+    expect(lemon.some((r) => r.glazes.includes('vanilla milk glaze'))).toBe(true);
+    const messages = warningMessages(plan, { bakeDay: { id: 'd', date: '2026-12-05', place: 'x', timeZone: 'America/Denver', cutoffAt: '2026-12-05T08:00:00Z', capacity: { rings: 1, holes: 1 } } });
+    expect(messages.every((m) => typeof m === 'string' && m.length > 0)).toBe(true);
+    expect(messages.at(-1)).toMatch(/Pre-orders close/);
+    expect(new Set(scheduleRows(plan.timeline, 'America/Denver').map((r) => r.key)).size).toBe(plan.timeline.length);
   });
 });

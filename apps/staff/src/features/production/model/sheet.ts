@@ -3,7 +3,7 @@
  * plain data for the sheet's components, kept apart so it can be checked
  * without a browser. No bake maths here; that lives in @fryline/production.
  */
-import type { BakePlan, ScaledFormula, TimelineStep } from '@fryline/production';
+import type { BakePlan, EggClass, FryTimetableEntry, PlanWarning, ScaledFormula, TimelineEntry } from '@fryline/production';
 import { formatClock, formatMoment } from '@fryline/ui/format';
 import type { PlanMeta } from '@fryline/schemas';
 
@@ -15,7 +15,9 @@ export function dayInZone(iso: string, timeZone: string): string {
 }
 
 export interface ScheduleRow {
-  step: TimelineStep['step'];
+  /** Unique per row: a step repeats for each mix. */
+  key: string;
+  step: TimelineEntry['step'];
   title: string;
   /** "Fri 7:55 am". */
   starts: string;
@@ -26,10 +28,11 @@ export interface ScheduleRow {
 }
 
 /** The timeline as clock times in the bake day's own time zone. */
-export function scheduleRows(timeline: readonly TimelineStep[], timeZone: string): ScheduleRow[] {
+export function scheduleRows(timeline: readonly TimelineEntry[], timeZone: string): ScheduleRow[] {
   return timeline.map((step) => ({
+    key: `${step.step}-${step.mix ?? 0}`,
     step: step.step,
-    title: step.title,
+    title: step.mix !== undefined ? `${step.title} — mix ${step.mix}` : step.title,
     starts: formatMoment(step.startsAt, timeZone),
     ends:
       dayInZone(step.startsAt, timeZone) === dayInZone(step.endsAt, timeZone)
@@ -87,7 +90,7 @@ export interface MixerLine {
  * What goes into the mixer. The milk roux's flour and milk go in together as
  * one cooked paste, so they show as one line.
  */
-export function mixerLines(dough: Pick<ScaledFormula, 'finalDough' | 'eggs' | 'roux'>): MixerLine[] {
+export function mixerLines(dough: Pick<ScaledFormula, 'finalDough' | 'eggs' | 'roux'>, eggClass: EggClass = 'large'): MixerLine[] {
   const lines: MixerLine[] = [];
   for (const row of dough.finalDough) {
     if (row.kind === 'roux-milk') continue;
@@ -97,7 +100,7 @@ export function mixerLines(dough: Pick<ScaledFormula, 'finalDough' | 'eggs' | 'r
     } else if (row.kind === 'starter') {
       lines.push({ name: row.name, grams: row.grams, hint: 'ripe, from the starter build below' });
     } else if (row.kind === 'egg' && dough.eggs) {
-      lines.push({ name: row.name, grams: row.grams, note: `${dough.eggs.count} large ${dough.eggs.count === 1 ? 'egg' : 'eggs'}` });
+      lines.push({ name: row.name, grams: row.grams, note: `${dough.eggs.count} ${eggClass} ${dough.eggs.count === 1 ? 'egg' : 'eggs'}` });
     } else {
       lines.push({ name: row.name, grams: row.grams });
     }
@@ -110,4 +113,47 @@ export function formulaStatus(meta: Pick<PlanMeta, 'formula' | 'latestFormulaVer
   const { version, note } = meta.formula;
   const label = version === 0 ? 'the built-in starting formula' : `formula version ${version}${note ? ` (“${note}”)` : ''}`;
   return { label, newer: meta.latestFormulaVersion > version ? meta.latestFormulaVersion : null };
+}
+
+/** The sheet's warnings in words: the plan's own, then the cut-off check. */
+export function warningMessages(plan: Pick<BakePlan, 'warnings' | 'preorderCutoffAt'>, meta: Pick<PlanMeta, 'bakeDay'>): string[] {
+  const cutoff = cutoffWarning(plan, meta);
+  const messages = plan.warnings.map((w: PlanWarning) => w.message);
+  return cutoff ? [...messages, cutoff] : messages;
+}
+
+export interface TimetableRow {
+  batch: number;
+  /** "6:42 am". */
+  at: string;
+  /** "3 rings", "23 holes, lemon zest dough". */
+  pieces: string;
+  waitForC: number;
+  /** "vanilla milk glaze 2, plain 1". */
+  glazes: string;
+  /** Oil to pour in before this batch, grams (0: none). */
+  topUpGrams: number;
+}
+
+/** The fry timetable in the bake day's clock, with names for the doughs and glazes. */
+export function timetableRows(
+  plan: Pick<BakePlan, 'fry' | 'glaze' | 'variations'>,
+  timeZone: string,
+  glazeNames: ReadonlyMap<string, string> = new Map(plan.glaze.map((g) => [g.glazeId, g.name])),
+): TimetableRow[] {
+  const doughNames = new Map(plan.variations.filter((v) => v.id !== null).map((v) => [v.id, v.name.toLowerCase()]));
+  const glazeWords = (entry: FryTimetableEntry) =>
+    entry.glazes.map((g) => `${g.glazeId === null ? 'plain' : (glazeNames.get(g.glazeId) ?? g.glazeId).toLowerCase()} ${g.pieces}`).join(', ');
+  return plan.fry.timetable.map((entry) => {
+    const kind = entry.kind === 'ring' ? (entry.pieces === 1 ? 'ring' : 'rings') : entry.pieces === 1 ? 'hole' : 'holes';
+    const dough = entry.dough !== null ? `, ${doughNames.get(entry.dough) ?? entry.dough}` : '';
+    return {
+      batch: entry.batch,
+      at: formatClock(entry.at, timeZone),
+      pieces: `${entry.pieces} ${kind}${dough}`,
+      waitForC: entry.waitForC,
+      glazes: glazeWords(entry),
+      topUpGrams: entry.topUpGramsBefore,
+    };
+  });
 }
