@@ -9,7 +9,7 @@ import { checkOrder, type CheckedOrder } from './order-rules.js';
 import { releaseOrder, takeCapacity, takeWindowSlot, giveBackWindowSlot } from '../../db/queries/capacity.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
-import { queueCancellation } from '../mail/order-mails.js';
+import { queueCancellation, queuePickupMoved } from '../mail/order-mails.js';
 import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
 import { expireCheckout, openCheckout, refundPayment } from '../../integrations/checkout.js';
 import { logger } from '../../lib/logger.js';
@@ -200,6 +200,7 @@ export async function moveOrder(user: Me, id: string, pickupWindowId: string, no
     await giveBackWindowSlot(from, transaction);
     await fresh.update({ pickupWindowId }, { transaction });
     await audit({ actorId: user.id, action: 'order.moved', subjectType: 'order', subjectId: id, details: { from, to: pickupWindowId } }, transaction);
+    await queuePickupMoved(id, transaction);
   });
   return getOrder(user, id, now);
 }
