@@ -56,7 +56,7 @@ describe('order e-mails (MJML HTML + a text part with the same content)', () => 
     const mail = await stack.mail.waitFor((m) => m.subject.startsWith('Your pickup code'), 5000);
     expect(mail.subject).toContain(SHOP);
 
-    const doc = new JSDOM(mail.html).window.document;
+    const doc = new JSDOM(mail.html ?? '').window.document;
     const text = (sel: string) => doc.querySelector(sel)?.textContent?.replace(/\s+/g, ' ').trim() ?? '';
     expect(text('[data-mail="shop-name"]')).toBe(SHOP);
     expect(text('[data-mail="code"]')).toBe(detail.pickupCode);

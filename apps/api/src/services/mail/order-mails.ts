@@ -83,6 +83,18 @@ function refundDeadline(l: Loaded): MailBlock {
 
 const orderButton = (l: Loaded): MailBlock => ({ type: 'button', label: 'See your order', href: l.url });
 
+/** Where and when, what is in it, what it cost, allergens and until when it can be cancelled. */
+const orderSummary = (l: Loaded): MailBlock[] => [
+  { type: 'heading', text: 'Pickup' },
+  pickupFacts(l),
+  { type: 'heading', text: 'Your order' },
+  contents(l),
+  bill(l),
+  allergens(l),
+  refundDeadline(l),
+  orderButton(l),
+];
+
 /** The order's pickup as a calendar invitation (RFC 5546), attached to the mail. */
 function calendarAttachment(l: Loaded, method: PickupEvent['method'], sequence: number): StoredAttachment {
   const address = /<([^>]+)>/.exec(context().config.MAIL_FROM)?.[1] ?? context().config.MAIL_FROM;
@@ -121,14 +133,7 @@ export async function queueConfirmation(orderId: string, transaction: Transactio
       { type: 'paragraph', text: 'Thank you — your order is paid and your doughnuts are on the list for the bake.' },
       { type: 'code', code, qrCid: 'pickup-qr' },
       { type: 'paragraph', text: 'Show this code, or its QR code, when you collect.' },
-      { type: 'heading', text: 'Pickup' },
-      pickupFacts(l),
-      { type: 'heading', text: 'Your order' },
-      contents(l),
-      bill(l),
-      allergens(l),
-      refundDeadline(l),
-      orderButton(l),
+      ...orderSummary(l),
     ],
   });
   await enqueueMail(
@@ -158,14 +163,7 @@ export async function queuePickupMoved(orderId: string, transaction: Transaction
       greeting(l),
       { type: 'paragraph', text: 'Your pickup time has changed. The attached calendar entry replaces the one you saved before.' },
       ...(l.order.pickupCode ? [{ type: 'code', code: l.order.pickupCode } as MailBlock] : []),
-      { type: 'heading', text: 'Pickup' },
-      pickupFacts(l),
-      { type: 'heading', text: 'Your order' },
-      contents(l),
-      bill(l),
-      allergens(l),
-      refundDeadline(l),
-      orderButton(l),
+      ...orderSummary(l),
     ],
   });
   await enqueueMail(
