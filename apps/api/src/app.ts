@@ -11,6 +11,7 @@ import { configurePassport } from './integrations/passport.js';
 import { csrfProtection } from './middleware/csrf.js';
 import { errorHandler, notFoundHandler } from './middleware/errors.js';
 import { healthRouter } from './routes/health.js';
+import { shopRouter } from './routes/shop.js';
 import { authRouter } from './routes/auth.js';
 import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
@@ -110,6 +111,7 @@ export function createApp(config: Config) {
   app.use(csrfProtection(SESSION_COOKIE, config.SESSION_SECRET));
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
+  app.use(shopRouter);
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);

@@ -7,4 +7,5 @@ export * from './orders.js';
 export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
+export * from './shop.js';
 export * from './api.js';

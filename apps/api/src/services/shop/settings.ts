@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import type { TaxSetting } from '@fryline/schemas';
+import type { ShopInfo, TaxSetting } from '@fryline/schemas';
 import { ShopSettings } from '../../db/models/index.js';
 
 export interface Settings {
@@ -18,4 +18,10 @@ export async function shopSettings(transaction?: Transaction): Promise<Settings>
     currency: row?.currency ?? 'usd',
     tax: { mode: row?.taxMode ?? 'included', rateBasisPoints: row?.taxRateBp ?? 0 },
   };
+}
+
+/** The shop's public face: its name and logo. */
+export async function shopInfo(): Promise<ShopInfo> {
+  const { shopName, logoUrl } = await shopSettings();
+  return { name: shopName, logoUrl };
 }
