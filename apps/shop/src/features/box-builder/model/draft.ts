@@ -119,7 +119,7 @@ export function draftProblems(day: BakeDayView, draft: Draft, limits: PieceLimit
   for (const box of draft.boxes) {
     const pieces = boxOf(day, box.size)?.pieces ?? 0;
     const filled = filledCount(box);
-    if (filled !== pieces) problems.push(`Fill your ${boxTitle(day, draft, box).toLowerCase()} (${filled} of ${pieces}).`);
+    if (filled !== pieces) problems.push(`Fill your ${boxTitle(day, draft, box).replace(/^an? /i, '').toLowerCase()} (${filled} of ${pieces}).`);
   }
   const used = piecesUsed(day, draft);
   if (used.rings > limits.rings) problems.push(`Only ${plural(limits.rings, 'ring')} can be ordered; take a smaller box.`);
