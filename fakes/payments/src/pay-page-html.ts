@@ -115,7 +115,7 @@ ${email}
 ${field('cardNumber', 'Card number', values.cardNumber, 'inputmode="numeric" autocomplete="cc-number" placeholder="1234 1234 1234 1234" required')}
 <div class="pair">
 <div>${field('expiry', 'Expiry (MM/YY)', values.expiry, 'autocomplete="cc-exp" placeholder="MM/YY" required')}</div>
-<div>${field('cvc', 'CVC (3 digits)', undefined, 'inputmode="numeric" autocomplete="cc-csc" placeholder="123" required')}</div>
+<div>${field('cvc', 'Security code (CVC, 3 digits)', undefined, 'inputmode="numeric" autocomplete="cc-csc" placeholder="123" required')}</div>
 </div>
 ${field('name', 'Name', values.name, 'autocomplete="cc-name"', true)}
 </fieldset>
