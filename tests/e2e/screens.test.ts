@@ -1,4 +1,4 @@
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -15,7 +15,8 @@ import { chooseAccount, openBrowser } from '../support/browser.js';
  */
 
 const { appUrl } = inject('stack');
-const axePath = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
+// evaluated through the browser's DevTools protocol, which the apps' Content-Security-Policy doesn't block
+const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 const shotsDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../test-results/screens');
 const widths = { phone: { width: 390, height: 844 }, desktop: { width: 1280, height: 900 } } as const;
 
@@ -39,7 +40,7 @@ interface Screen {
 export const screens: Screen[] = [
   { name: 'shop-home', who: 'customer', path: () => '/', ready: /upcoming bake days/i },
   { name: 'box-builder', who: 'customer', path: (f) => `/days/${f.openDayId}`, ready: /choose a pickup window/i },
-  { name: 'order-review', who: 'customer', path: (f) => `/days/${f.openDayId}`, ready: /choose a pickup window/i, then: fillAndReview },
+  { name: 'order-review', who: 'customer', path: (f) => `/days/${f.openDayId}`, ready: /choose a pickup window|what you pay/i, then: fillAndReview },
   { name: 'order-page', who: 'customer', path: (f) => `/orders/${f.paidOrderId}`, ready: /your pickup code/i },
   { name: 'my-orders', who: 'customer', path: () => '/orders', ready: /my orders|your orders/i },
   { name: 'waitlist', who: 'customer', path: (f) => `/days/${f.soldOutDayId}`, ready: /waitlist/i },
@@ -48,6 +49,8 @@ export const screens: Screen[] = [
 ];
 
 async function fillAndReview(page: Page) {
+  // the half-built box is kept while the customer moves around: a second visit opens on the review
+  if (await page.getByRole('heading', { name: /what you pay/i }).isVisible()) return;
   await page.getByRole('group', { name: /choose a pickup window/i }).getByRole('radio').first().check();
   await page.getByRole('button', { name: /a half dozen/i }).click();
   const select = page.getByLabel(/fill the other \d+ with/i);
@@ -63,7 +66,7 @@ interface AxeResult {
 
 /** axe-core injected into the page; serious and critical WCAG 2.1 A/AA violations, as readable lines. */
 async function axeProblems(page: Page): Promise<string[]> {
-  await page.addScriptTag({ path: axePath });
+  await page.evaluate(axeSource);
   const result = (await page.evaluate(() =>
     (window as unknown as { axe: { run(ctx: unknown, opts: unknown): Promise<unknown> } }).axe.run(document, {
       runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
@@ -78,10 +81,14 @@ async function axeProblems(page: Page): Promise<string[]> {
 async function tabTo(page: Page, target: ReturnType<Page['getByRole']>, maxTabs = 120) {
   for (let i = 0; i < maxTabs; i += 1) {
     if (await target.evaluate((el) => el === document.activeElement).catch(() => false)) {
-      const visible = await target.evaluate((el) => {
-        const style = getComputedStyle(el);
-        return (style.outlineStyle !== 'none' && parseFloat(style.outlineWidth) > 0) || style.boxShadow !== 'none';
-      });
+      // the ring may sit on the control or on the label or box that wraps it
+      const visible = await target.evaluate((el) =>
+        [el, el.closest('label'), el.parentElement].some((node) => {
+          if (!node) return false;
+          const style = getComputedStyle(node);
+          return (style.outlineStyle !== 'none' && parseFloat(style.outlineWidth) > 0) || style.boxShadow !== 'none';
+        }),
+      );
       expect(visible, 'the focused control shows a focus ring').toBe(true);
       return;
     }
@@ -101,7 +108,8 @@ async function signedIn(who: Who): Promise<Page> {
   if (known) return known;
   const { page } = await browser.fresh();
   await page.goto(who === 'customer' ? `${appUrl}/` : `${appUrl}/staff/`);
-  await page.getByRole('link', { name: /^sign in$/i }).or(page.getByRole('button', { name: /^sign in$/i })).first().click();
+  const signIn = who === 'customer' ? /^sign in$/i : /sign in/i;
+  await page.getByRole('link', { name: signIn }).or(page.getByRole('button', { name: signIn })).first().click();
   await chooseAccount(page, who === 'customer' ? 'screens.customer@example.test' : `${who}@fryline.test`);
   await page.waitForLoadState('networkidle');
   pages.set(who, page);
