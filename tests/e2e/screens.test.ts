@@ -168,6 +168,12 @@ describe('every screen: no serious or critical WCAG 2.1 AA violation (axe-core),
         await page.waitForLoadState('networkidle');
         await page.screenshot({ path: path.join(shotsDir, `${screen.name}-${width}.png`), fullPage: true });
         expect(await axeProblems(page), `${screen.name} at ${width} width`).toEqual([]);
+        // wherever a bill is shown, its lines add up to its total
+        for (const bill of await page.getByTestId('price-lines').all()) {
+          const cents = await bill.locator('[data-price-line]').evaluateAll((rows) => rows.map((r) => Number(r.getAttribute('data-cents'))));
+          const total = Number(await bill.locator('[data-price-total]').getAttribute('data-price-total'));
+          expect(cents.reduce((a, b) => a + b, 0), `${screen.name}: bill lines sum to the total`).toBe(total);
+        }
       }
     });
   }

@@ -18,8 +18,9 @@ export function PriceLines({ bill, refundedCents = 0, totalLabel = 'Total' }: Pr
         </div>
       ))}
       <div className="contents" data-price-total={bill.totalCents}>
-        <dt className="border-t border-line pt-1 text-lg font-extrabold">{totalLabel}</dt>
-        <dd className="border-t border-line pt-1 text-right text-lg font-extrabold tabular-nums">{formatCents(bill.totalCents)}</dd>
+        <div aria-hidden="true" className="col-span-2 mt-1 border-t border-line" />
+        <dt className="text-lg font-extrabold">{totalLabel}</dt>
+        <dd className="text-right text-lg font-extrabold tabular-nums">{formatCents(bill.totalCents)}</dd>
       </div>
       {bill.includedTaxCents !== null && (
         <div className="contents">
