@@ -10,7 +10,7 @@ interface PriceLinesProps {
 /** An order's bill, line by line (from orderBill, so the lines add up to the total). */
 export function PriceLines({ bill, refundedCents = 0, totalLabel = 'Total' }: PriceLinesProps) {
   return (
-    <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1" data-testid="price-lines">
+    <dl className="grid grid-cols-[1fr_auto] gap-y-1 [&>div>dd]:pl-4" data-testid="price-lines">
       {bill.lines.map((line, index) => (
         <div key={index} className="contents" data-price-line={line.kind} data-cents={line.cents}>
           <dt className={line.kind === 'box' ? 'font-semibold' : 'pl-4 text-muted'}>{line.label}</dt>
@@ -18,9 +18,8 @@ export function PriceLines({ bill, refundedCents = 0, totalLabel = 'Total' }: Pr
         </div>
       ))}
       <div className="contents" data-price-total={bill.totalCents}>
-        <div aria-hidden="true" className="col-span-2 mt-1 border-t border-line" />
-        <dt className="text-lg font-extrabold">{totalLabel}</dt>
-        <dd className="text-right text-lg font-extrabold tabular-nums">{formatCents(bill.totalCents)}</dd>
+        <dt className="mt-1 border-t border-line pt-1 text-lg font-extrabold">{totalLabel}</dt>
+        <dd className="mt-1 border-t border-line pt-1 text-right text-lg font-extrabold tabular-nums">{formatCents(bill.totalCents)}</dd>
       </div>
       {bill.includedTaxCents !== null && (
         <div className="contents">
