@@ -17,12 +17,12 @@ export function StaffHeader() {
   const allowed = sections.filter((section) => hasRole(member.role, section.minRole) && isBuilt(section.path));
   return (
     <header className="border-b border-line bg-paper">
-      <div className="mx-auto flex max-w-6xl items-center gap-3 px-4 pt-3">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-3 gap-y-2 px-4 pt-3">
         <BrandLink className="text-xl">
           Fryline <span className="font-semibold text-muted">staff</span>
         </BrandLink>
-        <div className="ml-auto flex items-center gap-3">
-          <span className="max-w-[8rem] truncate text-right text-sm leading-tight font-semibold sm:max-w-[14rem] sm:text-base">
+        <div className="ml-auto flex min-w-0 items-center gap-2 sm:gap-3">
+          <span className="max-w-[10rem] min-w-0 truncate text-right text-sm leading-tight font-semibold sm:max-w-[14rem] sm:text-base">
             {member.name}
           </span>
           <span className="badge badge-plum" title={`Signed in as ${member.name}`}>

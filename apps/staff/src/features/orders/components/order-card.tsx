@@ -56,6 +56,10 @@ export function OrderCard({ order, onRefund }: OrderCardProps) {
               <dd className="text-right tabular-nums">{formatCents(line.cents)}</dd>
             </div>
           ))}
+          <div className="contents" data-price-total={order.totalCents}>
+            <dt className="border-t border-line font-extrabold">Total</dt>
+            <dd className="border-t border-line text-right font-extrabold tabular-nums">{formatCents(order.totalCents)}</dd>
+          </div>
         </dl>
       </details>
       {onRefund && left > 0 && (
