@@ -9,3 +9,4 @@ export * from './production.js';
 export * from './setup.js';
 export * from './shop.js';
 export * from './api.js';
+export * from './owner-ops.js';

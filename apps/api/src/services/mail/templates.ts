@@ -130,7 +130,16 @@ function blockText(block: MailBlock): string {
 
 /** The mail's text part: the same blocks, in the same order, as plain text. */
 export function mailText(content: MailContent): string {
-  return `${content.shop.name}\n\n${content.blocks.map(blockText).join('\n\n')}\n\n— ${content.shop.name}\nSent with Fryline, the shop's ordering software.\n`;
+  const name = content.shop.name;
+  return `${name ? `${name}\n\n` : ''}${content.blocks.map(blockText).join('\n\n')}\n\n${name ? `— ${name}\n` : ''}Sent with Fryline, the shop's ordering software.\n`;
+}
+
+/**
+ * A mail of plain paragraphs that sign themselves off, in the same MJML frame
+ * (no shop header: the caller's words carry the shop's name).
+ */
+export function paragraphMail(subject: string, paragraphs: string[]): Promise<RenderedMail> {
+  return renderMail({ subject, shop: { name: '' }, preview: paragraphs[1] ?? paragraphs[0] ?? subject, blocks: paragraphs.map((text) => ({ type: 'paragraph', text })) });
 }
 
 export async function renderMail(content: MailContent): Promise<RenderedMail> {
@@ -151,12 +160,12 @@ export async function renderMail(content: MailContent): Promise<RenderedMail> {
     </mj-attributes>
   </mj-head>
   <mj-body background-color="${paper}" width="600px">
-    <mj-section padding="24px 0 8px">
+    ${shop.name ? `<mj-section padding="24px 0 8px">
       <mj-column>
         ${header}
         <mj-text font-size="24px" font-weight="800" color="${plum}" padding="4px 24px"><p data-mail="shop-name" style="margin:0">${escape(shop.name)}</p></mj-text>
       </mj-column>
-    </mj-section>
+    </mj-section>` : '<mj-section padding="12px 0 0"><mj-column><mj-spacer height="4px" /></mj-column></mj-section>'}
     <mj-section background-color="#ffffff" border-radius="16px" padding="12px 0 20px">
       <mj-column>
         ${content.blocks.map(blockMjml).join('\n        ')}
@@ -164,7 +173,7 @@ export async function renderMail(content: MailContent): Promise<RenderedMail> {
     </mj-section>
     <mj-section padding="12px 0 24px">
       <mj-column>
-        <mj-text font-size="14px" color="${muted}">— ${escape(shop.name)}</mj-text>
+        ${shop.name ? `<mj-text font-size="14px" color="${muted}">— ${escape(shop.name)}</mj-text>` : ''}
         <mj-text font-size="12px" color="${muted}" padding-top="0">Sent with Fryline, the shop's ordering software.</mj-text>
       </mj-column>
     </mj-section>
