@@ -33,7 +33,7 @@ describe("the baker's night-before sheet", () => {
     await page.goto(`${appUrl}/staff/`);
     await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
     await chooseAccount(page, 'baker@fryline.test');
-    await page.getByRole('heading', { name: /Baker — tonight's bake/ }).waitFor();
+    await page.getByRole('heading', { name: /Baker — the next bake/ }).waitFor();
 
     await page.getByRole('link', { name: /^production sheet$/i }).first().click();
     await page.getByRole('heading', { name: /^Production sheet — / }).waitFor();

@@ -21,7 +21,7 @@ describe('signing in through the account chooser lands each role on its home', (
 
   for (const [email, heading] of [
     ['owner@fryline.test', /Owner — overview/],
-    ['baker@fryline.test', /Baker — tonight's bake/],
+    ['baker@fryline.test', /Baker — the next bake/],
     ['counter@fryline.test', /Counter — pickups/],
   ] as const) {
     it(`${email} signs in from the staff app and sees their home`, async () => {

@@ -14,6 +14,7 @@ import { csrfProtection } from './middleware/csrf.js';
 import { rateLimits } from './middleware/rate-limits.js';
 import { errorHandler, notFoundHandler } from './middleware/errors.js';
 import { healthRouter } from './routes/health.js';
+import { shopRouter } from './routes/shop.js';
 import { authRouter } from './routes/auth.js';
 import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
@@ -166,6 +167,7 @@ export function createApp(config: Config) {
   app.post('/api/bake-days/:id/waitlist', limits.waitlist);
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
+  app.use(shopRouter);
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);

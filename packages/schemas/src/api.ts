@@ -9,6 +9,7 @@ import {
   planResponseSchema, productionSettingsSchema, productionSettingsViewSchema, saveFormulaSchema,
 } from './production.js';
 import { meSchema } from './roles.js';
+import { shopInfoSchema } from './shop.js';
 import {
   bakeDayEditResultSchema, bakeDayEditViewSchema, callOffSchema, callOffStartedSchema, confirmedSchema, editBakeDaySchema, jobViewSchema, subscribeSchema,
   subscribedSchema, tokenSchema, unsubscribedSchema, weekQuerySchema, weeklyReportSchema,
@@ -57,6 +58,8 @@ export const api = {
   health: endpoint({ method: 'get', path: '/api/health', response: z.object({ ok: z.boolean(), db: z.enum(['up', 'down']) }) }),
   csrf: endpoint({ method: 'get', path: '/api/csrf', response: z.object({ token: z.string() }) }),
   me: endpoint({ method: 'get', path: '/api/me', response: meSchema }),
+  /** The business the shop belongs to: its name and logo, for the storefront's header, titles and footer. */
+  getShop: endpoint({ method: 'get', path: '/api/shop', response: shopInfoSchema }),
 
   // bake days as customers see them
   listBakeDays: endpoint({ method: 'get', path: '/api/bake-days', response: z.array(bakeDayViewSchema) }),

@@ -8,6 +8,7 @@ export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
 export * from './text.js';
+export * from './shop.js';
 export * from './api.js';
 export * from './shop-rules.js';
 export * from './owner-ops.js';

@@ -120,6 +120,9 @@ export const waitlistOfferViewSchema = z.object({
 });
 export type WaitlistOfferView = z.infer<typeof waitlistOfferViewSchema>;
 
+/** One line of an order's bill (see orderBill): the lines add up to the order's total. */
+export const priceLineSchema = z.object({ kind: z.enum(['box', 'surcharge', 'tax']), label: z.string(), cents: z.number().int(), box: z.number().int().optional() });
+
 /** One order as the staff see it in a bake day's list. */
 export const staffOrderViewSchema = z.object({
   id: z.string(),
@@ -133,6 +136,8 @@ export const staffOrderViewSchema = z.object({
   rings: z.number().int(),
   holes: z.number().int(),
   boxes: z.array(z.object({ size: boxSizeSchema, items: z.array(z.object({ name: z.string(), quantity: z.number().int() })) })),
+  /** What the total is made of, line by line. */
+  priceLines: z.array(priceLineSchema),
 });
 export type StaffOrderView = z.infer<typeof staffOrderViewSchema>;
 

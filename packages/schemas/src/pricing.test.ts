@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { priceOrder } from './pricing.js';
+import { orderBill, priceOrder } from './pricing.js';
 
 // Worked by hand; rounding half up to the cent is common practice, no source.
 describe('priceOrder', () => {
@@ -36,5 +36,52 @@ describe('priceOrder', () => {
         expect(Number.isInteger(p.taxCents)).toBe(true);
       }
     }
+  });
+});
+
+// Worked by hand from the menu's own prices; tax rounding half up is common practice, no source.
+describe('orderBill', () => {
+  const boxes = [
+    {
+      size: 'dozen' as const,
+      priceCents: 3000,
+      items: [
+        { name: 'Plain sugar', quantity: 2, surchargeCents: 0 },
+        { name: 'Brown butter glaze', quantity: 6, surchargeCents: 125 },
+        { name: 'Passion fruit glaze', quantity: 4, surchargeCents: 100 },
+      ],
+    },
+    { size: 'holes' as const, priceCents: 800, items: [{ name: 'Cinnamon holes', quantity: 12, surchargeCents: 0 }] },
+  ];
+
+  it('lists box prices, each surcharge and added tax, and the lines sum to the total (mixed dozen $30 + $7.50 + $4 surcharges, holes $8, 8.25 % added)', () => {
+    const price = priceOrder(boxes.map((b) => ({ boxPriceCents: b.priceCents, items: b.items })), { mode: 'added', rateBasisPoints: 825 });
+    // subtotal 3000 + 750 + 400 + 800 = 4950; 8.25 % of 4950 = 408.375 → 408
+    expect(price).toMatchObject({ subtotalCents: 4950, taxCents: 408, totalCents: 5358 });
+    const bill = orderBill({ boxes, ...price });
+    expect(bill.lines.map((l) => [l.kind, l.cents])).toEqual([
+      ['box', 3000],
+      ['surcharge', 750],
+      ['surcharge', 400],
+      ['box', 800],
+      ['tax', 408],
+    ]);
+    expect(bill.lines.reduce((s, l) => s + l.cents, 0)).toBe(bill.totalCents);
+    expect(bill.totalCents).toBe(5358);
+    expect(bill.lines[1]!.label).toBe('6 × Brown butter glaze (+$1.25 each)');
+    expect(bill.includedTaxCents).toBeNull();
+  });
+
+  it('keeps included tax out of the lines and reports it as a note', () => {
+    const price = priceOrder(boxes.map((b) => ({ boxPriceCents: b.priceCents, items: b.items })), { mode: 'included', rateBasisPoints: 1000 });
+    const bill = orderBill({ boxes, ...price });
+    expect(bill.lines.some((l) => l.kind === 'tax')).toBe(false);
+    expect(bill.lines.reduce((s, l) => s + l.cents, 0)).toBe(4950);
+    // 4950 ÷ 1.1 = 4500 → 450 inside
+    expect(bill.includedTaxCents).toBe(450);
+  });
+
+  it('refuses stored figures whose lines would not add up', () => {
+    expect(() => orderBill({ boxes, subtotalCents: 4950, taxCents: 0, totalCents: 3000 })).toThrow(/add up/);
   });
 });

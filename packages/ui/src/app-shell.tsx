@@ -46,11 +46,11 @@ export function AppShell({ appName, header, footer, width = 'regular' }: AppShel
   );
 }
 
-/** The header's home link: Fryline's mark and the app's name. */
-export function BrandLink({ className = '', children }: { className?: string; children: ReactNode }) {
+/** The header's home link: the business's logo (or a plain mark) and its name. */
+export function BrandLink({ className = '', logoUrl = null, children }: { className?: string; logoUrl?: string | null; children: ReactNode }) {
   return (
     <Link to="/" className={`flex items-center gap-2 font-extrabold text-plum-800 no-underline ${className}`}>
-      <span className="brand-mark" aria-hidden="true" />
+      {logoUrl ? <img src={logoUrl} alt="" className="h-9 w-auto" /> : <span className="brand-mark" aria-hidden="true" />}
       {children}
     </Link>
   );

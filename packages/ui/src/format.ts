@@ -58,6 +58,20 @@ export function formatMoment(iso: string, timeZone: string): string {
   return `${weekday} ${formatClock(iso, timeZone)}`;
 }
 
+/**
+ * When pre-orders close, so that it can't be read as the wrong day:
+ * "Friday, December 4 at 6 pm"; a time in the small hours also names the
+ * night it falls in: "Friday, December 4 at 3:45 am (the night from Thursday to Friday)".
+ */
+export function formatCutoff(iso: string, timeZone: string): string {
+  const at = new Date(iso);
+  const text = `${formatDate(iso, timeZone)} at ${formatClock(iso, timeZone)}`;
+  const hour = Number(formatter(timeZone, { hour: 'numeric', hourCycle: 'h23' }).format(at));
+  if (hour >= 5) return text;
+  const day = (d: Date) => formatter(timeZone, { weekday: 'long' }).format(d);
+  return `${text} (the night from ${day(new Date(at.getTime() - 12 * 3600_000))} to ${day(at)})`;
+}
+
 /** "Thu, Jun 12, 6 pm". */
 export function formatDateTime(iso: string, timeZone: string): string {
   return `${formatDate(iso, timeZone, 'short')}, ${formatClock(iso, timeZone)}`;

@@ -12,7 +12,7 @@ export function SignOutButton({ onError, children }: { onError: (error: unknown)
   return (
     <button
       type="button"
-      className="btn btn-quiet btn-small"
+      className="btn btn-quiet btn-small whitespace-nowrap"
       disabled={signOut.isPending}
       onClick={() => signOut.mutate(undefined, { onSuccess: () => window.location.assign('/'), onError })}
     >

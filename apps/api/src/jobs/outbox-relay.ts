@@ -37,10 +37,16 @@ export async function relayOutbox(sequelize: Sequelize, transport: Transporter, 
         FOR UPDATE SKIP LOCKED`,
       { replacements: { batch }, type: QueryTypes.SELECT, transaction },
     );
+    // the mail is signed by the business itself: its shop name, at the configured address
+    const [shop] = rows.length
+      ? await sequelize.query<{ shop_name: string }>(`SELECT shop_name FROM shop_settings WHERE id = 1`, { type: QueryTypes.SELECT, transaction })
+      : [];
+    const address = /<([^>]+)>/.exec(from)?.[1] ?? from;
+    const sender = shop ? { name: shop.shop_name, address } : from;
     for (const row of rows) {
       try {
         await transport.sendMail({
-          from,
+          from: sender,
           to: row.to_address,
           subject: row.subject,
           text: row.text_body,

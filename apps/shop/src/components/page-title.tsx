@@ -1,6 +1,7 @@
-import { site } from '../config/site';
+import { useShop } from '../lib/shop-info';
 
-/** Sets the browser tab's title (React hoists <title> into the document head). */
+/** Sets the browser tab's title, with the business's name (React hoists <title> into the document head). */
 export function PageTitle({ children }: { children: string }) {
-  return <title>{`${children} · ${site.name}`}</title>;
+  const shop = useShop();
+  return <title>{shop ? `${children} · ${shop.name}` : children}</title>;
 }

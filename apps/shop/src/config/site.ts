@@ -1,6 +1,5 @@
 /** Settings of the shop that are ours to choose, in one place. */
 export const site = {
-  name: 'Fryline',
   /** How often the order page asks whether a payment has been confirmed. */
   paymentPollMs: 1000,
   /** How long the order page waits for that confirmation before saying so. */

@@ -5,6 +5,7 @@
  */
 export const queryRoots = {
   me: ['me'],
+  shop: ['shop'],
   bakeDays: ['bake-days'],
   orders: ['orders'],
   waitlist: ['waitlist'],

@@ -16,7 +16,7 @@ export interface StaffSection {
 /** Everything in the staff app besides each role's home, in navigation order. */
 export const sections: readonly StaffSection[] = [
   { path: 'pickups', label: 'Pickups', minRole: 'counter', summary: 'Find, check off and hand over orders.' },
-  { path: 'production', label: 'Production sheet', minRole: 'baker', summary: 'Tonight\u2019s quantities and schedule.' },
+  { path: 'production', label: 'Production sheet', minRole: 'baker', summary: 'The next bake\u2019s quantities and schedule.' },
   { path: 'formula', label: 'Formula', minRole: 'baker', summary: 'The dough in baker\u2019s percentages.' },
   { path: 'bake-days', label: 'Bake days', minRole: 'owner', summary: 'Dates, places, windows and capacity.' },
   { path: 'menu', label: 'Menu', minRole: 'owner', summary: 'Flavours, glazes, allergens and prices.' },

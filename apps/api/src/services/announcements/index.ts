@@ -6,7 +6,7 @@ import { database } from '../../db/sequelize.js';
 import { BakeDay, PickupWindow } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { renderMail } from '../mail/templates.js';
+import { paragraphMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
@@ -36,7 +36,7 @@ export const unsubscribeUrl = (unsubscribeToken: string) => `${context().config.
 async function queueConfirmation(row: SubscriberRow, now: Date, transaction: Transaction) {
   const { shopName } = await shopSettings(transaction);
   const link = `${context().config.publicUrl}/news/confirm?token=${encodeURIComponent(row.confirm_token)}`;
-  const mail = renderMail(`Please confirm: news of bake days from ${shopName}`, [
+  const mail = await paragraphMail(`Please confirm: news of bake days from ${shopName}`, [
     'Hello,',
     `Someone (we hope you) asked to hear from ${shopName} when a new bake day opens for pre-orders.`,
     `To say yes, open this link: ${link}`,
@@ -133,7 +133,7 @@ async function announceDay(dayId: string, now: Date, perMinute: number): Promise
     const link = `${context().config.publicUrl}/days/${day.id}`;
     for (const [i, sub] of subscribers.entries()) {
       const leave = unsubscribeUrl(sub.unsubscribe_token);
-      const mail = renderMail(`Pre-orders are open for ${date} — ${shopName}`, [
+      const mail = await paragraphMail(`Pre-orders are open for ${date} — ${shopName}`, [
         'Hello,',
         `Pre-orders are open for our bake day on ${date} at ${day.place}${day.address ? `, ${day.address}` : ''}.`,
         `Pickup windows: ${windows.join(', ')}. Orders close ${closes}, or sooner if we sell out.`,

@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { BakeDay, Order, PickupWindow, User } from '../../db/models/index.js';
 import { extendChangeGrace } from '../../db/queries/bake-day-edit.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { renderMail } from '../mail/templates.js';
+import { paragraphMail } from '../mail/templates.js';
 import { windowText } from '../mail/order-mails.js';
 import { shopSettings } from '../shop/settings.js';
 import { context } from '../../integrations/context.js';
@@ -34,7 +34,7 @@ export async function queueChangeNotices(changeId: string, orders: Map<string, O
     const window = order.pickupWindow!;
     await extendChangeGrace(order.id, window.startsAt, transaction);
     const url = `${publicUrl}/orders/${order.id}?changed=1`;
-    const mail = renderMail(`We changed your pickup — ${shopName}`, [
+    const mail = await paragraphMail(`We changed your pickup — ${shopName}`, [
       `Hello ${order.user!.name || 'there'},`,
       `We had to change the bake day you ordered for:`,
       ...change.lines.map((l) => `• ${l}`),

@@ -9,7 +9,7 @@ import { releaseOrder } from '../../db/queries/capacity.js';
 import { expireCheckout } from '../../integrations/checkout.js';
 import { context } from '../../integrations/context.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { renderMail } from '../mail/templates.js';
+import { paragraphMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { audit } from '../audit/audit.js';
 
@@ -137,7 +137,7 @@ async function tellPerson(job: JobRow, userId: string, transaction: Transaction)
       : money && money.orders > 0
         ? 'Your order was already settled, so nothing more is due.'
         : 'You were on the waitlist or had a box on hold: nothing was charged, and there is nothing you need to do.';
-  const mail = renderMail(`${date} is called off — ${settings.shopName}`, [
+  const mail = await paragraphMail(`${date} is called off — ${settings.shopName}`, [
     `Hello ${user.name || 'there'},`,
     `We're sorry: we have had to call off the bake day on ${date} at ${day.place}.`,
     ...(reason ? [`Why: ${reason}`] : []),

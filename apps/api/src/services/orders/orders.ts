@@ -10,7 +10,7 @@ import { releaseOrder, takeWindowSlot, giveBackWindowSlot } from '../../db/queri
 import { insertHeldOrder, saveCheckoutSession, takeOrderCapacity } from '../../db/queries/orders.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
-import { queueCancellation } from '../mail/order-mails.js';
+import { queueCancellation, queuePickupMoved } from '../mail/order-mails.js';
 import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
 import { expireCheckout, openCheckout } from '../../integrations/checkout.js';
 import { recordRefundIntent, refundableCents, sendRefundIntent } from '../payments/refund-intents.js';
@@ -237,6 +237,7 @@ export async function moveOrder(user: Me, id: string, pickupWindowId: string, no
     await giveBackWindowSlot(from, transaction);
     await fresh.update({ pickupWindowId }, { transaction });
     await audit({ actorId: user.id, action: 'order.moved', subjectType: 'order', subjectId: id, details: { from, to: pickupWindowId } }, transaction);
+    await queuePickupMoved(id, transaction);
   });
   return getOrder(user, id, now);
 }

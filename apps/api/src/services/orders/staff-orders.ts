@@ -1,7 +1,19 @@
 import { Op } from 'sequelize';
-import type { StaffOrderView } from '@fryline/schemas';
+import { orderBill, type PricedOrder, type StaffOrderView } from '@fryline/schemas';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
+
+/** An order row with its boxes and lines, as orderBill reads it. */
+export function billOf(order: Order): PricedOrder {
+  return {
+    boxes: [...(order.boxes ?? [])]
+      .sort((a, b) => a.position - b.position)
+      .map((box) => ({ size: box.size, priceCents: box.priceCents, items: (box.lines ?? []).map((l) => ({ name: l.name, quantity: l.quantity, surchargeCents: l.surchargeCents })) })),
+    subtotalCents: order.subtotalCents,
+    taxCents: order.taxCents,
+    totalCents: order.totalCents,
+  };
+}
 
 /** Every order of a bake day that was ever paid or is on hold, for the staff, by pickup window then name. */
 export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderView[]> {
@@ -29,6 +41,7 @@ export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderVi
       boxes: [...(o.boxes ?? [])]
         .sort((a, b) => a.position - b.position)
         .map((b) => ({ size: b.size, items: (b.lines ?? []).map((l) => ({ name: l.name, quantity: l.quantity })) })),
+      priceLines: orderBill(billOf(o)).lines,
     }))
     .sort((a, b) => a.pickupWindow.startsAt.localeCompare(b.pickupWindow.startsAt) || a.customer.name.localeCompare(b.customer.name));
 }

@@ -50,7 +50,7 @@ export async function signIn(profile: ProviderProfile, shopUrl: string): Promise
       { transaction },
     );
     const settings = await shopSettings(transaction);
-    const mail = welcomeMail(user.name, settings.shopName, shopUrl);
+    const mail = await welcomeMail(user.name, settings.shopName, shopUrl);
     await enqueueMail({ kind: 'welcome', to: user.email, ...mail, dedupeKey: `welcome:${user.id}` }, transaction);
     await audit({ actorId: user.id, action: 'account.created', subjectType: 'user', subjectId: user.id }, transaction);
     return toMe(user);

@@ -15,34 +15,75 @@ import { context } from '../../integrations/context.js';
 
 export const OFFER_MINUTES = 30;
 
+const piecesText = (rings: number, holes: number) =>
+  [rings ? `${rings} ring${rings === 1 ? '' : 's'}` : '', holes ? `${holes} hole${holes === 1 ? '' : 's'}` : ''].filter(Boolean).join(' and ');
+
+const queuePosition = (entry: WaitlistEntry, transaction?: Transaction) =>
+  WaitlistEntry.count({ where: { bakeDayId: entry.bakeDayId, status: 'waiting', createdAt: { [Op.lte]: entry.createdAt } }, transaction });
+
 /**
- * Puts a customer on a bake day's waitlist: only when the day can't take
- * their request now (sold out for it), and never for more than their share
- * of the day (what they already ordered counts).
+ * A waitlist request only when the day can't take it now (sold out for it),
+ * and never for more than the customer's share of the day (what they already
+ * ordered counts).
+ */
+async function checkFairShare(user: Me, day: BakeDay, rings: number, holes: number, transaction: Transaction) {
+  const { maxPiecesPerCustomer } = await shopSettings(transaction);
+  const already = await piecesOrderedBy(user.id, day.id);
+  if (rings + holes + already > maxPiecesPerCustomer) {
+    throw new AppError('limit_exceeded', `Each customer can ask for up to ${maxPiecesPerCustomer} pieces for one bake day${already ? `; you already have ${already}` : ''}.`, 409, {
+      limit: maxPiecesPerCustomer,
+      alreadyOrdered: already,
+    });
+  }
+  if (day.ringsRemaining >= rings && day.holesRemaining >= holes) {
+    throw new AppError('not_sold_out', 'There are still enough left for this: order them now instead of waiting.', 409, {
+      remaining: { rings: day.ringsRemaining, holes: day.holesRemaining },
+    });
+  }
+}
+
+/**
+ * Puts the customer on a bake day's waitlist, or changes how many they are
+ * waiting for (keeping their place), and confirms it by e-mail. An entry
+ * that already has an offer out is left as it is.
  */
 export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, holes: number, now: Date) {
-  const day = await BakeDay.findByPk(bakeDayId);
-  if (!day || day.status !== 'published') throw notFound('Bake day');
-  if (now >= day.cutoffAt) throw new AppError('closed', 'Orders for this bake day are closed', 409);
-  const existing = await WaitlistEntry.findOne({ where: { bakeDayId, userId: user.id, status: { [Op.in]: ['waiting', 'offered'] } } });
-  if (!existing) {
-    const { maxPiecesPerCustomer } = await shopSettings();
-    const already = await piecesOrderedBy(user.id, bakeDayId);
-    if (rings + holes + already > maxPiecesPerCustomer) {
-      throw new AppError('limit_exceeded', `Each customer can ask for up to ${maxPiecesPerCustomer} pieces for one bake day${already ? `; you already have ${already}` : ''}.`, 409, {
-        limit: maxPiecesPerCustomer,
-        alreadyOrdered: already,
+  return database().transaction(async (transaction) => {
+    const day = await BakeDay.findByPk(bakeDayId, { transaction });
+    if (!day || day.status !== 'published') throw notFound('Bake day');
+    if (now >= day.cutoffAt) throw new AppError('closed', 'Orders for this bake day are closed', 409);
+    const existing = await WaitlistEntry.findOne({
+      where: { bakeDayId, userId: user.id, status: { [Op.in]: ['waiting', 'offered'] } },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
+    const changed = existing?.status === 'waiting' && (existing.rings !== rings || existing.holes !== holes);
+    if (!existing || changed) await checkFairShare(user, day, rings, holes, transaction);
+    if (changed) await existing.update({ rings, holes }, { transaction });
+    const entry = existing ?? (await WaitlistEntry.create({ bakeDayId, userId: user.id, rings, holes }, { transaction }));
+    const position = await queuePosition(entry, transaction);
+    if (!existing || changed) {
+      const settings = await shopSettings(transaction);
+      const date = DateTime.fromISO(day.date, { zone: day.timeZone }).toFormat('cccc d LLLL');
+      const what = piecesText(entry.rings, entry.holes);
+      const mail = await renderMail({
+        subject: `${existing ? 'Your waitlist place is updated' : "You're on the waitlist"} for ${date} — ${settings.shopName}`,
+        shop: { name: settings.shopName, logoUrl: settings.logoUrl },
+        preview: `Number ${position} on the list, for ${what}.`,
+        blocks: [
+          { type: 'paragraph', text: `Hello ${user.name || 'there'},` },
+          { type: 'paragraph', text: `You're on the waitlist for ${date} at ${day.place}: number ${position} on the list, for ${what}.` },
+          { type: 'paragraph', text: `If doughnuts come free, we hold them for the next person on the list for ${OFFER_MINUTES} minutes and e-mail a link to claim them. Nothing is charged unless you claim them and pay.` },
+          { type: 'button', label: 'See or change your place', href: `${context().config.publicUrl}/days/${day.id}` },
+        ],
       });
+      await enqueueMail(
+        { kind: 'waitlist-joined', to: user.email, ...mail, dedupeKey: `waitlist-joined:${entry.id}:${entry.rings}:${entry.holes}:${now.getTime()}` },
+        transaction,
+      );
     }
-    if (day.ringsRemaining >= rings && day.holesRemaining >= holes) {
-      throw new AppError('not_sold_out', 'There are still enough left for this: order them now instead of waiting.', 409, {
-        remaining: { rings: day.ringsRemaining, holes: day.holesRemaining },
-      });
-    }
-  }
-  const entry = existing ?? (await WaitlistEntry.create({ bakeDayId, userId: user.id, rings, holes }));
-  const position = await WaitlistEntry.count({ where: { bakeDayId, status: 'waiting', createdAt: { [Op.lte]: entry.createdAt } } });
-  return { id: entry.id, position, status: entry.status, rings: entry.rings, holes: entry.holes };
+    return { id: entry.id, position, status: entry.status, rings: entry.rings, holes: entry.holes };
+  });
 }
 
 export async function listMyWaitlist(user: Me): Promise<WaitlistEntryView[]> {
@@ -54,7 +95,7 @@ export async function listMyWaitlist(user: Me): Promise<WaitlistEntryView[]> {
       rings: e.rings,
       holes: e.holes,
       status: e.status,
-      position: e.status === 'waiting' ? await WaitlistEntry.count({ where: { bakeDayId: e.bakeDayId, status: 'waiting', createdAt: { [Op.lte]: e.createdAt } } }) : null,
+      position: e.status === 'waiting' ? await queuePosition(e) : null,
       offerExpiresAt: e.offerExpiresAt?.toISOString() ?? null,
     })),
   );
@@ -114,14 +155,18 @@ export async function offerFreedCapacity(bakeDayId: string, transaction: Transac
       shopSettings(transaction),
     ]);
     const date = DateTime.fromISO(day!.date, { zone: day!.timeZone }).toFormat('cccc d LLLL');
-    const what = [entry.rings ? `${entry.rings} rings` : '', entry.holes ? `${entry.holes} holes` : ''].filter(Boolean).join(' and ');
-    const mail = renderMail(`Doughnuts freed up for ${date} — ${settings.shopName}`, [
-      `Hello ${user!.name || 'there'},`,
-      `Good news: ${what} came free for ${date} at ${day!.place}. We're holding them for you for ${OFFER_MINUTES} minutes.`,
-      `Claim them here: ${context().config.publicUrl}/claim/${token}`,
-      `If you don't claim them in time, they go to the next person on the waitlist.`,
-      `— ${settings.shopName}`,
-    ]);
+    const what = piecesText(entry.rings, entry.holes);
+    const mail = await renderMail({
+      subject: `Doughnuts freed up for ${date} — ${settings.shopName}`,
+      shop: { name: settings.shopName, logoUrl: settings.logoUrl },
+      preview: `${what} are held for you for ${OFFER_MINUTES} minutes.`,
+      blocks: [
+        { type: 'paragraph', text: `Hello ${user!.name || 'there'},` },
+        { type: 'paragraph', text: `Good news: ${what} came free for ${date} at ${day!.place}. We're holding them for you for ${OFFER_MINUTES} minutes.` },
+        { type: 'button', label: 'Claim them', href: `${context().config.publicUrl}/claim/${token}` },
+        { type: 'paragraph', text: "If you don't claim them in time, they go to the next person on the waitlist." },
+      ],
+    });
     await enqueueMail({ kind: 'waitlist-offer', to: user!.email, ...mail, dedupeKey: `waitlist-offer:${entry.id}` }, transaction);
     offered += 1;
   }

@@ -1,8 +1,9 @@
 import { AppShell } from '@fryline/ui';
 import { SiteHeader } from './site-header';
 import { SiteFooter } from './site-footer';
-import { site } from '../../config/site';
+import { useShop } from '../../lib/shop-info';
 
 export function AppLayout() {
-  return <AppShell appName={site.name} header={<SiteHeader />} footer={<SiteFooter />} />;
+  const shop = useShop();
+  return <AppShell appName={shop?.name ?? 'Our shop'} header={<SiteHeader />} footer={<SiteFooter />} />;
 }

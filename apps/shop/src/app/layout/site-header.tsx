@@ -1,16 +1,19 @@
 import { NavLink } from 'react-router-dom';
 import { BrandLink } from '@fryline/ui';
 import { AccountMenu } from '../../features/auth/components/account-menu';
-import { site } from '../../config/site';
+import { useShop } from '../../lib/shop-info';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `rounded-full px-3 py-1.5 font-extrabold no-underline ${isActive ? 'bg-plum-100 text-plum-800' : 'text-ink hover:bg-crumb'}`;
 
 export function SiteHeader() {
+  const shop = useShop();
   return (
     <header className="border-b border-line bg-paper">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3">
-        <BrandLink className="text-2xl">{site.name}</BrandLink>
+        <BrandLink className="min-h-9 text-2xl" logoUrl={shop?.logoUrl ?? null}>
+          {shop?.name ?? <span className="sr-only">Home</span>}
+        </BrandLink>
         <nav aria-label="Main" className="order-last w-full sm:order-none sm:w-auto">
           <ul className="flex gap-1">
             <li>

@@ -1,10 +1,10 @@
-import { useEffect } from 'react';
-import { NavLink, useLocation } from 'react-router-dom';
+import { NavLink } from 'react-router-dom';
 import { BrandLink } from '@fryline/ui';
 import { hasRole } from '@fryline/schemas';
 import { roleNames, sections } from '../../config/sections';
 import { useStaffMember } from '../session/staff-member';
 import { SignOutButton } from '../session/sign-out-button';
+import { isBuilt } from '../routes/section-route';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `block whitespace-nowrap rounded-full px-2.5 py-1.5 text-[0.95rem] font-extrabold no-underline sm:px-3 sm:text-base ${
@@ -13,24 +13,17 @@ const navLink = ({ isActive }: { isActive: boolean }) =>
 
 export function StaffHeader() {
   const member = useStaffMember();
-  const allowed = sections.filter((section) => hasRole(member.role, section.minRole));
-  const { pathname } = useLocation();
-
-  // On a narrow screen the navigation scrolls sideways: keep the current page's link in sight.
-  useEffect(() => {
-    document
-      .querySelector('#staff-nav [aria-current="page"]')
-      ?.scrollIntoView({ block: 'nearest', inline: 'nearest' });
-  }, [pathname]);
+  // only pages that work, and only those this role may open
+  const allowed = sections.filter((section) => hasRole(member.role, section.minRole) && isBuilt(section.path));
   return (
     <header className="border-b border-line bg-paper">
-      <div className="mx-auto flex max-w-6xl items-center gap-3 px-4 pt-3">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-3 gap-y-2 px-4 pt-3">
         <BrandLink className="text-xl">
           Fryline <span className="font-semibold text-muted">staff</span>
         </BrandLink>
-        <div className="ml-auto flex items-center gap-3">
-          <span className="hidden text-right leading-tight sm:block">
-            <span className="block font-semibold">{member.name}</span>
+        <div className="ml-auto flex min-w-0 items-center gap-2 sm:gap-3">
+          <span className="max-w-[10rem] min-w-0 truncate text-right text-sm leading-tight font-semibold sm:max-w-[14rem] sm:text-base">
+            {member.name}
           </span>
           <span className="badge badge-plum" title={`Signed in as ${member.name}`}>
             {roleNames[member.role]}
@@ -38,8 +31,9 @@ export function StaffHeader() {
           <SignOutButton />
         </div>
       </div>
-      <nav id="staff-nav" aria-label="Staff" className="mx-auto max-w-6xl overflow-x-auto px-4 py-2">
-        <ul className="flex gap-1">
+      {/* the bar wraps onto a second line on a narrow screen: every page stays in sight */}
+      <nav id="staff-nav" aria-label="Staff" className="mx-auto max-w-6xl px-4 py-2">
+        <ul className="flex flex-wrap gap-1">
           <li>
             <NavLink to="/" end className={navLink}>
               Home

@@ -24,6 +24,9 @@ const builtPages: Record<string, ReactNode> = {
   sales: <SalesPage />,
 };
 
+/** Whether a section has a working page (the menu lists only those). */
+export const isBuilt = (path: string): boolean => path in builtPages;
+
 export function SectionRoute({ section }: { section: StaffSection }) {
   const plan = plannedPages[section.path];
   const page = builtPages[section.path] ?? (

@@ -24,7 +24,7 @@ export function AccountMenu() {
 
   return (
     <div className="flex items-center gap-3">
-      <span className="hidden max-w-[12rem] truncate font-semibold sm:inline" title={me.data.email}>
+      <span className="max-w-[8.5rem] truncate text-sm font-semibold sm:max-w-[12rem] sm:text-base" title={me.data.email}>
         {me.data.name}
       </span>
       <SignOutButton onError={() => toast('Signing out did not work. Please try again.', 'bad')}>

@@ -42,7 +42,10 @@ export function availabilityOf(day: BakeDayView): AvailabilityInfo {
       }
       const parts = [leftText(remaining.rings, capacity.rings, 'ring')];
       if (capacity.holes > 0) parts.push(leftText(remaining.holes, capacity.holes, 'hole'));
-      const low = parts.some((p) => p.startsWith('Only') || p.endsWith('sold out'));
+      // the badge never contradicts the line: a kind that is sold out is named, not called "going fast"
+      if (remaining.rings <= 0) return { kind: 'open', badge: 'Holes only', badgeClass: 'badge-warn', line: parts.join(' · ') };
+      if (capacity.holes > 0 && remaining.holes <= 0) return { kind: 'open', badge: 'Rings only', badgeClass: 'badge-warn', line: parts.join(' · ') };
+      const low = parts.some((p) => p.startsWith('Only'));
       return { kind: 'open', badge: low ? 'Going fast' : 'Open', badgeClass: low ? 'badge-warn' : 'badge-ok', line: parts.join(' · ') };
     }
   }

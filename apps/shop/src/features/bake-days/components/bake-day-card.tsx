@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { BakeDayView } from '@fryline/schemas';
-import { formatClockRange, formatDate, formatMoment } from '@fryline/ui/format';
+import { formatClockRange, formatDate, formatCutoff } from '@fryline/ui/format';
 import { availabilityOf } from './availability';
 
 const actionLabel = {
@@ -15,7 +15,7 @@ export function BakeDayCard({ day }: { day: BakeDayView }) {
   const info = availabilityOf(day);
   const headingId = `day-${day.id}`;
   return (
-    <article className="card flex flex-col gap-3" aria-labelledby={headingId}>
+    <article className="card flex w-full min-w-0 flex-col gap-3" aria-labelledby={headingId}>
       <div className="flex flex-wrap items-start justify-between gap-2">
         <h3 id={headingId} className="text-xl">
           {formatDate(day.date, day.timeZone)}
@@ -47,7 +47,7 @@ export function BakeDayCard({ day }: { day: BakeDayView }) {
       )}
       <p className={`font-extrabold ${info.kind === 'open' ? 'text-sage-700' : ''}`}>{info.line}</p>
       {info.kind === 'open' && (
-        <p className="text-sm text-muted">Orders close {formatMoment(day.cutoffAt, day.timeZone)}.</p>
+        <p className="text-sm text-muted">Pre-orders close {formatCutoff(day.cutoffAt, day.timeZone)}.</p>
       )}
       <Link
         to={`/days/${day.id}`}

@@ -1,5 +1,5 @@
 import type { BakeDayView } from '@fryline/schemas';
-import { formatDate, formatMoment } from '@fryline/ui/format';
+import { formatCutoff, formatDate } from '@fryline/ui/format';
 import { availabilityOf } from './availability';
 
 /** The top of a bake day's page: when, where, and what is left. */
@@ -20,7 +20,7 @@ export function BakeDayFacts({ day }: { day: BakeDayView }) {
       </div>
       {info.kind === 'open' && (
         <p className="text-sm text-muted">
-          Pre-orders close {formatMoment(day.cutoffAt, day.timeZone)}, when the dough gets mixed.
+          Pre-orders close {formatCutoff(day.cutoffAt, day.timeZone)}. We make only as much dough as is ordered by then, and until then you can cancel for a full refund.
         </p>
       )}
     </header>

@@ -21,7 +21,7 @@ export function BakeDayList() {
   return (
     <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
       {days.data.map((day) => (
-        <li key={day.id} className="flex">
+        <li key={day.id} className="flex min-w-0">
           <BakeDayCard day={day} />
         </li>
       ))}

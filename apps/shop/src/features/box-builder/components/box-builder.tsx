@@ -31,6 +31,15 @@ interface BoxBuilderProps {
 }
 
 /** Choose a pickup window, fill one or more boxes, review, pay. */
+/** Why a box size can't be added, in words (the button stays readable and says so). */
+function unavailableReason(kind: 'ring' | 'hole', limits: PieceLimits, used: PieceLimits, claim: boolean): string {
+  const limit = kind === 'ring' ? limits.rings : limits.holes;
+  const left = limit - (kind === 'ring' ? used.rings : used.holes);
+  if (claim) return limit <= 0 ? `Your offer has no ${kind}s` : `Only ${plural(Math.max(0, left), kind)} left in your offer`;
+  if (limit <= 0) return `${kind === 'ring' ? 'Rings' : 'Holes'} sold out`;
+  return left <= 0 ? `Your boxes use every ${kind} left` : `Only ${plural(left, kind)} left`;
+}
+
 export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, signedIn, renderHoldExists }: BoxBuilderProps) {
   const [draft, dispatch] = useReducer(
     (state: Draft, action: DraftAction) => reduceDraft(day, state, action),
@@ -139,7 +148,7 @@ export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, sig
                 >
                   <span>{box.label}</span>
                   <span className="text-sm font-semibold">
-                    {fits ? `${plural(box.pieces, kind)} · from ${formatCents(box.priceCents)}` : `Not enough ${kind}s left`}
+                    {fits ? `${plural(box.pieces, kind)} · from ${formatCents(box.priceCents)}` : unavailableReason(kind, limits, used, Boolean(claimToken))}
                   </span>
                 </button>
               );

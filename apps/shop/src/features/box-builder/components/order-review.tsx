@@ -4,7 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { createOrderSchema, type BakeDayView, formatCents } from '@fryline/schemas';
 import { useCreateOrder } from '../api/use-create-order';
-import { boxOf, boxTitle, previewPrice, toBoxInputs, type Draft } from '../model/draft';
+import { boxOf, boxTitle, previewBill, toBoxInputs, type Draft } from '../model/draft';
+import { PriceLines } from '../../../components/price-lines';
 import { clearDraft } from '../model/draft-storage';
 import { detailString, isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { formatClockRange, formatDate, listWords } from '@fryline/ui/format';
@@ -41,7 +42,7 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
   const form = useForm<Consent>({ resolver: zodResolver(consentSchema), defaultValues: { allergensRead: false } });
   const consentError = form.formState.errors.allergensRead?.message;
 
-  const price = previewPrice(day, draft);
+  const bill = previewBill(day, draft);
   const pickupWindow = day.pickupWindows.find((w) => w.id === draft.pickupWindowId);
   const menu = new Map(day.menu.map((item) => [item.id, item]));
   const chosenItems = draft.boxes.flatMap((box) => Object.keys(box.items).flatMap((id) => menu.get(id) ?? []));
@@ -105,12 +106,8 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
         <ul className="mt-2 divide-y divide-line">
           {draft.boxes.map((box, index) => (
             <li key={box.key} className="py-3">
-              <p className="flex justify-between gap-3 font-extrabold">
-                <span>
-                  {boxTitle(day, draft, box)}{' '}
-                  <span className="font-semibold text-muted">({boxOf(day, box.size)?.pieces})</span>
-                </span>
-                <span>{formatCents(price.boxesCents[index] ?? 0)}</span>
+              <p className="font-extrabold">
+                {boxTitle(day, draft, box)} <span className="font-semibold text-muted">({boxOf(day, box.size)?.pieces})</span>
               </p>
               <ul className="mt-1 text-sm">
                 {Object.entries(box.items).map(([id, quantity]) => (
@@ -122,20 +119,13 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
             </li>
           ))}
         </ul>
-        <dl className="mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t border-line pt-3">
-          <dt>Subtotal</dt>
-          <dd className="text-right">{formatCents(price.subtotalCents)}</dd>
-          {price.taxCents > 0 && (
-            <>
-              <dt className="text-muted">
-                {day.tax.mode === 'added' ? 'Sales tax' : 'Tax included in the price'} ({day.tax.rateBasisPoints / 100}%)
-              </dt>
-              <dd className="text-right text-muted">{formatCents(price.taxCents)}</dd>
-            </>
-          )}
-          <dt className="text-lg font-extrabold">Total</dt>
-          <dd className="text-right text-lg font-extrabold">{formatCents(price.totalCents)}</dd>
-        </dl>
+        <h4 className="mt-2 border-t border-line pt-3 text-base font-extrabold">What you pay</h4>
+        <PriceLines bill={bill} totalLabel="To pay" />
+        {day.tax.rateBasisPoints > 0 && (
+          <p className="mt-1 text-sm text-muted">
+            {day.tax.mode === 'added' ? 'Sales tax' : 'Tax'} at {day.tax.rateBasisPoints / 100}%{day.tax.mode === 'added' ? ' is added to the prices.' : ' is included in the prices.'}
+          </p>
+        )}
       </div>
 
       <div className="card flex flex-col gap-3">
@@ -187,7 +177,7 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
             ) : (
               <button type="submit" className="btn btn-primary" aria-disabled={busy}>
                 {busy && <span className="spinner" aria-hidden="true" />}
-                {leaving ? 'Taking you to payment…' : `Pay ${formatCents(price.totalCents)}`}
+                {leaving ? 'Taking you to payment…' : `Pay ${formatCents(bill.totalCents)}`}
               </button>
             )}
           </div>

@@ -2,6 +2,8 @@ import {
   boxSizes,
   boxTakes,
   priceOrder,
+  orderBill,
+  type OrderBill,
   type BakeDayView,
   type BoxInput,
   type BoxSize,
@@ -80,16 +82,25 @@ export function toBoxInputs(draft: Draft): BoxInput[] {
   }));
 }
 
+/** The draft as the bill sees it: each box's price and its items' surcharges. */
+function pricedBoxes(day: BakeDayView, draft: Draft) {
+  const menu = new Map(day.menu.map((item) => [item.id, item]));
+  return draft.boxes.map((box) => ({
+    size: box.size,
+    priceCents: boxOf(day, box.size)?.priceCents ?? 0,
+    items: Object.entries(box.items).map(([id, quantity]) => ({ name: menu.get(id)?.name ?? 'Unknown item', surchargeCents: menu.get(id)?.surchargeCents ?? 0, quantity })),
+  }));
+}
+
 /** A preview of the price; the server works out the real one. */
 export function previewPrice(day: BakeDayView, draft: Draft): OrderPrice {
-  const surcharge = new Map(day.menu.map((item) => [item.id, item.surchargeCents]));
-  return priceOrder(
-    draft.boxes.map((box) => ({
-      boxPriceCents: boxOf(day, box.size)?.priceCents ?? 0,
-      items: Object.entries(box.items).map(([id, quantity]) => ({ surchargeCents: surcharge.get(id) ?? 0, quantity })),
-    })),
-    day.tax,
-  );
+  return priceOrder(pricedBoxes(day, draft).map((box) => ({ boxPriceCents: box.priceCents, items: box.items })), day.tax);
+}
+
+/** The preview as bill lines that add up to its total. */
+export function previewBill(day: BakeDayView, draft: Draft): OrderBill {
+  const boxes = pricedBoxes(day, draft);
+  return orderBill({ boxes, ...previewPrice(day, draft) });
 }
 
 export function boxTitle(day: BakeDayView, draft: Draft, box: DraftBox): string {
@@ -108,7 +119,7 @@ export function draftProblems(day: BakeDayView, draft: Draft, limits: PieceLimit
   for (const box of draft.boxes) {
     const pieces = boxOf(day, box.size)?.pieces ?? 0;
     const filled = filledCount(box);
-    if (filled !== pieces) problems.push(`Fill your ${boxTitle(day, draft, box).toLowerCase()} (${filled} of ${pieces}).`);
+    if (filled !== pieces) problems.push(`Fill your ${boxTitle(day, draft, box).replace(/^an? /i, '').toLowerCase()} (${filled} of ${pieces}).`);
   }
   const used = piecesUsed(day, draft);
   if (used.rings > limits.rings) problems.push(`Only ${plural(limits.rings, 'ring')} can be ordered; take a smaller box.`);

@@ -1,10 +1,12 @@
-import { boxLabel, formatCents, type OrderView } from '@fryline/schemas';
+import { boxLabel, orderBill, type OrderView } from '@fryline/schemas';
+import { PriceLines } from '../../../components/price-lines';
 import { listWords } from '@fryline/ui/format';
 import { allergensOf, AllergenList } from '../../../components/allergen-list';
 
 /** What is in the order, what it cost, and its allergens. */
 export function OrderBoxes({ order }: { order: OrderView }) {
   const allergens = allergensOf(order.boxes.flatMap((box) => box.items));
+  const bill = orderBill(order);
   return (
     <section className="card" aria-labelledby="boxes-heading">
       <h2 id="boxes-heading" className="text-lg">
@@ -13,11 +15,8 @@ export function OrderBoxes({ order }: { order: OrderView }) {
       <ul className="mt-2 divide-y divide-line">
         {order.boxes.map((box, index) => (
           <li key={index} className="py-3">
-            <p className="flex justify-between gap-3 font-extrabold">
-              <span>
-                {boxLabel(box.size)} <span className="font-semibold text-muted">({box.pieces})</span>
-              </span>
-              <span>{formatCents(box.priceCents)}</span>
+            <p className="font-extrabold">
+              {boxLabel(box.size)} <span className="font-semibold text-muted">({box.pieces})</span>
             </p>
             <ul className="mt-1 text-sm">
               {box.items.map((item) => (
@@ -29,22 +28,8 @@ export function OrderBoxes({ order }: { order: OrderView }) {
           </li>
         ))}
       </ul>
-      <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t border-line pt-3">
-        {order.taxCents > 0 && (
-          <>
-            <dt className="text-muted">Tax</dt>
-            <dd className="text-right text-muted">{formatCents(order.taxCents)}</dd>
-          </>
-        )}
-        <dt className="font-extrabold">Total</dt>
-        <dd className="text-right font-extrabold">{formatCents(order.totalCents)}</dd>
-        {order.refundedCents > 0 && (
-          <>
-            <dt className="text-sage-700">Refunded</dt>
-            <dd className="text-right text-sage-700">{formatCents(order.refundedCents)}</dd>
-          </>
-        )}
-      </dl>
+      <h3 className="mt-2 border-t border-line pt-3 text-base">What you pay</h3>
+      <PriceLines bill={bill} refundedCents={order.refundedCents} />
       {allergens.length > 0 && (
         <div className="mt-3 border-t border-line pt-3">
           <AllergenList allergens={allergens} label="This order contains" />

@@ -5,7 +5,7 @@ import { formatCents, type OrderDetail } from '@fryline/schemas';
 import { orderQueries } from '../api/order-queries';
 import { site } from '../../../config/site';
 import { isApiError } from '@fryline/ui/api-client';
-import { formatClock, formatDate } from '@fryline/ui/format';
+import { formatClock, formatCutoff, formatDate } from '@fryline/ui/format';
 import { signInUrl, currentPath } from '../../../lib/sign-in';
 import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { PageTitle } from '../../../components/page-title';
@@ -185,7 +185,7 @@ export function OrderDetail({ id, renderMove }: OrderDetailProps) {
           {data.canCancel && (
             <div className="card flex flex-col items-start gap-2">
               <h2 className="text-lg">Plans changed?</h2>
-              <p className="text-muted">You can cancel and get your money back until the dough is mixed.</p>
+              <p className="text-muted">You can cancel for a full refund until pre-orders close, {formatCutoff(data.bakeDay.cutoffAt, tz)}.</p>
               <CancelOrder order={data} />
             </div>
           )}

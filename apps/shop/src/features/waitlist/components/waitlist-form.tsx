@@ -1,9 +1,13 @@
 import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import type { BakeDayView } from '@fryline/schemas';
-import { useJoinWaitlist } from '../api/use-waitlist-actions';
+import { useJoinWaitlist, useLeaveWaitlist } from '../api/use-waitlist-actions';
+import { waitlistQueries } from '../api/waitlist-queries';
+import { errorMessage } from '@fryline/ui/api-client';
+import { formatDateTime, formatPieces } from '@fryline/ui/format';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { goToSignIn } from '../../../lib/sign-in';
 
@@ -20,13 +24,74 @@ type WaitlistValues = z.infer<typeof waitlistSchema>;
 
 const fields = ['rings', 'holes'] as const;
 
-/** Join the waitlist for a sold-out bake day. */
+/**
+ * The waitlist on a bake day's page: the customer's own place when they are
+ * on the list (with change and leave), otherwise the form to join.
+ */
 export function WaitlistForm({ day }: { day: BakeDayView }) {
+  const mine = useQuery({ ...waitlistQueries.mine(), retry: false });
+  const entry = mine.data?.find((e) => e.bakeDayId === day.id);
+  const [editing, setEditing] = useState(false);
+  const [message, setMessage] = useState<string | null>(null);
+  const leave = useLeaveWaitlist();
+
+  if (entry && !editing) {
+    return (
+      <section className="card flex flex-col gap-3" aria-labelledby="waitlist-heading">
+        <h2 id="waitlist-heading" className="text-xl">
+          {entry.status === 'offered' ? 'Doughnuts are set aside for you' : 'You’re on the waitlist'}
+        </h2>
+        <p role="status" className="text-lg font-extrabold">
+          {entry.status === 'offered'
+            ? `We have set aside ${formatPieces(entry.rings, entry.holes)} for you${entry.offerExpiresAt ? ` until ${formatDateTime(entry.offerExpiresAt, day.timeZone)}` : ''}: use the link in your e-mail.`
+            : `You’re on the list (number ${entry.position ?? '–'}, for ${formatPieces(entry.rings, entry.holes)}).`}
+        </p>
+        {message && <p className="text-sage-700">{message}</p>}
+        <p className="text-muted">If doughnuts free up, we e-mail the next person on the list an offer to claim them. Nothing is charged unless you claim and pay.</p>
+        <div className="flex flex-wrap gap-2">
+          {entry.status === 'waiting' && (
+            <button type="button" className="btn btn-quiet btn-small" onClick={() => { setMessage(null); setEditing(true); }}>
+              Change how many
+            </button>
+          )}
+          <button
+            type="button"
+            className="btn btn-quiet btn-small"
+            disabled={leave.isPending}
+            onClick={() => leave.mutate(entry.id, { onSuccess: () => setMessage(null), onError: (error) => setMessage(errorMessage(error)) })}
+          >
+            Leave the waitlist
+          </button>
+        </div>
+      </section>
+    );
+  }
+  return (
+    <JoinForm
+      day={day}
+      current={entry ? { rings: entry.rings, holes: entry.holes } : undefined}
+      onDone={(changed) => {
+        setEditing(false);
+        setMessage(changed ? 'Updated. We have e-mailed you the change.' : 'We have e-mailed you a confirmation.');
+      }}
+    />
+  );
+}
+
+interface JoinFormProps {
+  day: BakeDayView;
+  /** The place being changed, when the customer is already on the list. */
+  current?: { rings: number; holes: number };
+  onDone: (changed: boolean) => void;
+}
+
+function JoinForm({ day, current, onDone }: JoinFormProps) {
   const join = useJoinWaitlist(day.id);
   const [formProblem, setFormProblem] = useState<string | null>(null);
+  const ringsOut = day.remaining.rings <= 0;
   const form = useForm<WaitlistValues>({
     resolver: zodResolver(waitlistSchema),
-    defaultValues: { rings: day.capacity.rings > 0 ? 6 : 0, holes: 0 },
+    defaultValues: current ?? { rings: ringsOut && day.capacity.rings > 0 ? 6 : 0, holes: ringsOut ? 0 : 12 },
   });
   const { errors } = form.formState;
   const sellsHoles = day.capacity.holes > 0;
@@ -34,6 +99,7 @@ export function WaitlistForm({ day }: { day: BakeDayView }) {
   const submit = form.handleSubmit((values) => {
     setFormProblem(null);
     join.mutate(values, {
+      onSuccess: () => onDone(Boolean(current)),
       onError: (error) => {
         if (isApiError(error) && error.status === 401) {
           goToSignIn();
@@ -44,20 +110,11 @@ export function WaitlistForm({ day }: { day: BakeDayView }) {
     });
   });
 
-  if (join.isSuccess) {
-    return (
-      <div role="status" className="notice notice-ok">
-        <p className="font-extrabold">You are number {join.data.position} on the waitlist.</p>
-        <p>If boxes free up, we e-mail you an offer. It is first come, first served, so act on it soon.</p>
-      </div>
-    );
-  }
-
   return (
     <form onSubmit={submit} noValidate className="card flex flex-col gap-4" aria-labelledby="waitlist-heading">
       <div>
         <h2 id="waitlist-heading" className="text-xl">
-          Join the waitlist
+          {current ? 'Change your waitlist place' : 'Join the waitlist'}
         </h2>
         <p className="text-muted">
           When an order is cancelled or a hold lapses, the freed doughnuts are offered to the waitlist by e-mail, in
@@ -97,7 +154,7 @@ export function WaitlistForm({ day }: { day: BakeDayView }) {
       )}
       <button type="submit" className="btn btn-primary self-start" disabled={join.isPending}>
         {join.isPending && <span className="spinner" aria-hidden="true" />}
-        Join the waitlist
+        {current ? 'Save the change' : 'Join the waitlist'}
       </button>
     </form>
   );

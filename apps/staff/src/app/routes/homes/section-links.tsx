@@ -1,9 +1,10 @@
 import { Link } from 'react-router-dom';
 import { sections } from '../../../config/sections';
+import { isBuilt } from '../section-route';
 
 /** Cards leading to the given sections, with what each is for. */
 export function SectionLinks({ paths, label }: { paths: readonly string[]; label: string }) {
-  const shown = paths.flatMap((path) => sections.filter((section) => section.path === path));
+  const shown = paths.flatMap((path) => sections.filter((section) => section.path === path && isBuilt(path)));
   return (
     <nav aria-label={label}>
       <ul className="grid grid-cols-2 gap-3 lg:grid-cols-4">

@@ -47,6 +47,21 @@ export function OrderCard({ order, onRefund }: OrderCardProps) {
           ))}
         </ul>
       )}
+      <details className="border-t border-line pt-2 text-sm">
+        <summary className="cursor-pointer font-semibold">What the {formatCents(order.totalCents)} is made of</summary>
+        <dl className="mt-1 grid grid-cols-[1fr_auto] gap-x-3" data-testid="price-lines">
+          {order.priceLines.map((line, index) => (
+            <div key={index} className="contents" data-price-line={line.kind} data-cents={line.cents}>
+              <dt className={line.kind === 'box' ? 'font-semibold' : 'pl-3 text-muted'}>{line.label}</dt>
+              <dd className="text-right tabular-nums">{formatCents(line.cents)}</dd>
+            </div>
+          ))}
+          <div className="contents" data-price-total={order.totalCents}>
+            <dt className="border-t border-line font-extrabold">Total</dt>
+            <dd className="border-t border-line text-right font-extrabold tabular-nums">{formatCents(order.totalCents)}</dd>
+          </div>
+        </dl>
+      </details>
       {onRefund && left > 0 && (
         <button type="button" className="btn btn-quiet btn-small mt-auto self-start" onClick={() => onRefund(order)}>
           Refund<span className="sr-only"> {order.customer.name}’s order</span>

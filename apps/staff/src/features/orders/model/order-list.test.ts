@@ -18,6 +18,7 @@ function order(id: string, over: Partial<StaffOrderView> = {}): StaffOrderView {
     rings: 12,
     holes: 0,
     boxes: [],
+    priceLines: [],
     ...over,
   };
 }

@@ -1,0 +1,237 @@
+import { mkdirSync, readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import pg from 'pg';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { chooseAccount, openBrowser } from '../support/browser.js';
+
+/**
+ * Every screen below is checked with axe-core (Deque's rules engine) for
+ * WCAG 2.0/2.1 A and AA, and photographed at a phone and a desktop width
+ * into test-results/screens/ (git-ignored) so a person can look at them
+ * after any change. To add a screen, add one line to `screens`.
+ */
+
+const { appUrl } = inject('stack');
+// evaluated through the browser's DevTools protocol, which the apps' Content-Security-Policy doesn't block
+const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
+const shotsDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../test-results/screens');
+const widths = { phone: { width: 390, height: 844 }, desktop: { width: 1280, height: 900 } } as const;
+
+type Who = 'customer' | 'baker' | 'owner';
+interface Fixture {
+  openDayId: string;
+  soldOutDayId: string;
+  paidOrderId: string;
+}
+interface Screen {
+  name: string;
+  who: Who;
+  /** The page's address (shop paths from /, staff paths from /staff/). */
+  path: (f: Fixture) => string;
+  /** What shows once the page is ready. */
+  ready: RegExp;
+  /** Steps after loading, before the check (for screens reached by using a page). */
+  then?: (page: Page) => Promise<void>;
+}
+
+export const screens: Screen[] = [
+  { name: 'shop-home', who: 'customer', path: () => '/', ready: /upcoming bake days/i },
+  { name: 'box-builder', who: 'customer', path: (f) => `/days/${f.openDayId}`, ready: /choose a pickup window/i },
+  { name: 'order-review', who: 'customer', path: (f) => `/days/${f.openDayId}`, ready: /choose a pickup window|what you pay/i, then: fillAndReview },
+  { name: 'order-page', who: 'customer', path: (f) => `/orders/${f.paidOrderId}`, ready: /your pickup code/i },
+  { name: 'my-orders', who: 'customer', path: () => '/orders', ready: /my orders|your orders/i },
+  { name: 'waitlist', who: 'customer', path: (f) => `/days/${f.soldOutDayId}`, ready: /waitlist/i },
+  { name: 'formula-editor', who: 'baker', path: () => '/staff/formula', ready: /formula/i },
+  { name: 'staff-order-list', who: 'owner', path: (f) => `/staff/bake-days/${f.openDayId}`, ready: /^orders for /i },
+];
+
+async function fillAndReview(page: Page) {
+  // the half-built box is kept while the customer moves around: a second visit opens on the review
+  if (await page.getByRole('heading', { name: /what you pay/i }).isVisible()) return;
+  await page.getByRole('group', { name: /choose a pickup window/i }).getByRole('radio').first().check();
+  await page.getByRole('button', { name: /a half dozen/i }).click();
+  const select = page.getByLabel(/fill the other \d+ with/i);
+  await select.selectOption({ index: 1 });
+  await page.getByRole('button', { name: /^fill$/i }).click();
+  await page.getByRole('button', { name: /review order/i }).click();
+  await page.getByRole('heading', { name: /what you pay/i }).waitFor();
+}
+
+interface AxeResult {
+  violations: Array<{ id: string; impact: string | null; help: string; nodes: Array<{ target: unknown[] }> }>;
+}
+
+/** axe-core injected into the page; serious and critical WCAG 2.1 A/AA violations, as readable lines. */
+async function axeProblems(page: Page): Promise<string[]> {
+  await page.evaluate(axeSource);
+  const result = (await page.evaluate(() =>
+    (window as unknown as { axe: { run(ctx: unknown, opts: unknown): Promise<unknown> } }).axe.run(document, {
+      runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
+    }),
+  )) as AxeResult;
+  return result.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => JSON.stringify(n.target)).join(', ')}`);
+}
+
+/** Presses Tab until `target` has the focus (keyboard only), checking that the focus can be seen. */
+async function tabTo(page: Page, target: ReturnType<Page['getByRole']>, maxTabs = 120) {
+  for (let i = 0; i < maxTabs; i += 1) {
+    if (await target.evaluate((el) => el === document.activeElement).catch(() => false)) {
+      // the ring may sit on the control or on the label or box that wraps it
+      const visible = await target.evaluate((el) =>
+        [el, el.closest('label'), el.parentElement].some((node) => {
+          if (!node) return false;
+          const style = getComputedStyle(node);
+          return (style.outlineStyle !== 'none' && parseFloat(style.outlineWidth) > 0) || style.boxShadow !== 'none';
+        }),
+      );
+      expect(visible, 'the focused control shows a focus ring').toBe(true);
+      return;
+    }
+    await page.keyboard.press('Tab');
+  }
+  throw new Error(`Tab never reached ${target.toString()}`);
+}
+
+let browser: Awaited<ReturnType<typeof openBrowser>>;
+const pages = new Map<Who, Page>();
+let fixture: Fixture;
+let db: pg.Client;
+let restoreHoles: number | null = null;
+
+async function signedIn(who: Who): Promise<Page> {
+  const known = pages.get(who);
+  if (known) return known;
+  const { page } = await browser.fresh();
+  await page.goto(who === 'customer' ? `${appUrl}/` : `${appUrl}/staff/`);
+  const signIn = who === 'customer' ? /^sign in$/i : /sign in/i;
+  await page.getByRole('link', { name: signIn }).or(page.getByRole('button', { name: signIn })).first().click();
+  await chooseAccount(page, who === 'customer' ? 'screens.customer@example.test' : `${who}@fryline.test`);
+  await page.waitForLoadState('networkidle');
+  pages.set(who, page);
+  return page;
+}
+
+beforeAll(async () => {
+  browser = await openBrowser();
+  mkdirSync(shotsDir, { recursive: true });
+  const page = await signedIn('customer');
+  const days = (await (await page.request.get(`${appUrl}/api/bake-days`)).json()) as Array<{ id: string; status: string; pickupWindows: Array<{ id: string }>; menu: Array<{ id: string; kind: string }> }>;
+  const open = days.filter((d) => d.status === 'open');
+  const day = open[0]!;
+  // a paid order of our own, paid on the payments stand-in's page
+  const ring = day.menu.find((m) => m.kind === 'ring')!;
+  const { token } = (await (await page.request.get(`${appUrl}/api/csrf`)).json()) as { token: string };
+  const created = (await (
+    await page.request.post(`${appUrl}/api/orders`, {
+      headers: { 'x-csrf-token': token },
+      data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0]!.id, boxes: [{ size: 'half-dozen', items: [{ menuItemId: ring.id, quantity: 6 }] }] },
+    })
+  ).json()) as { id: string; checkoutUrl: string };
+  await page.goto(created.checkoutUrl);
+  await page.getByLabel(/card number/i).fill('4242 4242 4242 4242');
+  await page.getByLabel(/expiry/i).fill('12/34');
+  await page.getByLabel(/security code/i).fill('123');
+  await page.getByRole('button', { name: /^pay/i }).click();
+  await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+  // the last open day's holes sold out, so its page shows the waitlist (put back afterwards)
+  const soldOut = open.at(-1)!;
+  db = new pg.Client({ connectionString: process.env.TEST_E2E_DATABASE_URL });
+  await db.connect();
+  const before = await db.query<{ holes_remaining: number }>('SELECT holes_remaining FROM bake_days WHERE id = $1', [soldOut.id]);
+  restoreHoles = before.rows[0]!.holes_remaining;
+  await db.query('UPDATE bake_days SET holes_remaining = 0 WHERE id = $1', [soldOut.id]);
+  fixture = { openDayId: day.id, soldOutDayId: soldOut.id, paidOrderId: created.id };
+});
+
+afterAll(async () => {
+  if (db) {
+    if (restoreHoles !== null) await db.query('UPDATE bake_days SET holes_remaining = $1 WHERE id = $2', [restoreHoles, fixture.soldOutDayId]);
+    await db.end();
+  }
+  await browser?.close();
+});
+
+describe('every screen: no serious or critical WCAG 2.1 AA violation (axe-core), photographed at phone and desktop widths', () => {
+  for (const screen of screens) {
+    it(screen.name, async () => {
+      const page = await signedIn(screen.who);
+      for (const [width, viewport] of Object.entries(widths)) {
+        await page.setViewportSize(viewport);
+        await page.goto(`${appUrl}${screen.path(fixture)}`);
+        await page.getByRole('heading', { name: screen.ready }).or(page.getByRole('group', { name: screen.ready })).first().waitFor();
+        if (screen.then) await screen.then(page);
+        await page.waitForLoadState('networkidle');
+        await page.screenshot({ path: path.join(shotsDir, `${screen.name}-${width}.png`), fullPage: true });
+        expect(await axeProblems(page), `${screen.name} at ${width} width`).toEqual([]);
+        // wherever a bill is shown, its lines add up to its total
+        for (const bill of await page.getByTestId('price-lines').all()) {
+          const cents = await bill.locator('[data-price-line]').evaluateAll((rows) => rows.map((r) => Number(r.getAttribute('data-cents'))));
+          const total = Number(await bill.locator('[data-price-total]').getAttribute('data-price-total'));
+          expect(cents.reduce((a, b) => a + b, 0), `${screen.name}: bill lines sum to the total`).toBe(total);
+        }
+      }
+    });
+  }
+});
+
+describe('keyboard only', () => {
+  it('builds and pays for a box with the keyboard alone, the focus always visible', async () => {
+    const page = await signedIn('customer');
+    await page.setViewportSize(widths.desktop);
+    await page.goto(`${appUrl}/days/${fixture.openDayId}`);
+    // another day than the paid order's would need its own hold: use the sold-out-holes day, which still sells rings
+    await page.goto(`${appUrl}/days/${fixture.soldOutDayId}`);
+    const firstWindow = page.getByRole('group', { name: /choose a pickup window/i }).getByRole('radio').first();
+    await tabTo(page, firstWindow);
+    await page.keyboard.press('Space');
+    await tabTo(page, page.getByRole('button', { name: /a half dozen/i }));
+    await page.keyboard.press('Enter');
+    const fill = page.getByLabel(/fill the other 6 with/i);
+    await tabTo(page, fill);
+    await page.keyboard.press('ArrowDown');
+    await tabTo(page, page.getByRole('button', { name: /^fill$/i }));
+    await page.keyboard.press('Enter');
+    await page.getByText(/6 of 6/).first().waitFor();
+    await tabTo(page, page.getByRole('button', { name: /review order/i }));
+    await page.keyboard.press('Enter');
+    await tabTo(page, page.getByRole('checkbox', { name: /i have read the allergens/i }));
+    await page.keyboard.press('Space');
+    await tabTo(page, page.getByRole('button', { name: /^pay \$/i }));
+    await page.keyboard.press('Enter');
+    // the payments stand-in's page, by keyboard too
+    await page.getByRole('heading', { name: /^pay \$/i }).waitFor();
+    await tabTo(page, page.getByLabel(/card number/i));
+    await page.keyboard.type('4242 4242 4242 4242');
+    await tabTo(page, page.getByLabel(/expiry/i));
+    await page.keyboard.type('12/34');
+    await tabTo(page, page.getByLabel(/security code/i));
+    await page.keyboard.type('123');
+    await tabTo(page, page.getByRole('button', { name: /^pay/i }));
+    await page.keyboard.press('Enter');
+    await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+  });
+
+  it('finds and refunds an order with the keyboard alone', async () => {
+    const page = await signedIn('owner');
+    await page.setViewportSize(widths.desktop);
+    await page.goto(`${appUrl}/staff/bake-days/${fixture.openDayId}`);
+    await page.getByRole('heading', { name: /^orders for /i }).waitFor();
+    await tabTo(page, page.getByRole('searchbox', { name: /find an order/i }));
+    await page.keyboard.type('screens.customer');
+    const order = page.getByRole('article').filter({ hasText: /screens\.customer/i }).first();
+    await order.waitFor();
+    await tabTo(page, order.getByRole('button', { name: /^refund/i }));
+    await page.keyboard.press('Enter');
+    const dialog = page.getByRole('dialog');
+    await tabTo(page, dialog.getByLabel(/reason/i));
+    await page.keyboard.type('Keyboard check: whole order');
+    await tabTo(page, dialog.getByRole('button', { name: /^refund \$/i }));
+    await page.keyboard.press('Enter');
+    await page.getByText(/the order is now refunded/i).waitFor();
+  });
+});
