@@ -19,6 +19,10 @@ import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
 import { productionRouter } from './routes/production.js';
 import { setupRouter } from './routes/setup.js';
+import { menuItemsRouter } from './routes/menu-items.js';
+import { shopSettingsRouter } from './routes/shop-settings.js';
+import { auditLogRouter } from './routes/audit-log.js';
+import { staffInvitationsRouter } from './routes/staff-invitations.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -108,6 +112,10 @@ export function createApp(config: Config) {
   app.use(staffOrdersRouter);
   app.use(productionRouter);
   app.use(setupRouter);
+  app.use(menuItemsRouter);
+  app.use(shopSettingsRouter);
+  app.use(auditLogRouter);
+  app.use(staffInvitationsRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { MenuPhotoView } from './menu.js';
 
 export const boxSizes = ['dozen', 'half-dozen', 'holes'] as const;
 export const boxSizeSchema = z.enum(boxSizes);
@@ -42,6 +43,8 @@ export interface MenuItemView {
   kind: PieceKind;
   surchargeCents: number;
   allergens: Allergen[];
+  /** The item's photo, or null/absent when it has none. */
+  photo?: MenuPhotoView | null;
 }
 
 export interface BakeDayView {

@@ -5,3 +5,6 @@ export * from './orders.js';
 export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
+export * from './menu.js';
+export * from './shop-settings.js';
+export * from './audit-log.js';

@@ -62,14 +62,3 @@ export interface StaffMemberView {
   /** False until they have signed in once with this (verified) address. */
   signedIn: boolean;
 }
-
-export interface MenuItemAdminView {
-  id: string;
-  name: string;
-  flavour: string;
-  glaze: string;
-  kind: 'ring' | 'hole';
-  surchargeCents: number;
-  allergens: string[];
-  active: boolean;
-}

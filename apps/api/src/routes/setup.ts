@@ -3,14 +3,10 @@ import { z } from 'zod';
 import { changeRoleSchema, createBakeDaySchema, staffMemberInputSchema } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { addStaff, changeRole, createBakeDay, listMenuItems, listStaff, publishBakeDay } from '../services/setup.js';
+import { addStaff, changeRole, createBakeDay, listStaff, publishBakeDay } from '../services/setup.js';
 import { listDrafts } from '../services/bake-days.js';
 
 export const setupRouter = Router();
-
-setupRouter.get('/api/staff/menu-items', requireRole('baker'), async (_req, res) => {
-  res.json(await listMenuItems());
-});
 
 setupRouter.post('/api/staff/bake-days', requireRole('owner'), validate('body', createBakeDaySchema), async (req, res) => {
   res.status(201).json(await createBakeDay(currentUser(req), valid(res, 'body'), new Date()));

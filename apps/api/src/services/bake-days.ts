@@ -4,6 +4,7 @@ import type { BakeDayStatus, BakeDayView, BoxSize, Allergen } from '@fryline/sch
 import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../db/models/index.js';
 import { notFound } from '../lib/app-error.js';
 import { shopSettings } from './settings.js';
+import { photoViewsFor } from './menu/photo-view.js';
 
 const boxLabels: Record<BoxSize, string> = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' };
 const boxOrder: BoxSize[] = ['dozen', 'half-dozen', 'holes'];
@@ -27,6 +28,7 @@ export const bakeDayInclude = [
 
 export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
   const settings = await shopSettings();
+  const photos = await photoViewsFor(day.menuItems ?? []);
   return {
     id: day.id,
     date: day.date,
@@ -56,6 +58,7 @@ export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
         kind: m.kind,
         surchargeCents: m.surchargeCents,
         allergens: m.allergens as Allergen[],
+        photo: (m.photoId && photos.get(m.photoId)) || null,
       })),
     tax: settings.tax,
   };

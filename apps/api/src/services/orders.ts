@@ -8,6 +8,7 @@ import { getBakeDay } from './bake-days.js';
 import { checkOrder, type CheckedOrder } from './order-rules.js';
 import { releaseOrder, takeCapacity, takeWindowSlot, giveBackWindowSlot } from './capacity.js';
 import { context } from './context.js';
+import { shopSettings } from './settings.js';
 import { audit } from './audit.js';
 import { queueCancellation } from './order-mails.js';
 import { claimOffer, offerFreedCapacity } from './waitlist.js';
@@ -99,7 +100,7 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     throw new AppError('closed', day.status === 'upcoming' ? 'Orders for this bake day are not open yet' : 'Orders for this bake day are closed', 409);
   }
   const checked = checkOrder(day, input);
-  const holdExpiresAt = new Date(now.getTime() + context().config.HOLD_MINUTES * 60_000);
+  const holdExpiresAt = new Date(now.getTime() + (await shopSettings()).holdMinutes * 60_000);
 
   let order: Order;
   try {

@@ -1,19 +1,15 @@
 import { DateTime } from 'luxon';
 import { Op } from 'sequelize';
-import type { BakeDayView, CreateBakeDayInput, Me, MenuItemAdminView, StaffMemberInput, StaffMemberView } from '@fryline/schemas';
+import type { BakeDayView, CreateBakeDayInput, Me, StaffMemberInput, StaffMemberView } from '@fryline/schemas';
 import { database } from '../db/sequelize.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow, User } from '../db/models/index.js';
 import { AppError, notFound } from '../lib/app-error.js';
 import { audit } from './audit.js';
+import { queueStaffInvitation } from './staff/invitations.js';
 import { findBakeDay, toView } from './bake-days.js';
 import { currentPlanningBasis, cutoffFromSchedule, equipmentCapacity } from './production.js';
 
 const invalidField = (field: string, message: string) => new AppError('invalid', `${field}: ${message}`, 400, { fields: { [field]: message } });
-
-export async function listMenuItems(): Promise<MenuItemAdminView[]> {
-  const items = await MenuItem.findAll({ order: [['sortOrder', 'ASC'], ['name', 'ASC']] });
-  return items.map((m) => ({ id: m.id, name: m.name, flavour: m.flavour, glaze: m.glaze, kind: m.kind, surchargeCents: m.surchargeCents, allergens: m.allergens, active: m.active }));
-}
 
 /**
  * The owner announces a bake day: pickup windows as local clock times in the
@@ -90,16 +86,20 @@ export async function listStaff(): Promise<StaffMemberView[]> {
 }
 
 /**
- * Gives an address a staff role. An existing account keeps its identity; a
- * new address is linked to whoever first signs in with it, verified.
+ * Gives an address a staff role and e-mails them an invitation with the
+ * sign-in link (through the outbox). An existing account keeps its identity;
+ * a new address is linked to whoever first signs in with it, verified.
  */
 export async function addStaff(owner: Me, input: StaffMemberInput): Promise<StaffMemberView> {
   return database().transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email: { [Op.iLike]: input.email } }, transaction, lock: transaction.LOCK.UPDATE });
+    const roleBefore = existing?.role;
     const user = existing
       ? await existing.update({ role: input.role, name: existing.name || input.name }, { transaction })
       : await User.create({ email: input.email, name: input.name, role: input.role, googleSub: null, emailVerified: false }, { transaction });
     await audit({ actorId: owner.id, action: 'staff.role', subjectType: 'user', subjectId: user.id, details: { role: input.role } }, transaction);
+    // the invitation goes out when the role is new to them (adding them twice sends it once)
+    if (roleBefore !== input.role) await queueStaffInvitation(owner, user, input.role, transaction);
     return toMember(user);
   });
 }

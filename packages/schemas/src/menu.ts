@@ -1,0 +1,94 @@
+import { z } from 'zod';
+import { allergenSchema, pieceKindSchema, type PieceKind } from './bake-days.js';
+
+// The owner's menu: what can go in a box. Archived items stay in the
+// database so past orders keep pointing at them, but are not offered again.
+
+/** Largest photo upload accepted, in bytes (8 MB). */
+export const MENU_PHOTO_MAX_BYTES = 8 * 1024 * 1024;
+/** The widths each photo is stored at, in pixels. */
+export const MENU_PHOTO_WIDTHS = [320, 640, 1280] as const;
+/** The multipart field that carries the photo. */
+export const MENU_PHOTO_FIELD = 'photo';
+
+const text = (label: string, min: number, max: number) =>
+  z.string({ error: `${label} is missing` }).trim().min(min, min === 1 ? `Give the ${label.toLowerCase()}` : `${label} needs at least ${min} characters`).max(max, `${label} is at most ${max} characters`);
+
+const menuItemFields = {
+  name: text('Name', 2, 80),
+  kind: pieceKindSchema,
+  flavour: text('Flavour', 1, 60),
+  /** The glaze as customers read it. */
+  glaze: z.string().trim().max(60, 'Glaze is at most 60 characters').default(''),
+  /** The glaze recipe in the production settings that this item takes; null for none. */
+  glazeRecipeId: z.string().trim().min(1).max(40).nullable().default(null),
+  allergens: z
+    .array(allergenSchema, { error: 'Choose from the listed allergens' })
+    .max(9)
+    .refine((list) => new Set(list).size === list.length, 'Each allergen once')
+    .default([]),
+  description: z.string().trim().max(280, 'Keep the description under 280 characters').default(''),
+  surchargeCents: z
+    .number({ error: 'Extra charge must be an amount' })
+    .int('Extra charge must be whole cents')
+    .min(0, "Extra charge can't be negative")
+    .max(5000, 'Extra charge is at most $50.00'),
+};
+
+export const menuItemInputSchema = z.strictObject(menuItemFields);
+export type MenuItemInput = z.infer<typeof menuItemInputSchema>;
+
+/** An edit sends only what changed. */
+export const menuItemPatchSchema = z
+  .strictObject({
+    name: menuItemFields.name,
+    kind: pieceKindSchema,
+    flavour: menuItemFields.flavour,
+    glaze: z.string().trim().max(60, 'Glaze is at most 60 characters'),
+    glazeRecipeId: z.string().trim().min(1).max(40).nullable(),
+    allergens: menuItemFields.allergens.unwrap(),
+    description: z.string().trim().max(280, 'Keep the description under 280 characters'),
+    surchargeCents: menuItemFields.surchargeCents,
+  })
+  .partial()
+  .refine((patch) => Object.keys(patch).length > 0, 'Nothing to change');
+export type MenuItemPatch = z.infer<typeof menuItemPatchSchema>;
+
+/** One stored size of a photo. */
+export interface MenuPhotoFile {
+  width: number;
+  height: number;
+  url: string;
+}
+
+/** A menu photo as an <img> needs it: the sizes for srcset, and the shape so the layout keeps its place. */
+export interface MenuPhotoView {
+  id: string;
+  /** Of the largest stored size; the others keep the same shape. */
+  width: number;
+  height: number;
+  /** A middle size, for browsers without srcset. */
+  src: string;
+  srcset: string;
+  /** Every stored file's URL, smallest first. */
+  urls: string[];
+  files: MenuPhotoFile[];
+}
+
+export interface MenuItemAdminView {
+  id: string;
+  name: string;
+  flavour: string;
+  glaze: string;
+  glazeRecipeId?: string | null;
+  kind: PieceKind;
+  surchargeCents: number;
+  allergens: string[];
+  /** False once archived. */
+  active: boolean;
+  description?: string;
+  archivedAt?: string | null;
+  photo?: MenuPhotoView | null;
+  /** How many orders include it (an archived item stays for them). */
+  orderCount?: number;
+}
