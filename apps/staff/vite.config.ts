@@ -1,7 +1,7 @@
 import { defineConfig, loadEnv } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
-import { apiProxy, sideEffectFreeSource, uiAlias } from '../../packages/ui/src/vite-shared.ts';
+import { apiProxy, sideEffectFreeSource } from '@fryline/ui/vite';
 
 // Served by the API under /staff/; the shop has the site root.
 export default defineConfig(({ mode }) => {
@@ -9,7 +9,6 @@ export default defineConfig(({ mode }) => {
   return {
     base: '/staff/',
     plugins: [react(), tailwindcss()],
-    resolve: { alias: uiAlias },
     build: { outDir: 'dist', rolldownOptions: { treeshake: { moduleSideEffects: sideEffectFreeSource } } },
     server: { port: 5174, strictPort: true, proxy },
     preview: { proxy },

@@ -1,11 +1,11 @@
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
 import { DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, type Formula } from '@fryline/production';
-import { cutoffFromSchedule } from '@fryline/api/services/production';
+import { cutoffFromSchedule } from '@fryline/api/services/production/production';
 import {
   database, FormulaVersion, ProductionSettings, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
 } from '@fryline/api/db';
-import { newPickupCode } from '@fryline/api/services/pickup-codes';
+import { newPickupCode } from '@fryline/api/services/orders/pickup-codes';
 
 // A fictional pop-up, invented for the demo: Brindle & Bell Doughnuts sells
 // on Saturdays and Sundays from a stall at the (equally fictional)

@@ -23,7 +23,7 @@ import { menuItemsRouter } from './routes/menu-items.js';
 import { shopSettingsRouter } from './routes/shop-settings.js';
 import { auditLogRouter } from './routes/audit-log.js';
 import { staffInvitationsRouter } from './routes/staff-invitations.js';
-import { setContext } from './services/context.js';
+import { setContext } from './integrations/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 

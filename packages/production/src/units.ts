@@ -56,24 +56,6 @@ export function mmToIn(millimetres: number): number {
 }
 
 /**
- * Dollars (or any currency's major unit) → integer cents, rounded to the
- * nearest cent with halves away from zero. The decimal string is rounded
- * first so that 1.005 stays 101 rather than falling to 100 in binary.
- */
-export function dollarsToCents(amount: number): number {
-  requireFinite('amount', amount);
-  const cents = Number((Math.abs(amount) * 100).toFixed(6));
-  return Math.sign(amount) * Math.round(cents);
-}
-
-/** Integer cents → major units (for display only). */
-export function centsToDollars(cents: number): number {
-  requireFinite('cents', cents);
-  if (!Number.isInteger(cents)) throw new ProductionInputError('cents', `must be a whole number of cents (got ${cents})`);
-  return cents / 100;
-}
-
-/**
  * Rounds a non-integer amount of cents to a whole cent: nearest cent, halves
  * up (away from zero). Used once, at the end of each cost sum.
  */

@@ -1,13 +1,6 @@
 import { z } from 'zod';
+import type { BoxSize, PieceKind } from './boxes.js';
 import type { MenuPhotoView } from './menu.js';
-
-export const boxSizes = ['dozen', 'half-dozen', 'holes'] as const;
-export const boxSizeSchema = z.enum(boxSizes);
-export type BoxSize = z.infer<typeof boxSizeSchema>;
-
-export const pieceKinds = ['ring', 'hole'] as const;
-export const pieceKindSchema = z.enum(pieceKinds);
-export type PieceKind = z.infer<typeof pieceKindSchema>;
 
 export const bakeDayStatuses = ['upcoming', 'open', 'closed', 'done'] as const;
 export type BakeDayStatus = (typeof bakeDayStatuses)[number];

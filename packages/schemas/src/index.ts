@@ -1,5 +1,7 @@
 export * from './roles.js';
 export * from './errors.js';
+export * from './boxes.js';
+export * from './money.js';
 export * from './bake-days.js';
 export * from './orders.js';
 export * from './pricing.js';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { allergenSchema, pieceKindSchema, type PieceKind } from './bake-days.js';
+import { allergenSchema } from './bake-days.js';
+import { pieceKindSchema, type PieceKind } from './boxes.js';
 
 // The owner's menu: what can go in a box. Archived items stay in the
 // database so past orders keep pointing at them, but are not offered again.

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
 
 const quantity = z
   .number({ error: 'Quantity must be a number' })

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
 import { roleSchema } from './roles.js';
 
 // The owner's setup: new bake days and the staff who may sign in.

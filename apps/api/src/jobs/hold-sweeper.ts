@@ -1,9 +1,9 @@
 import { Op } from 'sequelize';
 import { database } from '../db/sequelize.js';
 import { Order } from '../db/models/index.js';
-import { releaseOrder } from '../services/capacity.js';
-import { expireCheckout } from '../services/checkout.js';
-import { lapseOffers, offerFreedCapacity } from '../services/waitlist.js';
+import { releaseOrder } from '../db/queries/capacity.js';
+import { expireCheckout } from '../integrations/checkout.js';
+import { lapseOffers, offerFreedCapacity } from '../services/waitlist/waitlist.js';
 
 /**
  * Expires unpaid holds whose time is up. The checkout session is expired

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { validate, valid } from '../middleware/validate.js';
-import { getBakeDay, listPast, listUpcoming } from '../services/bake-days.js';
+import { getBakeDay, listPast, listUpcoming } from '../services/bake-days/bake-days.js';
 import { requireRole } from '../middleware/auth.js';
 
 export const bakeDaysRouter = Router();

@@ -3,12 +3,12 @@ import { z } from 'zod';
 import { createOrderSchema, moveOrderSchema } from '@fryline/schemas';
 import { currentUser, requireUser } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { cancelOrder, createOrder, getOrder, listOrders, moveOrder, resumeCheckout } from '../services/orders.js';
-import { pickupCalendar } from '../services/calendar.js';
+import { cancelOrder, createOrder, getOrder, listOrders, moveOrder, resumeCheckout } from '../services/orders/orders.js';
+import { pickupCalendar } from '../services/orders/calendar.js';
 import { Order, BakeDay, PickupWindow } from '../db/models/index.js';
 import { notFound } from '../lib/app-error.js';
-import { shopSettings } from '../services/settings.js';
-import { context } from '../services/context.js';
+import { shopSettings } from '../services/shop/settings.js';
+import { context } from '../integrations/context.js';
 
 export const ordersRouter = Router();
 const idParams = z.object({ id: z.uuid('Unknown order') });

@@ -5,7 +5,7 @@ import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
 import {
   equipmentCapacity, getProductionSettings, listFormulaVersions, pinFormula, planForBakeDay, saveFormula, saveProductionSettings, setBakeDayCapacity,
-} from '../services/production.js';
+} from '../services/production/production.js';
 
 export const productionRouter = Router();
 const dayParams = z.object({ id: z.uuid('Unknown bake day') });

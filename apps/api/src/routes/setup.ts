@@ -3,8 +3,8 @@ import { z } from 'zod';
 import { changeRoleSchema, createBakeDaySchema, staffMemberInputSchema } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { addStaff, changeRole, createBakeDay, listStaff, publishBakeDay } from '../services/setup.js';
-import { listDrafts } from '../services/bake-days.js';
+import { addStaff, changeRole, createBakeDay, listStaff, publishBakeDay } from '../services/bake-days/setup.js';
+import { listDrafts } from '../services/bake-days/bake-days.js';
 
 export const setupRouter = Router();
 

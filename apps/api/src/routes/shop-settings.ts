@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { shopSettingsInputSchema, type ShopSettingsInput } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { getShopSettings, publicShop, saveShopSettings } from '../services/shop-settings/shop-settings.js';
+import { getShopSettings, publicShop, saveShopSettings } from '../services/shop/shop-settings.js';
 
 export const shopSettingsRouter = Router();
 

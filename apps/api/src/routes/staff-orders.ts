@@ -3,8 +3,8 @@ import { z } from 'zod';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
 import { refundRequestSchema } from '@fryline/schemas';
-import { refundOrder } from '../services/refunds.js';
-import { listBakeDayOrders } from '../services/staff-orders.js';
+import { refundOrder } from '../services/orders/refunds.js';
+import { listBakeDayOrders } from '../services/orders/staff-orders.js';
 import { AppError } from '../lib/app-error.js';
 
 export const staffOrdersRouter = Router();

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { joinWaitlistSchema } from '@fryline/schemas';
 import { currentUser, requireUser } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
-import { getOffer, joinWaitlist, leaveWaitlist, listMyWaitlist } from '../services/waitlist.js';
+import { getOffer, joinWaitlist, leaveWaitlist, listMyWaitlist } from '../services/waitlist/waitlist.js';
 
 export const waitlistRouter = Router();
 

@@ -1,8 +1,8 @@
 import express, { Router } from 'express';
 import type Stripe from 'stripe';
 import { AppError } from '../lib/app-error.js';
-import { context } from '../services/context.js';
-import { handlePaymentEvent } from '../services/payment-events.js';
+import { context } from '../integrations/context.js';
+import { handlePaymentEvent } from '../services/payments/payment-events.js';
 
 export const webhooksRouter = Router();
 

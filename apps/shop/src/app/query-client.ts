@@ -1,5 +1,5 @@
 import { QueryClient } from '@tanstack/react-query';
-import { shouldRetry } from '../lib/api-client';
+import { shouldRetry } from '@fryline/ui/api-client';
 
 export function createQueryClient(): QueryClient {
   return new QueryClient({

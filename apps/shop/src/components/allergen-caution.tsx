@@ -1,4 +1,4 @@
-import { listWords } from '../lib/format';
+import { listWords } from '@fryline/ui/format';
 import { baseAllergens } from '../config/site';
 
 /** The standing allergen caution: on the front page, and again before paying. */

@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { shouldRetry } from '../lib/api-client';
+import { shouldRetry } from '@fryline/ui/api-client';
 
 function createQueryClient(): QueryClient {
   return new QueryClient({

@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon';
 import type { AuditEntryView, AuditKind, AuditPage, AuditQuery } from '@fryline/schemas';
 import { findAuditPage, findAuditPeople } from '../../db/queries/audit-log.js';
-import { shopSettings } from '../settings.js';
+import { shopSettings } from '../shop/settings.js';
 import { summarize } from './summaries.js';
 
 /** A page of the audit log; the dates are whole days in the shop's time zone. */

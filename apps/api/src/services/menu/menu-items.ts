@@ -4,8 +4,8 @@ import { database } from '../../db/sequelize.js';
 import { MenuItem } from '../../db/models/index.js';
 import { deletePhoto, findPhotos, insertPhoto } from '../../db/queries/menu-photos.js';
 import { AppError, notFound } from '../../lib/app-error.js';
-import { audit } from '../audit.js';
-import { getProductionSettings } from '../production.js';
+import { audit } from '../audit/audit.js';
+import { getProductionSettings } from '../production/production.js';
 import { processPhoto } from './photo-processing.js';
 import { photoViewsFor, toPhotoView } from './photo-view.js';
 

@@ -4,11 +4,11 @@ import type { Me, Role } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
-import { enqueueMail } from '../outbox.js';
-import { renderMail } from '../mail-templates.js';
-import { shopSettings } from '../settings.js';
-import { context } from '../context.js';
-import { audit } from '../audit.js';
+import { enqueueMail } from '../mail/outbox.js';
+import { renderMail } from '../mail/templates.js';
+import { shopSettings } from '../shop/settings.js';
+import { context } from '../../integrations/context.js';
+import { audit } from '../audit/audit.js';
 
 const roleWork: Record<Exclude<Role, 'customer'>, string> = {
   counter: 'run the counter on bake days: find orders, hand them over and sell what is left',

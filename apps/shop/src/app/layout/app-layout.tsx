@@ -3,8 +3,8 @@ import { Outlet, useLocation } from 'react-router-dom';
 import { onPageChange } from '@fryline/ui/page-change';
 import { SiteHeader } from './site-header';
 import { SiteFooter } from './site-footer';
-import { PageErrorBoundary } from './page-error-boundary';
-import { LoadingState } from '../../components/status';
+import { site } from '../../config/site';
+import { PageErrorBoundary, LoadingState } from '@fryline/ui';
 
 export function AppLayout() {
   const { pathname } = useLocation();
@@ -16,7 +16,7 @@ export function AppLayout() {
       </a>
       <SiteHeader />
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-5xl flex-1 px-4 py-6 sm:py-10">
-        <PageErrorBoundary key={pathname}>
+        <PageErrorBoundary key={pathname} appName={site.name}>
           <Suspense fallback={<LoadingState />}>
             <Outlet />
           </Suspense>

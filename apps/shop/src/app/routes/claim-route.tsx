@@ -6,7 +6,7 @@ import { bakeDayQueries } from '../../features/bake-days/api/bake-day-queries';
 import { BoxBuilder } from '../../features/box-builder/components/box-builder';
 import { ExistingHold } from '../../features/orders/components/existing-hold';
 import { useSignedIn } from '../../features/auth/api/me-queries';
-import { ErrorState, LoadingState } from '../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 
 /** The offer's bake day, and a box builder limited to what was offered. */
 function ClaimWithDay({ offer, token }: { offer: ClaimOfferView; token: string }) {

@@ -2,8 +2,8 @@ import { useEffect } from 'react';
 import { Link, NavLink, useLocation } from 'react-router-dom';
 import { hasRole } from '@fryline/schemas';
 import { roleNames, sections } from '../../config/sections';
-import { useStaffMember } from '../../features/session/components/staff-member';
-import { SignOutButton } from '../../features/session/components/sign-out-button';
+import { useStaffMember } from '../session/staff-member';
+import { SignOutButton } from '../session/sign-out-button';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `block whitespace-nowrap rounded-full px-2.5 py-1.5 text-[0.95rem] font-extrabold no-underline sm:px-3 sm:text-base ${

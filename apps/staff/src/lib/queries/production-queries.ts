@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { FormulaInput, PlanMeta } from '@fryline/schemas';
 import type { BakePlan } from '@fryline/production';
-import { api } from '../api-client';
+import { api } from '@fryline/ui/api-client';
 
 /** First element of every production query key: plans, formulas, settings, capacity. */
 export const productionRoot = ['production'] as const;

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { Capacity } from '@fryline/production';
 import type { ProductionSettingsInput } from '@fryline/schemas';
-import { api } from '../api-client';
+import { api } from '@fryline/ui/api-client';
 import { productionRoot } from './production-queries';
 
 /** The kitchen's settings as stored; updatedAt is null until the owner first saves. */

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 export function useSignOut() {
   const queryClient = useQueryClient();

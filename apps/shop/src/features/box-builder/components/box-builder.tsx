@@ -14,7 +14,8 @@ import {
   type PieceLimits,
 } from '../model/draft';
 import { loadDraft, saveDraft } from '../model/draft-storage';
-import { formatCents, plural } from '../../../lib/format';
+import { formatCents } from '@fryline/schemas';
+import { plural } from '@fryline/ui/format';
 import { PickupWindowOptions } from '../../../components/pickup-window-options';
 import { BoxEditor } from './box-editor';
 import { OrderReview } from './order-review';

@@ -9,7 +9,7 @@ import {
   type OrderPrice,
   type PieceKind,
 } from '@fryline/schemas';
-import { plural } from '../../../lib/format';
+import { plural } from '@fryline/ui/format';
 
 /** One box being filled: how many of each menu item it holds. */
 export interface DraftBox {

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { OrderDetail } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 /** One order as its owner sees it: once paid, with the pickup QR code and a calendar file. */

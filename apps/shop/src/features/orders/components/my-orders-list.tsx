@@ -1,10 +1,11 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { orderQueries } from '../api/order-queries';
-import { isApiError } from '../../../lib/api-client';
-import { formatCents, formatClockRange, formatDate } from '../../../lib/format';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatCents } from '@fryline/schemas';
+import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '../../../components/status';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { boxNames, OrderStatusBadge } from './order-status';
 
 /** The signed-in customer's orders, newest first. */

@@ -1,5 +1,6 @@
 import type { OrderView } from '@fryline/schemas';
-import { formatCents, listWords } from '../../../lib/format';
+import { formatCents } from '@fryline/schemas';
+import { listWords } from '@fryline/ui/format';
 import { allergensOf, AllergenList } from '../../../components/allergen-list';
 import { boxNames } from './order-status';
 

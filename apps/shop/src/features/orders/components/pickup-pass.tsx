@@ -1,4 +1,4 @@
-import { formatClockRange, formatDate } from '../../../lib/format';
+import { formatClockRange, formatDate } from '@fryline/ui/format';
 import type { OrderDetailView } from '../api/order-queries';
 
 /** The paid order's pass: the pickup code, its QR image, and where and when to come. */

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { JoinWaitlistInput } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 export type { JoinWaitlistInput } from '@fryline/schemas';

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { WaitlistEntryView, WaitlistOfferView as ClaimOfferView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 export type { WaitlistEntryView, WaitlistOfferView as ClaimOfferView } from '@fryline/schemas';

@@ -3,10 +3,10 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import type { BakeDayView } from '@fryline/schemas';
 import { waitlistQueries, type ClaimOfferView } from '../api/waitlist-queries';
-import { isApiError } from '../../../lib/api-client';
-import { formatDate, formatDateTime, formatPieces } from '../../../lib/format';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatDate, formatDateTime, formatPieces } from '@fryline/ui/format';
 import { currentPath, signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '../../../components/status';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { PageTitle } from '../../../components/page-title';
 
 interface ClaimOfferProps {

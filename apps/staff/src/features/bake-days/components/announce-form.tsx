@@ -3,7 +3,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { CreateBakeDayInput, MenuItemAdminView } from '@fryline/schemas';
-import { isApiError } from '../../../lib/api-client';
+import { isApiError } from '@fryline/ui/api-client';
 import { useCreateBakeDay } from '../api/use-create-bake-day';
 import { announcedFrom } from '../model/announced';
 import {

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { FieldShell, fieldAria } from '../../../components/field-shell';
+import { FieldShell, fieldAria } from '@fryline/ui';
 
 /** What the input inside a field needs: its id, its look, and pointers to its help line and error. */
 export interface FieldInputProps {

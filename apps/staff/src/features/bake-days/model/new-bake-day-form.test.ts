@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { BakeDayView, MenuItemAdminView } from '@fryline/schemas';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError } from '@fryline/ui/api-client';
 import {
   clockIn,
   formPath,

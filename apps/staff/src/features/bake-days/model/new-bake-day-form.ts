@@ -13,7 +13,7 @@ import {
   type CreateBakeDayInput,
   type MenuItemAdminView,
 } from '@fryline/schemas';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { centsToDollars, dollarsToCents, standardPieces } from './box-prices';
 
 /** One pickup window as typed: local clock times, and an order cap ('' for none). */

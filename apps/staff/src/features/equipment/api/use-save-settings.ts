@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProductionSettingsInput } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { productionRoot } from '../../../lib/queries/production-queries';
 import type { ProductionSettingsView } from '../../../lib/queries/settings-queries';
 

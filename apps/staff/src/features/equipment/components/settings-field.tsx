@@ -3,7 +3,7 @@ import { get, useController, type UseFormReturn } from 'react-hook-form';
 import type { ProductionSettingsInput } from '@fryline/schemas';
 import { tempFromUnit, tempSymbol, tempToUnit, trimmed, type TempUnit } from '../../../lib/units';
 import type { SettingsField as FieldDef, SettingsPath } from '../model/settings-fields';
-import { FieldShell, fieldAria } from '../../../components/field-shell';
+import { FieldShell, fieldAria } from '@fryline/ui';
 
 export type SettingsForm = UseFormReturn<ProductionSettingsInput>;
 

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { productionSettingsSchema, type ProductionSettingsInput } from '@fryline/schemas';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime } from '@fryline/ui/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
 import type { Capacity } from '@fryline/production';

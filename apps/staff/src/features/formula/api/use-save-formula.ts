@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import type { saveFormulaSchema } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { productionRoot, type FormulaVersionView } from '../../../lib/queries/production-queries';
 
 /** Saves the formula as a new version. Sheets already planned keep their own version. */

@@ -1,4 +1,4 @@
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime } from '@fryline/ui/format';
 import type { FormulaList } from '../../../lib/queries/production-queries';
 
 const browserZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;

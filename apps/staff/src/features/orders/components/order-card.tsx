@@ -1,6 +1,6 @@
 import type { BoxSize, StaffOrderView } from '@fryline/schemas';
 import { formatCents } from '@fryline/schemas';
-import { formatPieces } from '../../../lib/format';
+import { formatPieces } from '@fryline/ui/format';
 import { refundableCents } from '../model/refund-form';
 import { Fact } from './fact';
 import { OrderStatusBadge } from './order-status-badge';

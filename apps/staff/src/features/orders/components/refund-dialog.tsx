@@ -2,11 +2,11 @@ import { useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { formatCents, type RefundRequest, type StaffOrderView } from '@fryline/schemas';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { useRefundOrder, type RefundMade } from '../api/use-refund-order';
 import { parseDollars, dollarsText } from '../model/money';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '@fryline/ui';
 
 interface RefundDialogProps {
   /** The order as it was when the dialog opened. */

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { productionQueries, type PlanResponse } from '../../../lib/queries/production-queries';
 
 /** Moves a bake day's sheet to another formula version; the answer is the new sheet. */

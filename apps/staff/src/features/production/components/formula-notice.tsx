@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { errorMessage } from '../../../lib/api-client';
+import { errorMessage } from '@fryline/ui/api-client';
 import { productionQueries, type PlanMeta } from '../../../lib/queries/production-queries';
 import { useSwitchFormula } from '../api/use-switch-formula';
 import { formulaStatus } from '../model/sheet';

@@ -1,13 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { bakeDayQueries, nextBakeDay } from '../../../lib/queries/bake-day-queries';
-import { errorMessage } from '../../../lib/api-client';
-import { formatClock, formatDate } from '../../../lib/format';
+import { errorMessage } from '@fryline/ui/api-client';
+import { formatClock, formatDate } from '@fryline/ui/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
-import { useCan } from '../../session/components/staff-member';
+import { useCan } from '../../../app/session/staff-member';
 import { productionQueries, type PlanResponse } from '../../../lib/queries/production-queries';
 import { cutoffWarning } from '../model/sheet';
 import { BakeDayPicker } from './bake-day-picker';
