@@ -6,3 +6,4 @@ export { FieldShell, fieldAria } from './field-shell';
 export { ModalDialog } from './modal-dialog';
 export { PageErrorBoundary } from './page-error-boundary';
 export { ErrorState, LoadingState, Notice } from './status';
+export { MenuPhoto } from './menu-photo';

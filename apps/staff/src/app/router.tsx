@@ -7,6 +7,7 @@ import { NotFoundRoute } from './routes/not-found-route';
 import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
 import { RoleGuard } from './session/role-guard';
 import { AnnounceBakeDayPage } from '../features/bake-days/components/announce-bake-day-page';
+import { MenuItemPage } from '../features/menu/components/menu-item-page';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */
 export function AppRoutes() {
@@ -26,6 +27,17 @@ export function AppRoutes() {
           }
         />
         <Route path="bake-days/:bakeDayId" element={<BakeDayOrdersRoute />} />
+        {['menu/new', 'menu/:itemId'].map((path) => (
+          <Route
+            key={path}
+            path={path}
+            element={
+              <RoleGuard minRole="owner">
+                <MenuItemPage />
+              </RoleGuard>
+            }
+          />
+        ))}
         <Route path="*" element={<NotFoundRoute />} />
       </Route>
     </Routes>

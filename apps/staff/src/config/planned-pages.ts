@@ -28,15 +28,6 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Changing a bake day after it is announced: place, pickup windows, that day’s menu and prices',
     ],
   },
-  menu: {
-    intro: 'What customers can put in a box, and what it costs.',
-    arrivesWith: "the owner's setup work",
-    will: [
-      'Flavour and glaze combinations, for rings and for holes',
-      'The allergens of each item, shown to customers before they pay',
-      'Box sizes (dozen, half dozen, bag of holes), their prices and any extra charge per item',
-    ],
-  },
   sales: {
     intro: 'How each week went, in money and in doughnuts.',
     arrivesWith: 'the sales report work',

@@ -9,6 +9,9 @@ import { EquipmentPage } from '../../features/equipment/components/equipment-pag
 import { FormulaPage } from '../../features/formula/components/formula-page';
 import { ProductionPage } from '../../features/production/components/production-page';
 import { StaffPage } from '../../features/staff-members/components/staff-page';
+import { MenuPage } from '../../features/menu/components/menu-page';
+import { ShopSettingsPage } from '../../features/shop-settings/components/shop-settings-page';
+import { AuditLogPage } from '../../features/audit-log/components/audit-log-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
@@ -17,6 +20,9 @@ const builtPages: Record<string, ReactNode> = {
   formula: <FormulaPage />,
   equipment: <EquipmentPage />,
   staff: <StaffPage />,
+  menu: <MenuPage />,
+  settings: <ShopSettingsPage />,
+  'audit-log': <AuditLogPage />,
 };
 
 export function SectionRoute({ section }: { section: StaffSection }) {

@@ -11,6 +11,7 @@ import { formatClockRange, formatDate, listWords } from '@fryline/ui/format';
 import { goToSignIn, signInUrl, currentPath } from '../../../lib/sign-in';
 import { AllergenCaution } from '../../../components/allergen-caution';
 import { allergensOf } from '../../../components/allergen-list';
+import { RefundPolicy } from '../../../components/refund-policy';
 
 const consentSchema = z.object({
   allergensRead: z.boolean().refine((ticked) => ticked, 'Please tick the box to say you have read the allergens.'),
@@ -170,6 +171,8 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
           )}
 
           {holdOrderId && renderHoldExists?.(holdOrderId, () => setHoldOrderId(null))}
+
+          <RefundPolicy />
 
           <p className="text-sm text-muted">
             When you continue, your boxes are held for you for a few minutes while you pay on the secure checkout page.
