@@ -113,7 +113,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsView }) {
           {save.isPending && <span className="spinner" aria-hidden="true" />}
           Save the settings
         </button>
-        {settings.updatedAt && <span className="text-sm text-muted">Last saved {formatDateTime(settings.updatedAt, settings.timeZone)}</span>}
+        {settings.updatedAt && <span className="text-sm text-muted">Last changed {formatDateTime(settings.updatedAt, settings.timeZone)}</span>}
       </div>
     </form>
   );
