@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MenuItemAdminView, MenuItemInput, MenuItemPatch } from '@fryline/schemas';
-import { api } from '@fryline/ui/api-client';
+import { api, errorMessage } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 import { menuRoot } from './menu-queries';
 import { uploadMenuPhoto } from './upload-photo';
@@ -22,25 +22,37 @@ export interface SaveMenuItem {
   removePhoto?: boolean;
 }
 
+export interface SavedMenuItem {
+  item: MenuItemAdminView;
+  /** Why the photo was not taken, when the item was saved but its photo was refused. */
+  photoError?: string;
+}
+
 /**
  * Creates or edits an item, then uploads or removes its photo. The item is
- * saved first, so a refused photo leaves a saved item and a message.
+ * saved first, so a refused photo leaves a saved item and says why.
  */
 export function useSaveMenuItem() {
   const refresh = useRefresh();
   return useMutation({
-    mutationFn: async ({ id, body, photo, removePhoto }: SaveMenuItem) => {
+    mutationFn: async ({ id, body, photo, removePhoto }: SaveMenuItem): Promise<SavedMenuItem> => {
       const saved = id
         ? Object.keys(body).length > 0
           ? await api.patch<MenuItemAdminView>(itemPath(id), body)
           : await api.get<MenuItemAdminView>(itemPath(id))
         : await api.post<MenuItemAdminView>('/api/staff/menu-items', body);
-      if (photo) return { ...saved, photo: await uploadMenuPhoto(saved.id, photo) };
+      if (photo) {
+        try {
+          return { item: { ...saved, photo: await uploadMenuPhoto(saved.id, photo) } };
+        } catch (error) {
+          return { item: saved, photoError: errorMessage(error) };
+        }
+      }
       if (removePhoto && saved.photo) {
         await api.delete(`${itemPath(saved.id)}/photo`);
-        return { ...saved, photo: null };
+        return { item: { ...saved, photo: null } };
       }
-      return saved;
+      return { item: saved };
     },
     onSettled: refresh,
   });

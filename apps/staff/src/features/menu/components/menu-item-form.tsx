@@ -4,7 +4,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { MenuItemAdminView, MenuItemInput, ProductionSettingsInput } from '@fryline/schemas';
 import { FieldShell, fieldAria } from '@fryline/ui';
-import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
+import { putFieldErrors } from '@fryline/ui/api-client';
 import { useSaveMenuItem } from '../api/use-menu-mutations';
 import { allergenChoices, blankMenuForm, formFromItem, menuFormSchema, patchFrom, type MenuFormValues } from '../model/menu-form';
 import { PhotoField } from './photo-field';
@@ -14,7 +14,7 @@ type Glaze = ProductionSettingsInput['glazes'][number];
 const fields = ['name', 'kind', 'flavour', 'glaze', 'glazeRecipeId', 'allergens', 'description', 'surchargeCents'] as const;
 
 /** Adds an item, or edits one, with its photo. */
-export function MenuItemForm({ item, glazes }: { item?: MenuItemAdminView; glazes: readonly Glaze[] }) {
+export function MenuItemForm({ item, glazes, initialPhotoError }: { item?: MenuItemAdminView; glazes: readonly Glaze[]; initialPhotoError?: string }) {
   const navigate = useNavigate();
   const save = useSaveMenuItem();
   const form = useForm<MenuFormValues, unknown, MenuItemInput>({
@@ -24,9 +24,9 @@ export function MenuItemForm({ item, glazes }: { item?: MenuItemAdminView; glaze
   const { register, formState, setValue, getValues } = form;
   const { errors } = formState;
   const [photo, setPhoto] = useState<File | null>(null);
-  const [photoError, setPhotoError] = useState<string | undefined>();
+  const [photoError, setPhotoError] = useState<string | undefined>(initialPhotoError);
   const [removePhoto, setRemovePhoto] = useState(false);
-  const [problems, setProblems] = useState<string[]>([]);
+  const [problems, setProblems] = useState<string[]>(initialPhotoError ? ['The item is saved, but not the photo.'] : []);
   const name = form.watch('name');
 
   const aria = (id: string, error?: string, help?: boolean) => fieldAria(id, help, error);
@@ -37,13 +37,18 @@ export function MenuItemForm({ item, glazes }: { item?: MenuItemAdminView; glaze
     save.mutate(
       { id: item?.id, body: item ? patchFrom(item, input) : input, photo, removePhoto },
       {
-        onSuccess: (saved) => navigate('/menu', { state: { saved: `${saved.name} is saved${photo ? ' with its photo' : ''}.` } }),
-        onError: (error) => {
-          if (isApiError(error) && [413, 415].includes(error.status)) {
-            setPhotoError(error.message);
-            setProblems([item ? 'The changes were saved, but not the photo.' : 'The item was saved, but not the photo: edit it to try another.']);
+        onSuccess: ({ item: saved, photoError: refused }) => {
+          if (refused) {
+            // the item is saved: carry on from its own page, where another photo can be tried
+            setPhoto(null);
+            setPhotoError(refused);
+            setProblems([`${saved.name} is saved, but not the photo.`]);
+            if (!item) navigate(`/menu/${saved.id}`, { replace: true, state: { photoError: refused } });
             return;
           }
+          navigate('/menu', { state: { saved: `${saved.name} is saved${photo ? ' with its photo' : ''}.` } });
+        },
+        onError: (error) => {
           const left = putFieldErrors(error, form.setError, fields);
           setProblems(left.length > 0 ? left : ['Some answers need another look: see the messages beside them.']);
         },
