@@ -44,4 +44,6 @@ export interface PublicShopView {
   currency: string;
   timeZone: string;
   refundPolicy: string;
+  /** How long a box is held while the customer pays. */
+  holdMinutes: number;
 }

@@ -7,8 +7,8 @@ import { settingsView, shopSettings } from './settings.js';
 export const getShopSettings = (): Promise<ShopSettingsView> => shopSettings();
 
 export async function publicShop(): Promise<PublicShopView> {
-  const { shopName, currency, timeZone, refundPolicy } = await getShopSettings();
-  return { shopName, currency, timeZone, refundPolicy };
+  const { shopName, currency, timeZone, refundPolicy, holdMinutes } = await getShopSettings();
+  return { shopName, currency, timeZone, refundPolicy, holdMinutes };
 }
 
 /** Saves the whole form; the audit entry lists each setting that changed, from and to. */
