@@ -41,26 +41,30 @@ export const auditQuerySchema = z
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The first day must come before the last', path: ['to'] });
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
 
-export interface AuditEntryView {
-  id: number;
-  at: string;
-  kind: AuditKind;
-  action: string;
-  /** One line a person can read: "Changed the role of Kit Marrow to baker". */
-  summary: string;
-  actor: { id: string; name: string; email: string } | null;
-  subjectType: string;
-  subjectId: string | null;
-  details: Record<string, unknown>;
-}
+const personSchema = z.object({ id: z.string(), name: z.string(), email: z.string() });
 
-export interface AuditPage {
-  entries: AuditEntryView[];
-  total: number;
-  page: number;
-  pageSize: number;
+export const auditEntryViewSchema = z.object({
+  id: z.number().int(),
+  at: z.string(),
+  kind: z.enum(auditKinds),
+  action: z.string(),
+  /** One line a person can read: "Gave Kit Marrow the counter role". */
+  summary: z.string(),
+  actor: personSchema.nullable(),
+  subjectType: z.string(),
+  subjectId: z.string().nullable(),
+  details: z.record(z.string(), z.unknown()),
+});
+export type AuditEntryView = z.infer<typeof auditEntryViewSchema>;
+
+export const auditPageSchema = z.object({
+  entries: z.array(auditEntryViewSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
   /** The shop's time zone, in which `from` and `to` are read. */
-  timeZone: string;
+  timeZone: z.string(),
   /** Everyone who appears in the log, for the person filter. */
-  people: Array<{ id: string; name: string; email: string }>;
-}
+  people: z.array(personSchema),
+});
+export type AuditPage = z.infer<typeof auditPageSchema>;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { allergenSchema } from './bake-days.js';
-import { pieceKindSchema, type PieceKind } from './boxes.js';
+import { pieceKindSchema } from './boxes.js';
 
 // The owner's menu: what can go in a box. Archived items stay in the
 // database so past orders keep pointing at them, but are not offered again.
@@ -56,40 +56,44 @@ export const menuItemPatchSchema = z
 export type MenuItemPatch = z.infer<typeof menuItemPatchSchema>;
 
 /** One stored size of a photo. */
-export interface MenuPhotoFile {
-  width: number;
-  height: number;
-  url: string;
-}
+export const menuPhotoFileSchema = z.object({ width: z.number().int(), height: z.number().int(), url: z.string() });
+export type MenuPhotoFile = z.infer<typeof menuPhotoFileSchema>;
 
 /** A menu photo as an <img> needs it: the sizes for srcset, and the shape so the layout keeps its place. */
-export interface MenuPhotoView {
-  id: string;
+export const menuPhotoViewSchema = z.object({
+  id: z.string(),
   /** Of the largest stored size; the others keep the same shape. */
-  width: number;
-  height: number;
+  width: z.number().int(),
+  height: z.number().int(),
   /** A middle size, for browsers without srcset. */
-  src: string;
-  srcset: string;
+  src: z.string(),
+  srcset: z.string(),
   /** Every stored file's URL, smallest first. */
-  urls: string[];
-  files: MenuPhotoFile[];
-}
+  urls: z.array(z.string()),
+  files: z.array(menuPhotoFileSchema),
+});
+export type MenuPhotoView = z.infer<typeof menuPhotoViewSchema>;
 
-export interface MenuItemAdminView {
-  id: string;
-  name: string;
-  flavour: string;
-  glaze: string;
-  glazeRecipeId?: string | null;
-  kind: PieceKind;
-  surchargeCents: number;
-  allergens: string[];
-  /** False once archived. */
-  active: boolean;
-  description?: string;
-  archivedAt?: string | null;
-  photo?: MenuPhotoView | null;
+/** What the owner's menu pages show beyond the staff list: the description, the glaze recipe, the photo, archiving. */
+export const menuItemOwnerFields = {
+  glazeRecipeId: z.string().nullable().optional(),
+  description: z.string().optional(),
+  archivedAt: z.string().nullable().optional(),
+  photo: menuPhotoViewSchema.nullable().optional(),
   /** How many orders include it (an archived item stays for them). */
-  orderCount?: number;
-}
+  orderCount: z.number().int().optional(),
+};
+
+export const menuItemAdminViewSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  flavour: z.string(),
+  glaze: z.string(),
+  kind: pieceKindSchema,
+  surchargeCents: z.number().int(),
+  allergens: z.array(z.string()),
+  /** False once archived. */
+  active: z.boolean(),
+  ...menuItemOwnerFields,
+});
+export type MenuItemAdminView = z.infer<typeof menuItemAdminViewSchema>;

@@ -34,16 +34,16 @@ export const shopSettingsInputSchema = z.strictObject({
 });
 export type ShopSettingsInput = z.infer<typeof shopSettingsInputSchema>;
 
-export interface ShopSettingsView extends ShopSettingsInput {
-  updatedAt: string | null;
-}
+export const shopSettingsViewSchema = shopSettingsInputSchema.extend({ updatedAt: z.string().nullable() });
+export type ShopSettingsView = z.infer<typeof shopSettingsViewSchema>;
 
 /** What the shop shows every customer (GET /api/shop). */
-export interface PublicShopView {
-  shopName: string;
-  currency: string;
-  timeZone: string;
-  refundPolicy: string;
+export const publicShopViewSchema = z.object({
+  shopName: z.string(),
+  currency: z.string(),
+  timeZone: z.string(),
+  refundPolicy: z.string(),
   /** How long a box is held while the customer pays. */
-  holdMinutes: number;
-}
+  holdMinutes: z.number().int(),
+});
+export type PublicShopView = z.infer<typeof publicShopViewSchema>;
