@@ -16,14 +16,18 @@ import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
 import { waitlistRouter } from './routes/waitlist.js';
 import { webhooksRouter } from './routes/webhooks.js';
+import { staffBakeDaysRouter } from './routes/staff-bake-days.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
-import { productionRouter } from './routes/production.js';
-import { setupRouter } from './routes/setup.js';
+import { staffMembersRouter } from './routes/staff-members.js';
 import { menuItemsRouter } from './routes/menu-items.js';
+import { productionRouter } from './routes/production.js';
 import { shopSettingsRouter } from './routes/shop-settings.js';
 import { auditLogRouter } from './routes/audit-log.js';
-import { staffInvitationsRouter } from './routes/staff-invitations.js';
+import { photosRouter } from './routes/photos.js';
 import { setContext } from './integrations/context.js';
+import { requestClock } from './middleware/request-clock.js';
+import { requestLog } from './middleware/request-log.js';
+import { checkResponsesAgainstContract } from './lib/route.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -47,10 +51,12 @@ function spa(app: express.Express, mount: string, dir: string) {
  */
 export function createApp(config: Config) {
   setContext(config);
+  checkResponsesAgainstContract(config.NODE_ENV !== 'production');
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.set('query parser', 'extended');
+  app.use(requestLog);
 
   // Everything the apps load comes from this origin; images may be data: URLs (QR codes).
   app.use(
@@ -75,7 +81,10 @@ export function createApp(config: Config) {
     }),
   );
 
+  app.use(requestClock);
   app.use(healthRouter);
+  // photo files need no session: served before it is read
+  app.use(photosRouter);
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
@@ -109,13 +118,13 @@ export function createApp(config: Config) {
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);
+  app.use(staffBakeDaysRouter);
   app.use(staffOrdersRouter);
-  app.use(productionRouter);
-  app.use(setupRouter);
+  app.use(staffMembersRouter);
   app.use(menuItemsRouter);
+  app.use(productionRouter);
   app.use(shopSettingsRouter);
   app.use(auditLogRouter);
-  app.use(staffInvitationsRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

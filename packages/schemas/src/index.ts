@@ -10,3 +10,4 @@ export * from './setup.js';
 export * from './menu.js';
 export * from './shop-settings.js';
 export * from './audit-log.js';
+export * from './api.js';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { menuPhotoViewSchema } from './menu-photos.js';
 import { allergenSchema } from './bake-days.js';
 import { pieceKindSchema } from './boxes.js';
 
@@ -55,24 +56,7 @@ export const menuItemPatchSchema = z
   .refine((patch) => Object.keys(patch).length > 0, 'Nothing to change');
 export type MenuItemPatch = z.infer<typeof menuItemPatchSchema>;
 
-/** One stored size of a photo. */
-export const menuPhotoFileSchema = z.object({ width: z.number().int(), height: z.number().int(), url: z.string() });
-export type MenuPhotoFile = z.infer<typeof menuPhotoFileSchema>;
-
-/** A menu photo as an <img> needs it: the sizes for srcset, and the shape so the layout keeps its place. */
-export const menuPhotoViewSchema = z.object({
-  id: z.string(),
-  /** Of the largest stored size; the others keep the same shape. */
-  width: z.number().int(),
-  height: z.number().int(),
-  /** A middle size, for browsers without srcset. */
-  src: z.string(),
-  srcset: z.string(),
-  /** Every stored file's URL, smallest first. */
-  urls: z.array(z.string()),
-  files: z.array(menuPhotoFileSchema),
-});
-export type MenuPhotoView = z.infer<typeof menuPhotoViewSchema>;
+export { menuPhotoFileSchema, menuPhotoViewSchema, type MenuPhotoFile, type MenuPhotoView } from './menu-photos.js';
 
 /** What the owner's menu pages show beyond the staff list: the description, the glaze recipe, the photo, archiving. */
 export const menuItemOwnerFields = {
@@ -83,17 +67,3 @@ export const menuItemOwnerFields = {
   /** How many orders include it (an archived item stays for them). */
   orderCount: z.number().int().optional(),
 };
-
-export const menuItemAdminViewSchema = z.object({
-  id: z.string(),
-  name: z.string(),
-  flavour: z.string(),
-  glaze: z.string(),
-  kind: pieceKindSchema,
-  surchargeCents: z.number().int(),
-  allergens: z.array(z.string()),
-  /** False once archived. */
-  active: z.boolean(),
-  ...menuItemOwnerFields,
-});
-export type MenuItemAdminView = z.infer<typeof menuItemAdminViewSchema>;

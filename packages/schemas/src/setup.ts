@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { boxSizeSchema } from './boxes.js';
+import { menuItemViewSchema } from './bake-days.js';
 import { roleSchema } from './roles.js';
+import { menuItemOwnerFields } from './menu.js';
 
 // The owner's setup: new bake days and the staff who may sign in.
 
@@ -54,11 +56,24 @@ export type StaffMemberInput = z.infer<typeof staffMemberInputSchema>;
 
 export const changeRoleSchema = z.strictObject({ role: roleSchema });
 
-export interface StaffMemberView {
-  id: string;
-  email: string;
-  name: string;
-  role: 'counter' | 'baker' | 'owner';
+export const staffMemberViewSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema.exclude(['customer']),
   /** False until they have signed in once with this (verified) address. */
-  signedIn: boolean;
-}
+  signedIn: z.boolean(),
+});
+export type StaffMemberView = z.infer<typeof staffMemberViewSchema>;
+
+/**
+ * A menu item as the staff manage it: the customer's view with whether it is
+ * on sale, and what the owner's menu pages add (description, glaze recipe,
+ * archiving, how many orders have it).
+ */
+export const menuItemAdminViewSchema = menuItemViewSchema.omit({ description: true }).extend({
+  allergens: z.array(z.string()),
+  active: z.boolean(),
+  ...menuItemOwnerFields,
+});
+export type MenuItemAdminView = z.infer<typeof menuItemAdminViewSchema>;

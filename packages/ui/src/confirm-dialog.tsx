@@ -1,4 +1,5 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
+import { ModalDialog } from './modal-dialog';
 
 interface ConfirmDialogProps {
   open: boolean;
@@ -12,7 +13,7 @@ interface ConfirmDialogProps {
   onClose: () => void;
 }
 
-/** A modal question with two answers, on the browser's own <dialog> (focus trap and Escape included). */
+/** A modal question with two answers, on the shared modal (focus trap, Escape and focus return included). */
 export function ConfirmDialog({
   open,
   title,
@@ -24,27 +25,9 @@ export function ConfirmDialog({
   onConfirm,
   onClose,
 }: ConfirmDialogProps) {
-  const ref = useRef<HTMLDialogElement>(null);
-  const titleId = useId();
-
-  useEffect(() => {
-    const dialog = ref.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
-  }, [open]);
-
+  if (!open) return null;
   return (
-    <dialog
-      ref={ref}
-      aria-labelledby={titleId}
-      onClose={onClose}
-      className="m-auto w-[min(28rem,calc(100%-2rem))] rounded-3xl border border-line bg-paper p-6 text-ink shadow-xl backdrop:bg-ink/50"
-    >
-      <h2 id={titleId} className="text-xl">
-        {title}
-      </h2>
-      <div className="mt-3 space-y-2">{children}</div>
+    <ModalDialog title={title} description={children} busy={busy} onClose={onClose}>
       <div className="mt-6 flex flex-col-reverse gap-3 sm:flex-row sm:justify-end">
         <button type="button" className="btn btn-quiet" onClick={onClose} disabled={busy} autoFocus>
           {cancelLabel}
@@ -59,6 +42,6 @@ export function ConfirmDialog({
           {confirmLabel}
         </button>
       </div>
-    </dialog>
+    </ModalDialog>
   );
 }

@@ -6,7 +6,19 @@ export function fieldAria(id: string, help: unknown, error: string | undefined) 
   return { 'aria-invalid': error ? (true as const) : undefined, 'aria-describedby': described };
 }
 
-/** A label (with its unit), the input, a help line and the error under it. */
+/** What the input inside a field needs: its id, its look, and pointers to its help line and error. */
+export interface FieldInputProps {
+  id: string;
+  className: string;
+  'aria-invalid': true | undefined;
+  'aria-describedby': string | undefined;
+}
+
+/**
+ * A label (with its unit), the input, a help line and the error under it.
+ * `children` is the input itself, or a function that draws it from the
+ * props it needs (`{(input) => <input {...input} {...register('x')} />}`).
+ */
 export function FieldShell({
   id,
   label,
@@ -24,7 +36,7 @@ export function FieldShell({
   help?: ReactNode;
   error?: string;
   className?: string;
-  children: ReactNode;
+  children: ReactNode | ((input: FieldInputProps) => ReactNode);
 }) {
   return (
     <div className={className}>
@@ -33,7 +45,7 @@ export function FieldShell({
         {unit && <span className="font-semibold text-muted"> ({unit})</span>}
         {optional && <span className="font-semibold text-muted"> · optional</span>}
       </label>
-      {children}
+      {typeof children === 'function' ? children({ id, className: 'field-input', ...fieldAria(id, help, error) }) : children}
       {help && (
         <p id={`${id}-help`} className="mt-1 text-sm text-muted">
           {help}

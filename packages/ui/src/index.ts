@@ -1,9 +1,13 @@
 // The React pieces both front ends share. The API client, the formatters,
 // sign-in links and the page-change helper have sub-path exports of their
 // own (`@fryline/ui/api-client`, …), so a module that needs no React pulls none.
+export { AppShell, BrandLink } from './app-shell';
+export { Caution } from './caution';
 export { ConfirmDialog } from './confirm-dialog';
-export { FieldShell, fieldAria } from './field-shell';
+export { FieldShell, fieldAria, type FieldInputProps } from './field-shell';
 export { ModalDialog } from './modal-dialog';
+export { mountApp, QueryProvider } from './mount';
 export { PageErrorBoundary } from './page-error-boundary';
+export { SignOutButton } from './sign-out-button';
 export { ErrorState, LoadingState, Notice } from './status';
 export { MenuPhoto } from './menu-photo';

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { errorMessage } from './api-client';
 
+/** A loading line with a spinner, announced politely. */
 export function LoadingState({ label = 'Loading…' }: { label?: string }) {
   return (
     <p role="status" className="flex items-center gap-3 py-8 text-muted">
@@ -17,6 +18,7 @@ interface ErrorStateProps {
   children?: ReactNode;
 }
 
+/** What went wrong while loading, in words a person can act on, with an optional retry. */
 export function ErrorState({ error, title = 'We could not load this', onRetry, children }: ErrorStateProps) {
   return (
     <div role="alert" className="notice notice-bad my-4">
@@ -24,7 +26,7 @@ export function ErrorState({ error, title = 'We could not load this', onRetry, c
       <p>{errorMessage(error)}</p>
       {children}
       {onRetry && (
-        <button type="button" className="btn btn-quiet btn-small mt-3" onClick={onRetry}>
+        <button type="button" className="btn btn-quiet btn-small mt-3 bg-white" onClick={onRetry}>
           Try again
         </button>
       )}

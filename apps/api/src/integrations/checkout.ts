@@ -1,12 +1,10 @@
 import type Stripe from 'stripe';
 import type { Transaction } from 'sequelize';
-import type { BakeDayView, Me } from '@fryline/schemas';
+import { boxLabel, type BakeDayView, type Me } from '@fryline/schemas';
 import { Order, Refund } from '../db/models/index.js';
 import { context } from './context.js';
 import type { CheckedOrder } from '../services/orders/order-rules.js';
 import { shopSettings } from '../services/shop/settings.js';
-
-const boxNames = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' } as const;
 
 /**
  * Opens hosted checkout for a held order. The idempotency key ties the
@@ -23,7 +21,7 @@ export async function openCheckout(order: Order, user: Me, checked: CheckedOrder
     price_data: {
       currency,
       unit_amount: checked.price.boxesCents[i]!,
-      product_data: { name: `${boxNames[box.size]}: ${box.lines.map((l) => `${l.quantity} ${l.name}`).join(', ')}`.slice(0, 250) },
+      product_data: { name: `${boxLabel(box.size)}: ${box.lines.map((l) => `${l.quantity} ${l.name}`).join(', ')}`.slice(0, 250) },
     },
   }));
   if (day.tax.mode === 'added' && checked.price.taxCents > 0) {

@@ -23,7 +23,7 @@ export async function sweepHolds(now: Date): Promise<{ expired: number; lapsedOf
       const released = await releaseOrder(order.id, ['held'], 'expired', transaction);
       if (released) {
         expired += 1;
-        await offerFreedCapacity(order.bakeDayId, transaction);
+        await offerFreedCapacity(order.bakeDayId, transaction, now);
       }
     });
   }

@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import { auditQuerySchema, type AuditQuery } from '@fryline/schemas';
+import { api } from '@fryline/schemas';
 import { requireRole } from '../middleware/auth.js';
-import { validate, valid } from '../middleware/validate.js';
+import { route } from '../lib/route.js';
 import { listAuditLog } from '../services/audit-log/audit-log.js';
 
+/** /api/staff/audit-log: who changed what, and when. */
 export const auditLogRouter = Router();
 
-auditLogRouter.get('/api/staff/audit-log', requireRole('owner'), validate('query', auditQuerySchema), async (_req, res) => {
-  res.set('Cache-Control', 'no-store').json(await listAuditLog(valid<AuditQuery>(res, 'query')));
-});
+route(auditLogRouter, api.listAuditLog, [requireRole('owner')], ({ query }) => listAuditLog(query), { noStore: true });

@@ -1,20 +1,14 @@
 import { Router } from 'express';
-import { shopSettingsInputSchema, type ShopSettingsInput } from '@fryline/schemas';
+import { api } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
-import { validate, valid } from '../middleware/validate.js';
+import { route } from '../lib/route.js';
 import { getShopSettings, publicShop, saveShopSettings } from '../services/shop/shop-settings.js';
 
+/** /api/shop (what every customer sees) and /api/staff/shop-settings (the owner's form). */
 export const shopSettingsRouter = Router();
 
-/** What every customer sees: the shop's name and its refund policy. */
-shopSettingsRouter.get('/api/shop', async (_req, res) => {
-  res.set('Cache-Control', 'no-cache').json(await publicShop());
-});
+route(shopSettingsRouter, api.getShop, [], () => publicShop());
 
-shopSettingsRouter.get('/api/staff/shop-settings', requireRole('owner'), async (_req, res) => {
-  res.set('Cache-Control', 'no-store').json(await getShopSettings());
-});
+route(shopSettingsRouter, api.getShopSettings, [requireRole('owner')], () => getShopSettings(), { noStore: true });
 
-shopSettingsRouter.put('/api/staff/shop-settings', requireRole('owner'), validate('body', shopSettingsInputSchema), async (req, res) => {
-  res.json(await saveShopSettings(currentUser(req), valid<ShopSettingsInput>(res, 'body')));
-});
+route(shopSettingsRouter, api.saveShopSettings, [requireRole('owner')], ({ req, body }) => saveShopSettings(currentUser(req), body));

@@ -1,14 +1,6 @@
-import { useState, type ReactNode } from 'react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { shouldRetry } from '@fryline/ui/api-client';
-
-function createQueryClient(): QueryClient {
-  return new QueryClient({
-    defaultOptions: { queries: { staleTime: 10_000, retry: shouldRetry }, mutations: { retry: false } },
-  });
-}
+import type { ReactNode } from 'react';
+import { QueryProvider } from '@fryline/ui';
 
 export function Providers({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(createQueryClient);
-  return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
+  return <QueryProvider staleTime={10_000}>{children}</QueryProvider>;
 }

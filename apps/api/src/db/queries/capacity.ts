@@ -5,8 +5,13 @@ import { database } from '../sequelize.js';
 // the change happen in one UPDATE, backed by CHECK (remaining >= 0) in the
 // schema. Nothing is read and then written.
 
-/** Takes rings and holes from a bake day if they are all there and orders are open; false otherwise. */
-export async function takeCapacity(bakeDayId: string, rings: number, holes: number, transaction: Transaction, opts: { ignoreCutoff?: boolean } = {}): Promise<boolean> {
+/**
+ * Takes rings and holes from a bake day if they are all there and orders are
+ * open at `now` (the caller's clock, passed in: never the database's); false
+ * otherwise. A late payment re-takes its pieces whatever the time.
+ */
+export async function takeCapacity(bakeDayId: string, rings: number, holes: number, transaction: Transaction, when: { now: Date } | { ignoreCutoff: true }): Promise<boolean> {
+  const now = 'now' in when ? when.now : null;
   const rows = await database().query(
     `UPDATE bake_days
         SET rings_remaining = rings_remaining - :rings,
@@ -16,9 +21,9 @@ export async function takeCapacity(bakeDayId: string, rings: number, holes: numb
         AND rings_remaining >= :rings
         AND holes_remaining >= :holes
         AND status = 'published'
-        ${opts.ignoreCutoff ? '' : 'AND orders_open_at <= now() AND cutoff_at > now()'}
+        ${now ? 'AND orders_open_at <= :now AND cutoff_at > :now' : ''}
       RETURNING id`,
-    { replacements: { bakeDayId, rings, holes }, type: QueryTypes.SELECT, transaction },
+    { replacements: { bakeDayId, rings, holes, now }, type: QueryTypes.SELECT, transaction },
   );
   return rows.length === 1;
 }

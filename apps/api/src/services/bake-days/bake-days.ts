@@ -1,13 +1,10 @@
 import { Op } from 'sequelize';
 import { DateTime } from 'luxon';
-import type { BakeDayStatus, BakeDayView, BoxSize, Allergen } from '@fryline/schemas';
+import { boxLabel, boxSizes, type BakeDayStatus, type BakeDayView, type Allergen } from '@fryline/schemas';
 import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
 import { shopSettings } from '../shop/settings.js';
 import { photoViewsFor } from '../menu/photo-view.js';
-
-const boxLabels: Record<BoxSize, string> = { dozen: 'A dozen', 'half-dozen': 'A half dozen', holes: 'A bag of holes' };
-const boxOrder: BoxSize[] = ['dozen', 'half-dozen', 'holes'];
 
 /** What a customer sees: not yet open, open, closed (past the cut-off), or done (the day is over). */
 export function viewStatus(day: Pick<BakeDay, 'status' | 'ordersOpenAt' | 'cutoffAt' | 'date' | 'timeZone'>, now: Date): BakeDayStatus {
@@ -44,8 +41,8 @@ export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
       .sort((a, b) => a.startsAt.getTime() - b.startsAt.getTime())
       .map((w) => ({ id: w.id, startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(), ordersLeft: w.ordersRemaining })),
     boxes: [...(day.boxes ?? [])]
-      .sort((a, b) => boxOrder.indexOf(a.size) - boxOrder.indexOf(b.size))
-      .map((b) => ({ size: b.size, pieces: b.pieces, priceCents: b.priceCents, label: boxLabels[b.size] })),
+      .sort((a, b) => boxSizes.indexOf(a.size) - boxSizes.indexOf(b.size))
+      .map((b) => ({ size: b.size, pieces: b.pieces, priceCents: b.priceCents, label: boxLabel(b.size) })),
     menu: [...(day.menuItems ?? [])]
       .filter((m) => m.active)
       .sort((a, b) => a.sortOrder - b.sortOrder || a.name.localeCompare(b.name))

@@ -1,7 +1,7 @@
 import QRCode from 'qrcode';
 import { DateTime } from 'luxon';
 import type { Transaction } from 'sequelize';
-import { formatCents } from '@fryline/schemas';
+import { boxLabel, formatCents } from '@fryline/schemas';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
 import { enqueueMail } from './outbox.js';
 import { renderMail } from './templates.js';
@@ -41,9 +41,8 @@ function boxLines(boxes: OrderBox[]): string[] {
   return [...boxes]
     .sort((a, b) => a.position - b.position)
     .map((box) => {
-      const name = box.size === 'holes' ? 'Bag of holes' : box.size === 'dozen' ? 'Dozen' : 'Half dozen';
       const items = (box.lines ?? []).map((l) => `${l.quantity} × ${l.name}`).join(', ');
-      return `• ${name}: ${items}`;
+      return `• ${boxLabel(box.size)}: ${items}`;
     });
 }
 

@@ -1,4 +1,9 @@
 import { createEvent } from 'ics';
+import type { Me } from '@fryline/schemas';
+import { BakeDay, Order, PickupWindow } from '../../db/models/index.js';
+import { notFound } from '../../lib/app-error.js';
+import { context } from '../../integrations/context.js';
+import { shopSettings } from '../shop/settings.js';
 
 export interface PickupEvent {
   orderId: string;
@@ -32,4 +37,24 @@ export function pickupCalendar(event: PickupEvent): string {
   });
   if (error || !value) throw error ?? new Error('calendar entry could not be made');
   return value;
+}
+
+/** A paid (or collected) order's pickup as a calendar file, for its own customer only. */
+export async function orderCalendar(user: Me, orderId: string): Promise<string> {
+  const order = await Order.findOne({
+    where: { id: orderId, userId: user.id },
+    include: [{ model: BakeDay, as: 'bakeDay' }, { model: PickupWindow, as: 'pickupWindow' }],
+  });
+  if (!order || !order.pickupCode || !['paid', 'collected'].includes(order.status)) throw notFound('Order');
+  const { shopName } = await shopSettings();
+  return pickupCalendar({
+    orderId: order.id,
+    code: order.pickupCode,
+    shopName,
+    place: order.bakeDay!.place,
+    address: order.bakeDay!.address,
+    startsAt: order.pickupWindow!.startsAt,
+    endsAt: order.pickupWindow!.endsAt,
+    url: `${context().config.publicUrl}/orders/${order.id}`,
+  });
 }

@@ -1,8 +1,6 @@
 import type { BakeDayView, BoxSize, CreateOrderInput, PieceKind } from '@fryline/schemas';
-import { priceOrder, type OrderPrice } from '@fryline/schemas';
+import { boxPieces, priceOrder, wrongKindMessage, type OrderPrice } from '@fryline/schemas';
 import { AppError } from '../../lib/app-error.js';
-
-const kindFor: Record<BoxSize, PieceKind> = { dozen: 'ring', 'half-dozen': 'ring', holes: 'hole' };
 
 export interface CheckedBox {
   size: BoxSize;
@@ -45,9 +43,9 @@ export function checkOrder(day: BakeDayView, input: CreateOrderInput): CheckedOr
         fields[`boxes.${b}.items.${i}.menuItemId`] = 'This item is not on this bake day’s menu';
         return;
       }
-      if (menuItem.kind !== kindFor[box.size]) {
-        fields[`boxes.${b}.items.${i}.menuItemId`] =
-          box.size === 'holes' ? `${menuItem.name} is a ring and can't go in a bag of holes` : `${menuItem.name} is a hole and can't go in a ring box`;
+      const wrongKind = wrongKindMessage(box.size, menuItem.name, menuItem.kind);
+      if (wrongKind) {
+        fields[`boxes.${b}.items.${i}.menuItemId`] = wrongKind;
         return;
       }
       if (seen.has(menuItem.id)) {
@@ -67,8 +65,8 @@ export function checkOrder(day: BakeDayView, input: CreateOrderInput): CheckedOr
     const [first] = Object.entries(fields);
     throw new AppError('invalid', `${first![0]}: ${first![1]}`, 400, { fields });
   }
-  const rings = boxes.filter((b) => kindFor[b.size] === 'ring').reduce((n, b) => n + b.pieces, 0);
-  const holes = boxes.filter((b) => kindFor[b.size] === 'hole').reduce((n, b) => n + b.pieces, 0);
+  const rings = boxes.reduce((n, b) => n + boxPieces(b.size, b.pieces).rings, 0);
+  const holes = boxes.reduce((n, b) => n + boxPieces(b.size, b.pieces).holes, 0);
   const price = priceOrder(boxes.map((b) => ({ boxPriceCents: b.priceCents, items: b.lines })), day.tax);
   return { boxes, rings, holes, price };
 }

@@ -13,6 +13,7 @@ import { audit } from '../audit/audit.js';
 import { queueCancellation } from '../mail/order-mails.js';
 import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
 import { expireCheckout, openCheckout, refundPayment } from '../../integrations/checkout.js';
+import { logger } from '../../lib/logger.js';
 
 const orderInclude = [
   { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
@@ -109,8 +110,8 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
       if (existing) {
         throw new AppError('hold_exists', 'You already have a box on hold for this bake day. Finish paying for it or cancel it first.', 409, { orderId: existing.id });
       }
-      if (input.claimToken) await claimOffer(user, day.id, input.claimToken, transaction);
-      if (!(await takeCapacity(day.id, checked.rings, checked.holes, transaction))) {
+      if (input.claimToken) await claimOffer(user, day.id, input.claimToken, transaction, now);
+      if (!(await takeCapacity(day.id, checked.rings, checked.holes, transaction, { now }))) {
         throw new AppError('sold_out', 'Sorry — there are not enough doughnuts left for this order', 409, { remaining: day.remaining });
       }
       if (!(await takeWindowSlot(day.id, input.pickupWindowId, transaction))) {
@@ -133,9 +134,9 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     return { id: order.id, status: 'held', totalCents: order.totalCents, holdExpiresAt: holdExpiresAt.toISOString(), checkoutUrl: session.url! };
   } catch (err) {
     await database().transaction(async (transaction) => {
-      if (await releaseOrder(order.id, ['held'], 'expired', transaction)) await offerFreedCapacity(day.id, transaction);
+      if (await releaseOrder(order.id, ['held'], 'expired', transaction)) await offerFreedCapacity(day.id, transaction, now);
     });
-    console.error('[orders] checkout could not be opened:', (err as Error).message);
+    logger.error({ err, orderId: order.id }, 'checkout could not be opened');
     throw new AppError('payments_unavailable', 'Card payments are not available right now. Nothing was charged; please try again shortly.', 502);
   }
 }
@@ -176,7 +177,7 @@ export async function cancelOrder(user: Me, id: string, now: Date): Promise<Orde
     }
     await queueCancellation(order.id, refunded, transaction);
     await audit({ actorId: user.id, action: 'order.cancelled', subjectType: 'order', subjectId: order.id, details: { refundedCents: refunded } }, transaction);
-    await offerFreedCapacity(order.bakeDayId, transaction);
+    await offerFreedCapacity(order.bakeDayId, transaction, now);
   });
   return getOrder(user, id, now);
 }

@@ -1,4 +1,4 @@
-import { formatCents, type Me } from '@fryline/schemas';
+import { formatCents, type Me, type RefundView } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { Order, Refund } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
@@ -8,21 +8,12 @@ import { queueRefundNotice } from '../mail/order-mails.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
 
-export interface RefundView {
-  id: string;
-  orderId: string;
-  amountCents: number;
-  reason: string;
-  createdAt: string;
-  order: { status: string; totalCents: number; refundedCents: number };
-}
-
 /**
  * The owner refunds part or all of a paid order, at any time. The client's
  * request key makes a double-click refund once; the order row lock makes two
  * different refunds queue up, so the total can never be exceeded.
  */
-export async function refundOrder(owner: Me, orderId: string, amountCents: number, reason: string, requestKey: string): Promise<RefundView> {
+export async function refundOrder(owner: Me, orderId: string, amountCents: number, reason: string, requestKey: string, now: Date): Promise<RefundView> {
   const refund = await database().transaction(async (transaction) => {
     const order = await Order.findByPk(orderId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!order) throw notFound('Order');
@@ -45,7 +36,7 @@ export async function refundOrder(owner: Me, orderId: string, amountCents: numbe
     const row = await refundPayment(order, amountCents, 'requested_by_customer', requestKey, owner.id, transaction, reason);
     if (amountCents === left && order.status === 'paid') {
       const released = await releaseOrder(order.id, ['paid'], 'refunded', transaction);
-      if (released) await offerFreedCapacity(order.bakeDayId, transaction);
+      if (released) await offerFreedCapacity(order.bakeDayId, transaction, now);
     }
     await queueRefundNotice(order.id, row.id, amountCents, transaction);
     await audit({ actorId: owner.id, action: 'order.refunded', subjectType: 'order', subjectId: order.id, details: { amountCents, reason } }, transaction);

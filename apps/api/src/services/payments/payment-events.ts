@@ -9,6 +9,7 @@ import { queueConfirmation, queueLateRefundApology } from '../mail/order-mails.j
 import { refundPayment } from '../../integrations/checkout.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
+import { logger } from '../../lib/logger.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}
@@ -18,7 +19,7 @@ class NotRetaken extends Error {}
  * transaction as its effect, so a duplicate (in a row or at the same time)
  * finds the id taken and does nothing; events may arrive in any order.
  */
-export async function handlePaymentEvent(event: Stripe.Event): Promise<'applied' | 'duplicate'> {
+export async function handlePaymentEvent(event: Stripe.Event, now: Date): Promise<'applied' | 'duplicate'> {
   return database().transaction(async (transaction) => {
     const inserted = await database().query(
       `INSERT INTO payment_events (id, type) VALUES (:id, :type) ON CONFLICT (id) DO NOTHING RETURNING id`,
@@ -30,13 +31,13 @@ export async function handlePaymentEvent(event: Stripe.Event): Promise<'applied'
     switch (event.type) {
       case 'checkout.session.completed':
       case 'checkout.session.async_payment_succeeded':
-        ({ orderId, outcome } = await sessionPaid(event.data.object as Stripe.Checkout.Session, transaction));
+        ({ orderId, outcome } = await sessionPaid(event.data.object as Stripe.Checkout.Session, transaction, now));
         break;
       case 'checkout.session.expired':
-        ({ orderId, outcome } = await sessionExpired(event.data.object as Stripe.Checkout.Session, transaction));
+        ({ orderId, outcome } = await sessionExpired(event.data.object as Stripe.Checkout.Session, transaction, now));
         break;
       case 'charge.refunded':
-        ({ orderId, outcome } = await chargeRefunded(event.data.object as Stripe.Charge, transaction));
+        ({ orderId, outcome } = await chargeRefunded(event.data.object as Stripe.Charge, transaction, now));
         break;
       default:
         break;
@@ -58,12 +59,12 @@ async function lockOrder(id: string | null, transaction: Transaction) {
 }
 
 /** Marks a held (or re-taken) order paid with a fresh pickup code; retries on the rare code clash. */
-async function markPaid(order: Order, paymentIntentId: string | null, holdsCapacity: boolean, transaction: Transaction) {
+async function markPaid(order: Order, paymentIntentId: string | null, holdsCapacity: boolean, transaction: Transaction, now: Date) {
   for (let attempt = 0; ; attempt += 1) {
     try {
       await database().transaction({ transaction }, async (savepoint) => {
         await order.update(
-          { status: 'paid', paidAt: new Date(), paymentIntentId, pickupCode: newPickupCode(), holdExpiresAt: null, holdsCapacity },
+          { status: 'paid', paidAt: now, paymentIntentId, pickupCode: newPickupCode(), holdExpiresAt: null, holdsCapacity },
           { transaction: savepoint },
         );
       });
@@ -77,17 +78,17 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
   await audit({ actorId: null, action: 'order.paid', subjectType: 'order', subjectId: order.id }, transaction);
 }
 
-async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transaction) {
+async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transaction, now: Date) {
   const order = await lockOrder(orderIdOf(session), transaction);
   if (!order) return { orderId: null, outcome: 'unknown order' };
   if (session.payment_status !== 'paid') return { orderId: order.id, outcome: 'not paid yet' };
   const paymentIntentId = intentIdOf(session.payment_intent as string | { id: string } | null);
   if (session.amount_total !== order.totalCents) {
-    console.error(`[payments] order ${order.id}: paid ${session.amount_total} but total is ${order.totalCents}`);
+    logger.error({ orderId: order.id, paidCents: session.amount_total, totalCents: order.totalCents }, 'paid amount differs from the order total');
   }
   switch (order.status) {
     case 'held':
-      await markPaid(order, paymentIntentId, true, transaction);
+      await markPaid(order, paymentIntentId, true, transaction, now);
       return { orderId: order.id, outcome: 'paid' };
     case 'expired': {
       // Paid after its hold lapsed: keep it if the pieces are still there, else refund in full.
@@ -102,7 +103,7 @@ async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transa
           throw err;
         });
       if (retaken) {
-        await markPaid(order, paymentIntentId, true, transaction);
+        await markPaid(order, paymentIntentId, true, transaction, now);
         return { orderId: order.id, outcome: 'paid late, pieces re-taken' };
       }
       return refundLate(order, paymentIntentId, transaction);
@@ -124,13 +125,13 @@ async function refundLate(order: Order, paymentIntentId: string | null, transact
   return { orderId: order.id, outcome: 'paid late, refunded' };
 }
 
-async function sessionExpired(session: Stripe.Checkout.Session, transaction: Transaction) {
+async function sessionExpired(session: Stripe.Checkout.Session, transaction: Transaction, now: Date) {
   const orderId = orderIdOf(session);
   const order = await lockOrder(orderId, transaction);
   if (!order) return { orderId: null, outcome: 'unknown order' };
   if (order.checkoutSessionId && order.checkoutSessionId !== session.id) return { orderId: order.id, outcome: 'older session' };
   const released = await releaseOrder(order.id, ['held'], 'expired', transaction);
-  if (released) await offerFreedCapacity(order.bakeDayId, transaction);
+  if (released) await offerFreedCapacity(order.bakeDayId, transaction, now);
   return { orderId: order.id, outcome: released ? 'hold expired' : `already ${order.status}` };
 }
 
@@ -138,7 +139,7 @@ async function sessionExpired(session: Stripe.Checkout.Session, transaction: Tra
  * A refund seen at the payments service (ours, or one made on its
  * dashboard). A refund may arrive before the payment's own completion event.
  */
-async function chargeRefunded(charge: Stripe.Charge, transaction: Transaction) {
+async function chargeRefunded(charge: Stripe.Charge, transaction: Transaction, now: Date) {
   const intentId = intentIdOf(charge.payment_intent as string | { id: string } | null);
   let order = intentId ? await Order.findOne({ where: { paymentIntentId: intentId }, transaction, lock: transaction.LOCK.UPDATE }) : null;
   if (!order && intentId) {
@@ -153,7 +154,7 @@ async function chargeRefunded(charge: Stripe.Charge, transaction: Transaction) {
   if (refunded >= order.totalCents) {
     if (order.status === 'held' || order.status === 'paid') {
       const released = await releaseOrder(order.id, [order.status], 'refunded', transaction);
-      if (released) await offerFreedCapacity(order.bakeDayId, transaction);
+      if (released) await offerFreedCapacity(order.bakeDayId, transaction, now);
     } else if (order.status === 'expired') {
       await order.update({ status: 'refunded' }, { transaction });
     }

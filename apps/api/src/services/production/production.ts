@@ -4,7 +4,7 @@ import {
   DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, ProductionInputError, planBake,
   type BakePlan, type BoxOffer, type Formula, type OrderLine, type PlanBakeInput,
 } from '@fryline/production';
-import type { FormulaInput, PlanMeta, ProductionSettingsInput } from '@fryline/schemas';
+import { boxLabel, boxPieces, type FormulaInput, type PlanMeta, type ProductionSettingsInput } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { BakeDay, FormulaVersion, ProductionSettings } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
@@ -159,9 +159,8 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   }));
   const boxes: BoxOffer[] = (day.boxes ?? []).map((b) => ({
     id: b.size,
-    name: b.size === 'holes' ? 'Bag of holes' : b.size === 'dozen' ? 'Dozen' : 'Half dozen',
-    rings: b.size === 'holes' ? 0 : b.pieces,
-    holes: b.size === 'holes' ? b.pieces : 0,
+    name: boxLabel(b.size),
+    ...boxPieces(b.size, b.pieces),
     glazeId: null,
     priceCents: b.priceCents,
   }));

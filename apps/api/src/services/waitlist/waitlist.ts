@@ -13,10 +13,10 @@ import { context } from '../../integrations/context.js';
 
 export const OFFER_MINUTES = 30;
 
-export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, holes: number) {
+export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, holes: number, now: Date) {
   const day = await BakeDay.findByPk(bakeDayId);
   if (!day || day.status !== 'published') throw notFound('Bake day');
-  if (new Date() >= day.cutoffAt) throw new AppError('closed', 'Orders for this bake day are closed', 409);
+  if (now >= day.cutoffAt) throw new AppError('closed', 'Orders for this bake day are closed', 409);
   const existing = await WaitlistEntry.findOne({ where: { bakeDayId, userId: user.id, status: { [Op.in]: ['waiting', 'offered'] } } });
   const entry = existing ?? (await WaitlistEntry.create({ bakeDayId, userId: user.id, rings, holes }));
   const position = await WaitlistEntry.count({ where: { bakeDayId, status: 'waiting', createdAt: { [Op.lte]: entry.createdAt } } });
@@ -38,24 +38,24 @@ export async function listMyWaitlist(user: Me): Promise<WaitlistEntryView[]> {
   );
 }
 
-export async function leaveWaitlist(user: Me, id: string) {
+export async function leaveWaitlist(user: Me, id: string, now: Date) {
   await database().transaction(async (transaction) => {
     const entry = await WaitlistEntry.findOne({ where: { id, userId: user.id }, transaction, lock: transaction.LOCK.UPDATE });
     if (!entry) throw notFound('Waitlist entry');
     if (entry.status === 'offered') {
       await giveBackCapacity(entry.bakeDayId, entry.rings, entry.holes, transaction);
       await entry.update({ status: 'left' }, { transaction });
-      await offerFreedCapacity(entry.bakeDayId, transaction);
+      await offerFreedCapacity(entry.bakeDayId, transaction, now);
     } else if (entry.status === 'waiting') {
       await entry.update({ status: 'left' }, { transaction });
     }
   });
 }
 
-export async function getOffer(user: Me, token: string): Promise<WaitlistOfferView> {
+export async function getOffer(user: Me, token: string, now: Date): Promise<WaitlistOfferView> {
   const entry = await WaitlistEntry.findOne({ where: { claimToken: token, userId: user.id } });
   if (!entry) throw notFound('Offer');
-  if (entry.status !== 'offered' || !entry.offerExpiresAt || entry.offerExpiresAt <= new Date()) {
+  if (entry.status !== 'offered' || !entry.offerExpiresAt || entry.offerExpiresAt <= now) {
     throw new AppError('offer_expired', 'This offer has expired or was already used', 409);
   }
   return { bakeDayId: entry.bakeDayId, rings: entry.rings, holes: entry.holes, expiresAt: entry.offerExpiresAt.toISOString() };
@@ -66,13 +66,13 @@ export async function getOffer(user: Me, token: string): Promise<WaitlistOfferVi
  * the pool inside the order's transaction, which then takes what the order
  * needs, so nobody else can take them in between.
  */
-export async function claimOffer(user: Me, bakeDayId: string, token: string, transaction: Transaction) {
+export async function claimOffer(user: Me, bakeDayId: string, token: string, transaction: Transaction, now: Date) {
   const rows = await database().query<{ rings: number; holes: number }>(
     `UPDATE waitlist_entries SET status = 'claimed', updated_at = now()
       WHERE claim_token = :token AND user_id = :userId AND bake_day_id = :bakeDayId
-        AND status = 'offered' AND offer_expires_at > now()
+        AND status = 'offered' AND offer_expires_at > :now
       RETURNING rings, holes`,
-    { replacements: { token, userId: user.id, bakeDayId }, type: QueryTypes.SELECT, transaction },
+    { replacements: { token, userId: user.id, bakeDayId, now }, type: QueryTypes.SELECT, transaction },
   );
   const offer = rows[0];
   if (!offer) throw new AppError('offer_expired', 'This offer has expired or was already used', 409);
@@ -84,7 +84,7 @@ export async function claimOffer(user: Me, bakeDayId: string, token: string, tra
  * at the head of the list whose request fits gets its pieces set aside for
  * OFFER_MINUTES and an e-mail with a claim link.
  */
-export async function offerFreedCapacity(bakeDayId: string, transaction: Transaction): Promise<number> {
+export async function offerFreedCapacity(bakeDayId: string, transaction: Transaction, now: Date): Promise<number> {
   let offered = 0;
   for (;;) {
     const [entry] = await database().query<{ id: string; user_id: string; rings: number; holes: number }>(
@@ -94,9 +94,9 @@ export async function offerFreedCapacity(bakeDayId: string, transaction: Transac
       { replacements: { bakeDayId }, type: QueryTypes.SELECT, transaction },
     );
     if (!entry) return offered;
-    if (!(await takeCapacity(bakeDayId, entry.rings, entry.holes, transaction))) return offered;
+    if (!(await takeCapacity(bakeDayId, entry.rings, entry.holes, transaction, { now }))) return offered;
     const token = crypto.randomBytes(24).toString('base64url');
-    const expiresAt = new Date(Date.now() + OFFER_MINUTES * 60_000);
+    const expiresAt = new Date(now.getTime() + OFFER_MINUTES * 60_000);
     await WaitlistEntry.update({ status: 'offered', claimToken: token, offerExpiresAt: expiresAt }, { where: { id: entry.id }, transaction });
     const [user, day, settings] = await Promise.all([
       User.findByPk(entry.user_id, { transaction }),
@@ -127,7 +127,7 @@ export async function lapseOffers(now: Date): Promise<number> {
       { replacements: { now }, type: QueryTypes.SELECT, transaction },
     );
     for (const row of lapsed) await giveBackCapacity(row.bake_day_id, row.rings, row.holes, transaction);
-    for (const dayId of new Set(lapsed.map((r) => r.bake_day_id))) await offerFreedCapacity(dayId, transaction);
+    for (const dayId of new Set(lapsed.map((r) => r.bake_day_id))) await offerFreedCapacity(dayId, transaction, now);
     return lapsed.length;
   });
 }

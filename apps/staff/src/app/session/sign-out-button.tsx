@@ -1,9 +1,9 @@
 import { useState } from 'react';
+import { SignOutButton as SignOut } from '@fryline/ui';
 import { errorMessage } from '@fryline/ui/api-client';
-import { useSignOut } from './use-sign-out';
 
+/** Sign out, with the reason beside the button when it did not work. */
 export function SignOutButton() {
-  const signOut = useSignOut();
   const [problem, setProblem] = useState<string | null>(null);
   return (
     <span className="flex items-center gap-2">
@@ -12,19 +12,7 @@ export function SignOutButton() {
           {problem}
         </span>
       )}
-      <button
-        type="button"
-        className="btn btn-quiet btn-small"
-        disabled={signOut.isPending}
-        onClick={() =>
-          signOut.mutate(undefined, {
-            onSuccess: () => window.location.assign('/'),
-            onError: (error) => setProblem(errorMessage(error)),
-          })
-        }
-      >
-        Sign out
-      </button>
+      <SignOut onError={(error) => setProblem(errorMessage(error))} />
     </span>
   );
 }

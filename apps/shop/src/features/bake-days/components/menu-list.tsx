@@ -1,5 +1,4 @@
-import type { BakeDayView } from '@fryline/schemas';
-import { formatCents } from '@fryline/schemas';
+import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { MenuItemInfo } from '../../../components/menu-item-info';
 import { MenuPhoto } from '@fryline/ui';
 

@@ -3,7 +3,6 @@ import type { CreatedOrder, CreateOrderInput } from '@fryline/schemas';
 import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
-
 /** An order request; `claimToken` orders within a waitlist offer. */
 export type OrderRequest = CreateOrderInput & { claimToken?: string };
 

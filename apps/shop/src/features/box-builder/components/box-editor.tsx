@@ -1,7 +1,6 @@
 import { useId, useState, type Dispatch } from 'react';
-import type { BakeDayView } from '@fryline/schemas';
+import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { boxOf, filledCount, itemsForBox, type DraftAction, type DraftBox } from '../model/draft';
-import { formatCents } from '@fryline/schemas';
 import { MenuItemInfo } from '../../../components/menu-item-info';
 import { MenuPhoto } from '@fryline/ui';
 import { QuantityStepper } from './quantity-stepper';

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import type { BakeDayView } from '@fryline/schemas';
-import { waitlistQueries, type WaitlistEntryView } from '../api/waitlist-queries';
+import type { BakeDayView, WaitlistEntryView } from '@fryline/schemas';
+import { waitlistQueries } from '../api/waitlist-queries';
 import { useLeaveWaitlist } from '../api/use-waitlist-actions';
 import { errorMessage } from '@fryline/ui/api-client';
 import { formatDate, formatDateTime, formatPieces } from '@fryline/ui/format';

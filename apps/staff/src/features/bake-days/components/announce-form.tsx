@@ -15,7 +15,7 @@ import {
 import { zoneName } from '../../../lib/time-zones';
 import { ZoneOptions } from '../../../lib/zone-options';
 import { BoxesFieldset } from './boxes-fieldset';
-import { Field } from './field';
+import { FieldShell } from '@fryline/ui';
 import { MenuFieldset } from './menu-fieldset';
 import { PickupWindowsFieldset } from './pickup-windows-fieldset';
 
@@ -107,22 +107,22 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
       <fieldset className="card flex flex-col gap-3">
         <legend className="float-left w-full text-xl font-extrabold">When and where</legend>
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2">
-          <Field id={id('date')} label="Date" error={errors.date?.message}>
+          <FieldShell id={id('date')} label="Date" error={errors.date?.message}>
             {(input) => <input {...input} type="date" min={today} {...register('date')} />}
-          </Field>
-          <Field id={id('zone')} label="Time zone" help="Pickup windows and the times below are in this zone." error={errors.timeZone?.message}>
+          </FieldShell>
+          <FieldShell id={id('zone')} label="Time zone" help="Pickup windows and the times below are in this zone." error={errors.timeZone?.message}>
             {(input) => (
               <select {...input} {...register('timeZone')}>
                 <ZoneOptions current={defaults.timeZone} />
               </select>
             )}
-          </Field>
-          <Field id={id('place')} label="Place" help="As customers will see it, like a market and stall number." error={errors.place?.message}>
+          </FieldShell>
+          <FieldShell id={id('place')} label="Place" help="As customers will see it, like a market and stall number." error={errors.place?.message}>
             {(input) => <input {...input} type="text" autoComplete="off" {...register('place')} />}
-          </Field>
-          <Field id={id('address')} label="Address" optional error={errors.address?.message}>
+          </FieldShell>
+          <FieldShell id={id('address')} label="Address" optional error={errors.address?.message}>
             {(input) => <input {...input} type="text" autoComplete="off" {...register('address')} />}
-          </Field>
+          </FieldShell>
         </div>
       </fieldset>
 
@@ -137,7 +137,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
           number as rings.
         </p>
         <div className="grid grid-cols-2 gap-x-4 gap-y-3 sm:max-w-md">
-          <Field id={id('rings')} label="Rings" error={errors.ringCapacity?.message}>
+          <FieldShell id={id('rings')} label="Rings" error={errors.ringCapacity?.message}>
             {(input) => (
               <input
                 {...input}
@@ -150,8 +150,8 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
                 })}
               />
             )}
-          </Field>
-          <Field id={id('holes')} label="Holes" error={errors.holeCapacity?.message}>
+          </FieldShell>
+          <FieldShell id={id('holes')} label="Holes" error={errors.holeCapacity?.message}>
             {(input) => (
               <input
                 {...input}
@@ -164,7 +164,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
                 })}
               />
             )}
-          </Field>
+          </FieldShell>
         </div>
         <p className="text-sm text-muted">
           {equipmentRings === undefined
@@ -177,7 +177,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
         <legend className="float-left w-full text-xl font-extrabold">Pre-orders</legend>
         <p className="text-muted">Times in {zoneName(timeZone)} time.</p>
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2">
-          <Field
+          <FieldShell
             id={id('opens')}
             label="Orders open"
             optional
@@ -185,8 +185,8 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
             error={errors.ordersOpenAt?.message}
           >
             {(input) => <input {...input} type="datetime-local" {...register('ordersOpenAt')} />}
-          </Field>
-          <Field
+          </FieldShell>
+          <FieldShell
             id={id('cutoff')}
             label="Orders close (cut-off)"
             optional
@@ -194,7 +194,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
             error={errors.cutoffAt?.message}
           >
             {(input) => <input {...input} type="datetime-local" {...register('cutoffAt')} />}
-          </Field>
+          </FieldShell>
         </div>
       </fieldset>
 

@@ -16,8 +16,6 @@ export function fieldError(form: SettingsForm, name: string): string | undefined
   return (get(form.formState.errors, name) as { message?: string } | undefined)?.message;
 }
 
-export { FieldShell, fieldAria };
-
 /** One numeric setting with its label, unit, help line and error. */
 export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; field: FieldDef; tempUnit: TempUnit }) {
   const id = fieldId(field.name);

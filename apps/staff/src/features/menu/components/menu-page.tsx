@@ -1,9 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link, useLocation } from 'react-router-dom';
 import type { MenuItemAdminView } from '@fryline/schemas';
-import { ErrorState, LoadingState } from '@fryline/ui';
 import { PageFrame } from '../../../components/page-frame';
-import { Caution } from '../../../components/caution';
+import { Caution, ErrorState, LoadingState } from '@fryline/ui';
 import { menuQueries } from '../api/menu-queries';
 import { MenuItemCard } from './menu-item-card';
 

@@ -1,7 +1,7 @@
 // Prints how fast GET /api/bake-days/:id/plan answers with 2,000 orders in
 // the database. A benchmark, not a test: it asserts nothing.
 //
-//   node --import tsx apps/api/bench/plan-route.bench.ts
+//   node --import tsx seeds/bench/plan-route.bench.ts
 //
 // Uses BENCH_DATABASE_URL (default: a `fryline_bench` database on the start
 // command's cluster, 127.0.0.1:5433 — run `npm start` first). The database is
@@ -11,10 +11,10 @@ import crypto from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 import pg from 'pg';
 import { sign } from 'cookie-signature';
-import { connectDatabase, closeDatabase, migrate, BakeDay, User } from '../src/db/index.js';
-import { loadConfig } from '../src/config/env.js';
-import { createApp } from '../src/app.js';
-import { seedDemo } from '@fryline/seeds';
+import { connectDatabase, closeDatabase, migrate, BakeDay, User } from '@fryline/api/db';
+import { loadConfig } from '@fryline/api/config';
+import { createApp } from '@fryline/api';
+import { seedDemo } from '../src/index.js';
 
 const ORDERS = 2000;
 const RUNS = 200;
