@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  cDeltaToF, cToF, fDeltaToC, fToC, gToLb, gToOz, inToMm, lbToG, mmToIn, ozToG, roundCents, tempInBothScales,
+  cDeltaToF, cToF, fDeltaToC, fToC, gToLb, gToOz, inToMm, lbToG, mmToIn, ozToG, roundHalfUp, tempInBothScales,
 } from './units.js';
 import { ProductionInputError } from './errors.js';
 
@@ -47,8 +47,8 @@ describe('masses and lengths (NIST Handbook 44 App. C, exact)', () => {
 
 describe('money helpers', () => {
   it('rounds cents to the nearest cent with halves up (worked by hand)', () => {
-    expect(roundCents(12.5)).toBe(13);
-    expect(roundCents(12.49)).toBe(12);
+    expect(roundHalfUp(12.5)).toBe(13);
+    expect(roundHalfUp(12.49)).toBe(12);
   });
 
   it('refuses non-numbers with a clear error', () => {

@@ -9,16 +9,8 @@ import { z } from 'zod';
 export const SHOP_LOCALE = 'en-US';
 export const SHOP_CURRENCY = 'USD';
 
-/**
- * Rounds num ÷ den to a whole number, halves up (0.5 → 1, 2.5 → 3).
- * With integer num and den > 0 (as the price and tax sums use it) there is
- * no floating-point drift; with den = 1 it rounds an already computed
- * amount of cents, as the cost sums do.
- */
-export function roundHalfUp(num: number, den = 1): number {
-  if (!Number.isFinite(num) || !Number.isFinite(den) || den <= 0) throw new RangeError(`roundHalfUp: ${num} / ${den} is not a finite amount`);
-  return Math.floor((2 * num + den) / (2 * den));
-}
+/** The one half-up rounding lives with the maths (packages/production); money uses it from here. */
+export { roundHalfUp } from '@fryline/production';
 
 /**
  * What an amount may look like when typed: an optional currency sign, whole

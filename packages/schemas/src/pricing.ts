@@ -1,5 +1,5 @@
 import type { TaxSetting } from './bake-days.js';
-import { roundHalfUp } from './money.js';
+import { roundHalfUp } from '@fryline/production';
 
 export interface PricedBoxInput {
   boxPriceCents: number;

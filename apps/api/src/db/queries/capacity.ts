@@ -102,3 +102,23 @@ export async function releaseOrder(
   }
   return row;
 }
+
+/**
+ * Sets a bake day's capacity and moves what is left by the same difference,
+ * in one statement that refuses to go below what is already sold or held.
+ * False when the day is not there or the new capacity is too low.
+ */
+export async function setDayCapacity(bakeDayId: string, rings: number, holes: number): Promise<boolean> {
+  const rows = await database().query(
+    `UPDATE bake_days
+        SET ring_capacity = :rings, rings_remaining = rings_remaining + (:rings - ring_capacity),
+            hole_capacity = :holes, holes_remaining = holes_remaining + (:holes - hole_capacity),
+            updated_at = now()
+      WHERE id = :id
+        AND rings_remaining + (:rings - ring_capacity) >= 0
+        AND holes_remaining + (:holes - hole_capacity) >= 0
+      RETURNING id`,
+    { replacements: { id: bakeDayId, rings, holes }, type: QueryTypes.SELECT },
+  );
+  return rows.length === 1;
+}

@@ -1,6 +1,7 @@
 import type Stripe from 'stripe';
-import { QueryTypes, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { database } from '../../db/sequelize.js';
+import { recordEvent, recordOutcome } from '../../db/queries/payment-events.js';
 import { Order } from '../../db/models/index.js';
 import { context } from '../../integrations/context.js';
 import { releaseOrder, takeCapacity, takeWindowSlot } from '../../db/queries/capacity.js';
@@ -21,11 +22,7 @@ class NotRetaken extends Error {}
  */
 export async function handlePaymentEvent(event: Stripe.Event, now: Date): Promise<'applied' | 'duplicate'> {
   return database().transaction(async (transaction) => {
-    const inserted = await database().query(
-      `INSERT INTO payment_events (id, type) VALUES (:id, :type) ON CONFLICT (id) DO NOTHING RETURNING id`,
-      { replacements: { id: event.id, type: event.type }, type: QueryTypes.SELECT, transaction },
-    );
-    if (inserted.length === 0) return 'duplicate';
+    if (!(await recordEvent(event.id, event.type, transaction))) return 'duplicate';
     let orderId: string | null = null;
     let outcome = 'ignored';
     switch (event.type) {
@@ -42,10 +39,7 @@ export async function handlePaymentEvent(event: Stripe.Event, now: Date): Promis
       default:
         break;
     }
-    await database().query(`UPDATE payment_events SET order_id = :orderId, outcome = :outcome WHERE id = :id`, {
-      replacements: { id: event.id, orderId, outcome },
-      transaction,
-    });
+    await recordOutcome(event.id, orderId, outcome, transaction);
     return 'applied';
   });
 }

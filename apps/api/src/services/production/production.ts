@@ -1,11 +1,12 @@
-import { QueryTypes } from 'sequelize';
 import { DateTime } from 'luxon';
 import {
   DEFAULT_DOUGH_ALLERGENS, DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, ProductionInputError, planBake,
   type BakePlan, type BoxOffer, type Formula, type OrderLine, type PlanBakeInput,
 } from '@fryline/production';
-import { boxLabel, boxPieces, type FormulaInput, type PlanMeta, type ProductionSettingsInput } from '@fryline/schemas';
+import { boxLabel, boxPieces, type FormulaInput, type PlanMeta, type PlanResponse, type ProductionSettingsInput } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
+import { orderCountsByStatus, orderedLines } from '../../db/queries/plan.js';
+import { setDayCapacity } from '../../db/queries/capacity.js';
 import { BakeDay, FormulaVersion, ProductionSettings } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit/audit.js';
@@ -99,19 +100,6 @@ function planInput(
   };
 }
 
-export interface PlanResponse {
-  plan: BakePlan;
-  meta: PlanMeta;
-}
-
-interface LineRow {
-  menu_item_id: string;
-  name: string;
-  kind: 'ring' | 'hole';
-  glaze_recipe_id: string | null;
-  quantity: number;
-}
-
 /**
  * The production sheet for a bake day: every paid and held order counted
  * (held ones may still lapse, so the sheet errs on the side of enough dough).
@@ -132,21 +120,8 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   const formula = pinned ? { id: pinned.id, version: pinned.version, note: pinned.note, formula: pinned.formula } : latest;
 
   const [lines, counts, settings] = await Promise.all([
-    database().query<LineRow>(
-      `SELECT l.menu_item_id, m.name, l.kind, m.glaze_recipe_id, SUM(l.quantity)::int AS quantity
-         FROM orders o
-         JOIN order_boxes b ON b.order_id = o.id
-         JOIN order_lines l ON l.order_box_id = b.id
-         JOIN menu_items m ON m.id = l.menu_item_id
-        WHERE o.bake_day_id = :id AND o.status IN ('held', 'paid', 'collected')
-        GROUP BY l.menu_item_id, m.name, l.kind, m.glaze_recipe_id
-        ORDER BY m.name`,
-      { replacements: { id: day.id }, type: QueryTypes.SELECT },
-    ),
-    database().query<{ status: string; n: number }>(
-      `SELECT status, count(*)::int AS n FROM orders WHERE bake_day_id = :id AND status IN ('held', 'paid', 'collected') GROUP BY status`,
-      { replacements: { id: day.id }, type: QueryTypes.SELECT },
-    ),
+    orderedLines(day.id),
+    orderCountsByStatus(day.id),
     getProductionSettings(),
   ]);
   const known = new Set(settings.glazes.map((g) => g.id));
@@ -257,18 +232,8 @@ export async function setBakeDayCapacity(userId: string, bakeDayId: string, ring
       derived,
     });
   }
-  const rows = await database().query(
-    `UPDATE bake_days
-        SET ring_capacity = :rings, rings_remaining = rings_remaining + (:rings - ring_capacity),
-            hole_capacity = :holes, holes_remaining = holes_remaining + (:holes - hole_capacity),
-            updated_at = now()
-      WHERE id = :id
-        AND rings_remaining + (:rings - ring_capacity) >= 0
-        AND holes_remaining + (:holes - hole_capacity) >= 0
-      RETURNING id`,
-    { replacements: { id: bakeDayId, rings, holes }, type: QueryTypes.SELECT },
-  );
-  if (rows.length === 0) {
+  const changed = await setDayCapacity(bakeDayId, rings, holes);
+  if (!changed) {
     if (!(await BakeDay.findByPk(bakeDayId))) throw notFound('Bake day');
     throw new AppError('below_sold', 'More than that is already sold or held for this day', 409);
   }

@@ -1,11 +1,12 @@
 import crypto from 'node:crypto';
-import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { DateTime } from 'luxon';
 import type { Me, WaitlistEntryView, WaitlistOfferView } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { BakeDay, User, WaitlistEntry } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { giveBackCapacity, takeCapacity } from '../../db/queries/capacity.js';
+import { lapseDueOffers, lockNextWaiting, markOfferClaimed } from '../../db/queries/waitlist.js';
 import { enqueueMail } from '../mail/outbox.js';
 import { renderMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
@@ -67,14 +68,7 @@ export async function getOffer(user: Me, token: string, now: Date): Promise<Wait
  * needs, so nobody else can take them in between.
  */
 export async function claimOffer(user: Me, bakeDayId: string, token: string, transaction: Transaction, now: Date) {
-  const rows = await database().query<{ rings: number; holes: number }>(
-    `UPDATE waitlist_entries SET status = 'claimed', updated_at = now()
-      WHERE claim_token = :token AND user_id = :userId AND bake_day_id = :bakeDayId
-        AND status = 'offered' AND offer_expires_at > :now
-      RETURNING rings, holes`,
-    { replacements: { token, userId: user.id, bakeDayId, now }, type: QueryTypes.SELECT, transaction },
-  );
-  const offer = rows[0];
+  const offer = await markOfferClaimed(token, user.id, bakeDayId, now, transaction);
   if (!offer) throw new AppError('offer_expired', 'This offer has expired or was already used', 409);
   await giveBackCapacity(bakeDayId, offer.rings, offer.holes, transaction);
 }
@@ -87,12 +81,7 @@ export async function claimOffer(user: Me, bakeDayId: string, token: string, tra
 export async function offerFreedCapacity(bakeDayId: string, transaction: Transaction, now: Date): Promise<number> {
   let offered = 0;
   for (;;) {
-    const [entry] = await database().query<{ id: string; user_id: string; rings: number; holes: number }>(
-      `SELECT id, user_id, rings, holes FROM waitlist_entries
-        WHERE bake_day_id = :bakeDayId AND status = 'waiting'
-        ORDER BY created_at LIMIT 1 FOR UPDATE SKIP LOCKED`,
-      { replacements: { bakeDayId }, type: QueryTypes.SELECT, transaction },
-    );
+    const entry = await lockNextWaiting(bakeDayId, transaction);
     if (!entry) return offered;
     if (!(await takeCapacity(bakeDayId, entry.rings, entry.holes, transaction, { now }))) return offered;
     const token = crypto.randomBytes(24).toString('base64url');
@@ -120,12 +109,7 @@ export async function offerFreedCapacity(bakeDayId: string, transaction: Transac
 /** Offers nobody claimed in time lapse; their pieces go to the next in line. */
 export async function lapseOffers(now: Date): Promise<number> {
   return database().transaction(async (transaction) => {
-    const lapsed = await database().query<{ bake_day_id: string; rings: number; holes: number }>(
-      `UPDATE waitlist_entries SET status = 'lapsed', updated_at = now()
-        WHERE status = 'offered' AND offer_expires_at <= :now
-        RETURNING bake_day_id, rings, holes`,
-      { replacements: { now }, type: QueryTypes.SELECT, transaction },
-    );
+    const lapsed = await lapseDueOffers(now, transaction);
     for (const row of lapsed) await giveBackCapacity(row.bake_day_id, row.rings, row.holes, transaction);
     for (const dayId of new Set(lapsed.map((r) => r.bake_day_id))) await offerFreedCapacity(dayId, transaction, now);
     return lapsed.length;
