@@ -11,3 +11,4 @@ export * from './menu.js';
 export * from './shop-settings.js';
 export * from './audit-log.js';
 export * from './api.js';
+export * from './owner-ops.js';

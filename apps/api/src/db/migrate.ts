@@ -9,6 +9,7 @@ const migrations = {
   '0002-production': () => import('./migrations/0002-production.js'),
   '0010-bake-day-counter': () => import('./migrations/0010-bake-day-counter.js'),
   '0020-owner-menu': () => import('./migrations/0020-owner-menu.js'),
+  '0021-owner-ops': () => import('./migrations/0021-owner-ops.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

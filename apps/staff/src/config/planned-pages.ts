@@ -21,22 +21,4 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Keep working through a patchy connection and catch up when it is back',
     ],
   },
-  'bake-days': {
-    intro: 'Dates, places, pickup windows and capacity.',
-    arrivesWith: "the owner's setup work",
-    will: [
-      'Changing a bake day after it is announced: place, pickup windows, that day’s menu and prices',
-    ],
-  },
-  sales: {
-    intro: 'How each week went, in money and in doughnuts.',
-    arrivesWith: 'the sales report work',
-    will: [
-      'Gross sales, refunds, processing fees and net',
-      'Units sold by flavour, and what sold out',
-      'Sell-through against capacity, and no-shows',
-      'Cost per doughnut and margin',
-      'Charts, and a CSV download',
-    ],
-  },
 };

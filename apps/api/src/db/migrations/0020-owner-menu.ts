@@ -39,6 +39,8 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
       ADD COLUMN hold_minutes integer CHECK (hold_minutes IS NULL OR hold_minutes BETWEEN 1 AND 120),
       ADD COLUMN refund_policy text NOT NULL DEFAULT '' CHECK (length(refund_policy) <= 2000),
       ADD COLUMN updated_by uuid REFERENCES users(id) ON DELETE SET NULL;
+    -- a shop that exists already takes the zone of its latest bake day
+    UPDATE shop_settings SET time_zone = COALESCE((SELECT time_zone FROM bake_days ORDER BY date DESC LIMIT 1), 'UTC');
 
     -- what the audit log page filters by, worked out from the action so every
     -- writer of audit entries gets it without knowing about it

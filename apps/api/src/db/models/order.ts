@@ -31,6 +31,8 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare paidAt: CreationOptional<Date | null>;
   declare collectedAt: CreationOptional<Date | null>;
   declare cancelledAt: CreationOptional<Date | null>;
+  /** After the owner changed this order's window or place: move or cancel with a full refund until then. */
+  declare changeGraceUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -63,6 +65,7 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         paidAt: { type: DataTypes.DATE, allowNull: true },
         collectedAt: { type: DataTypes.DATE, allowNull: true },
         cancelledAt: { type: DataTypes.DATE, allowNull: true },
+        changeGraceUntil: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

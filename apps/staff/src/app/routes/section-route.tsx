@@ -9,6 +9,10 @@ import { EquipmentPage } from '../../features/equipment/components/equipment-pag
 import { FormulaPage } from '../../features/formula/components/formula-page';
 import { ProductionPage } from '../../features/production/components/production-page';
 import { StaffPage } from '../../features/staff-members/components/staff-page';
+import { lazyPage } from '../../lib/lazy-page';
+
+// The charting library loads only with this page.
+const SalesPage = lazyPage(() => import('../../features/sales/components/sales-page'), 'Loading the sales page…');
 import { MenuPage } from '../../features/menu/components/menu-page';
 import { ShopSettingsPage } from '../../features/shop-settings/components/shop-settings-page';
 import { AuditLogPage } from '../../features/audit-log/components/audit-log-page';
@@ -20,6 +24,7 @@ const builtPages: Record<string, ReactNode> = {
   formula: <FormulaPage />,
   equipment: <EquipmentPage />,
   staff: <StaffPage />,
+  sales: <SalesPage />,
   menu: <MenuPage />,
   settings: <ShopSettingsPage />,
   'audit-log': <AuditLogPage />,
