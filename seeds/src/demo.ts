@@ -220,7 +220,7 @@ export async function seedDemo(nowDate: Date = new Date()): Promise<SeedResult> 
     let createdBase = false;
     if (!existing) {
       createdBase = true;
-      await ShopSettings.create({ id: 1, shopName: DEMO_SHOP, currency: 'usd', taxMode: 'included', taxRateBp: 0 }, { transaction });
+      await ShopSettings.create({ id: 1, shopName: DEMO_SHOP, currency: 'usd', taxMode: 'included', taxRateBp: 0, timeZone: DEMO_TIME_ZONE }, { transaction });
       for (const account of demoAccounts) {
         await User.findOrCreate({ where: { email: account.email }, defaults: { ...account, emailVerified: true }, transaction });
       }

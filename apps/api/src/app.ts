@@ -14,7 +14,6 @@ import { csrfProtection } from './middleware/csrf.js';
 import { rateLimits } from './middleware/rate-limits.js';
 import { errorHandler, notFoundHandler } from './middleware/errors.js';
 import { healthRouter } from './routes/health.js';
-import { shopRouter } from './routes/shop.js';
 import { authRouter } from './routes/auth.js';
 import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
@@ -26,6 +25,9 @@ import { staffMembersRouter } from './routes/staff-members.js';
 import { menuItemsRouter } from './routes/menu-items.js';
 import { productionRouter } from './routes/production.js';
 import { shopRulesRouter } from './routes/shop-rules.js';
+import { shopSettingsRouter } from './routes/shop-settings.js';
+import { auditLogRouter } from './routes/audit-log.js';
+import { photosRouter } from './routes/photos.js';
 import { setContext } from './integrations/context.js';
 import { requestClock } from './middleware/request-clock.js';
 import { requestLog } from './middleware/request-log.js';
@@ -111,6 +113,8 @@ export function createApp(config: Config) {
 
   app.use(requestClock);
   app.use(healthRouter);
+  // photo files need no session: served before it is read
+  app.use(photosRouter);
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
@@ -167,7 +171,6 @@ export function createApp(config: Config) {
   app.post('/api/bake-days/:id/waitlist', limits.waitlist);
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
-  app.use(shopRouter);
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);
@@ -180,6 +183,8 @@ export function createApp(config: Config) {
   app.use(bakeDayEditRouter);
   app.use(announcementsRouter);
   app.use(reportsRouter);
+  app.use(shopSettingsRouter);
+  app.use(auditLogRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -9,12 +9,14 @@ import {
   planResponseSchema, productionSettingsSchema, productionSettingsViewSchema, saveFormulaSchema,
 } from './production.js';
 import { meSchema } from './roles.js';
-import { shopInfoSchema } from './shop.js';
 import {
   bakeDayEditResultSchema, bakeDayEditViewSchema, callOffSchema, callOffStartedSchema, confirmedSchema, editBakeDaySchema, jobViewSchema, subscribeSchema,
   subscribedSchema, tokenSchema, unsubscribedSchema, weekQuerySchema, weeklyReportSchema,
 } from './owner-ops.js';
 import { changeRoleSchema, createBakeDaySchema, menuItemAdminViewSchema, staffMemberInputSchema, staffMemberViewSchema } from './setup.js';
+import { menuItemInputSchema, menuItemPatchSchema, menuPhotoViewSchema } from './menu.js';
+import { publicShopViewSchema, shopSettingsInputSchema, shopSettingsViewSchema } from './shop-settings.js';
+import { auditPageSchema, auditQuerySchema } from './audit-log.js';
 
 /**
  * The contract between the apps and the API: every JSON endpoint with its
@@ -34,7 +36,7 @@ export interface Endpoint {
   body?: z.ZodType;
   /** The body of a success; an endpoint that may answer 204 No Content makes it optional. */
   response: z.ZodType;
-  /** Success status (200 unless said). */
+  /** Success status (200 unless said; 202 when work was queued). */
   status?: 200 | 201 | 202;
 }
 
@@ -59,7 +61,6 @@ export const api = {
   csrf: endpoint({ method: 'get', path: '/api/csrf', response: z.object({ token: z.string() }) }),
   me: endpoint({ method: 'get', path: '/api/me', response: meSchema }),
   /** The business the shop belongs to: its name and logo, for the storefront's header, titles and footer. */
-  getShop: endpoint({ method: 'get', path: '/api/shop', response: shopInfoSchema }),
 
   // bake days as customers see them
   listBakeDays: endpoint({ method: 'get', path: '/api/bake-days', response: z.array(bakeDayViewSchema) }),
@@ -108,6 +109,27 @@ export const api = {
   addStaff: endpoint({ method: 'post', path: '/api/staff/members', body: staffMemberInputSchema, response: staffMemberViewSchema, status: 201 }),
   /** 204 when the member is no longer staff (made a customer). */
   changeRole: endpoint({ method: 'patch', path: '/api/staff/members/:id', params: uuidParams('staff member'), body: changeRoleSchema, response: staffMemberViewSchema.optional() }),
+
+  /** Sends the invitation e-mail again, for someone who has not signed in yet. */
+  resendInvitation: endpoint({ method: 'post', path: '/api/staff/members/:id/invitation', params: uuidParams('person'), response: z.object({ queued: z.literal(true) }), status: 202 }),
+
+  // staff: the menu (the owner changes it; bakers read it)
+  getMenuItem: endpoint({ method: 'get', path: '/api/staff/menu-items/:id', params: uuidParams('menu item'), response: menuItemAdminViewSchema }),
+  createMenuItem: endpoint({ method: 'post', path: '/api/staff/menu-items', body: menuItemInputSchema, response: menuItemAdminViewSchema, status: 201 }),
+  updateMenuItem: endpoint({ method: 'patch', path: '/api/staff/menu-items/:id', params: uuidParams('menu item'), body: menuItemPatchSchema, response: menuItemAdminViewSchema }),
+  archiveMenuItem: endpoint({ method: 'post', path: '/api/staff/menu-items/:id/archive', params: uuidParams('menu item'), response: menuItemAdminViewSchema }),
+  restoreMenuItem: endpoint({ method: 'post', path: '/api/staff/menu-items/:id/restore', params: uuidParams('menu item'), response: menuItemAdminViewSchema }),
+  /** multipart/form-data with the file in field "photo" (not JSON): JPEG, PNG or WebP by content, at most 8 MB; 415, 413 or 400 otherwise. */
+  uploadMenuPhoto: endpoint({ method: 'post', path: '/api/staff/menu-items/:id/photo', params: uuidParams('menu item'), response: menuPhotoViewSchema, status: 201 }),
+  removeMenuPhoto: endpoint({ method: 'delete', path: '/api/staff/menu-items/:id/photo', params: uuidParams('menu item'), response: z.void() }),
+
+  // the shop's settings
+  getShop: endpoint({ method: 'get', path: '/api/shop', response: publicShopViewSchema }),
+  getShopSettings: endpoint({ method: 'get', path: '/api/staff/shop-settings', response: shopSettingsViewSchema }),
+  saveShopSettings: endpoint({ method: 'put', path: '/api/staff/shop-settings', body: shopSettingsInputSchema, response: shopSettingsViewSchema }),
+
+  // who changed what
+  listAuditLog: endpoint({ method: 'get', path: '/api/staff/audit-log', query: auditQuerySchema, response: auditPageSchema }),
 
   // production settings and formulas
   getProductionSettings: endpoint({ method: 'get', path: '/api/production/settings', response: productionSettingsViewSchema }),

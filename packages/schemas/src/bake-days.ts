@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { boxSizeSchema, pieceKindSchema } from './boxes.js';
+import { menuPhotoViewSchema } from './menu-photos.js';
 
 export const bakeDayStatuses = ['upcoming', 'open', 'closed', 'done'] as const;
 export const bakeDayStatusSchema = z.enum(bakeDayStatuses);
@@ -45,6 +46,8 @@ export const menuItemViewSchema = z.object({
   kind: pieceKindSchema,
   surchargeCents: z.number().int(),
   allergens: z.array(allergenSchema),
+  /** The item's photo, or null/absent when it has none. */
+  photo: menuPhotoViewSchema.nullable().optional(),
 });
 export type MenuItemView = z.infer<typeof menuItemViewSchema>;
 

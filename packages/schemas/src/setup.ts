@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { boxSizeSchema } from './boxes.js';
 import { menuItemViewSchema } from './bake-days.js';
 import { roleSchema } from './roles.js';
+import { menuItemOwnerFields } from './menu.js';
 
 // The owner's setup: new bake days and the staff who may sign in.
 
@@ -65,9 +66,14 @@ export const staffMemberViewSchema = z.object({
 });
 export type StaffMemberView = z.infer<typeof staffMemberViewSchema>;
 
-/** A menu item as the staff manage it: the customer's view without the description, with whether it is on sale. */
+/**
+ * A menu item as the staff manage it: the customer's view with whether it is
+ * on sale, and what the owner's menu pages add (description, glaze recipe,
+ * archiving, how many orders have it).
+ */
 export const menuItemAdminViewSchema = menuItemViewSchema.omit({ description: true }).extend({
   allergens: z.array(z.string()),
   active: z.boolean(),
+  ...menuItemOwnerFields,
 });
 export type MenuItemAdminView = z.infer<typeof menuItemAdminViewSchema>;

@@ -10,3 +10,4 @@ export { mountApp, QueryProvider } from './mount';
 export { PageErrorBoundary } from './page-error-boundary';
 export { SignOutButton } from './sign-out-button';
 export { ErrorState, LoadingState, Notice } from './status';
+export { MenuPhoto } from './menu-photo';

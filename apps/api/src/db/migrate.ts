@@ -8,6 +8,7 @@ const migrations = {
   '0001-core': () => import('./migrations/0001-core.js'),
   '0002-production': () => import('./migrations/0002-production.js'),
   '0010-bake-day-counter': () => import('./migrations/0010-bake-day-counter.js'),
+  '0020-owner-menu': () => import('./migrations/0020-owner-menu.js'),
   '0021-owner-ops': () => import('./migrations/0021-owner-ops.js'),
   '0030-hardening': () => import('./migrations/0030-hardening.js'),
   '0040-production-line': () => import('./migrations/0040-production-line.js'),

@@ -3,6 +3,7 @@ import { api } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { route } from '../lib/route.js';
 import { addStaff, changeRole, listStaff } from '../services/users/staff-members.js';
+import { resendInvitation } from '../services/users/invitations.js';
 
 /** /api/staff/members: who may sign in as staff, and with which role. */
 export const staffMembersRouter = Router();
@@ -13,3 +14,8 @@ route(staffMembersRouter, api.addStaff, [requireRole('owner')], ({ req, body }) 
 
 // made a customer: no longer staff, so nothing to show (204)
 route(staffMembersRouter, api.changeRole, [requireRole('owner')], async ({ req, params, body }) => (await changeRole(currentUser(req), params.id, body.role)) ?? undefined);
+
+route(staffMembersRouter, api.resendInvitation, [requireRole('owner')], async ({ req, params }) => {
+  await resendInvitation(currentUser(req), params.id);
+  return { queued: true as const };
+});

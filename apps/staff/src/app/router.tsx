@@ -8,6 +8,7 @@ import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
 import { RoleGuard } from './session/role-guard';
 import { AnnounceBakeDayPage } from '../features/bake-days/components/announce-bake-day-page';
 import { EditBakeDayRoute } from './routes/edit-bake-day-route';
+import { MenuItemPage } from '../features/menu/components/menu-item-page';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */
 export function AppRoutes() {
@@ -28,6 +29,17 @@ export function AppRoutes() {
         />
         <Route path="bake-days/:bakeDayId" element={<BakeDayOrdersRoute />} />
         <Route path="bake-days/:bakeDayId/edit" element={<EditBakeDayRoute />} />
+        {['menu/new', 'menu/:itemId'].map((path) => (
+          <Route
+            key={path}
+            path={path}
+            element={
+              <RoleGuard minRole="owner">
+                <MenuItemPage />
+              </RoleGuard>
+            }
+          />
+        ))}
         <Route path="*" element={<NotFoundRoute />} />
       </Route>
     </Routes>

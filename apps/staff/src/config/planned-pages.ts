@@ -21,13 +21,4 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Keep working through a patchy connection and catch up when it is back',
     ],
   },
-  menu: {
-    intro: 'What customers can put in a box, and what it costs.',
-    arrivesWith: "the owner's setup work",
-    will: [
-      'Flavour and glaze combinations, for rings and for holes',
-      'The allergens of each item, shown to customers before they pay',
-      'Box sizes, their prices and any extra charge per item',
-    ],
-  },
 };

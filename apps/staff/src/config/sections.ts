@@ -23,6 +23,8 @@ export const sections: readonly StaffSection[] = [
   { path: 'equipment', label: 'Equipment', minRole: 'owner', summary: 'What sets each bake day\u2019s capacity.' },
   { path: 'staff', label: 'Staff', minRole: 'owner', summary: 'Who can sign in, and their roles.' },
   { path: 'sales', label: 'Sales', minRole: 'owner', summary: 'Weekly money, units and margin.' },
+  { path: 'settings', label: 'Shop settings', minRole: 'owner', summary: 'Name, time zone, tax, holds and refund policy.' },
+  { path: 'audit-log', label: 'Audit log', minRole: 'owner', summary: 'Who changed what, and when.' },
 ];
 
 export const roleNames: Record<StaffRole, string> = { counter: 'Counter', baker: 'Baker', owner: 'Owner' };

@@ -14,6 +14,10 @@ export class MenuItem extends Model<InferAttributes<MenuItem>, InferCreationAttr
   /** The glaze recipe (production settings) this item takes; null for plain. */
   declare glazeRecipeId: CreationOptional<string | null>;
   declare active: CreationOptional<boolean>;
+  /** The item's photo (menu_photos), if it has one. */
+  declare photoId: CreationOptional<string | null>;
+  /** When it was taken off the menu; it stays for past orders. */
+  declare archivedAt: CreationOptional<Date | null>;
   declare sortOrder: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -32,6 +36,8 @@ export class MenuItem extends Model<InferAttributes<MenuItem>, InferCreationAttr
         photoUrl: { type: DataTypes.TEXT, allowNull: true },
         glazeRecipeId: { type: DataTypes.TEXT, allowNull: true },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        photoId: { type: DataTypes.UUID, allowNull: true },
+        archivedAt: { type: DataTypes.DATE, allowNull: true },
         sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -7,6 +7,12 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare taxMode: CreationOptional<'included' | 'added'>;
   declare taxRateBp: CreationOptional<number>;
   declare maxPiecesPerCustomer: CreationOptional<number>;
+  declare timeZone: CreationOptional<string>;
+  /** Minutes an unpaid box is held; null means the server's HOLD_MINUTES. */
+  declare holdMinutes: CreationOptional<number | null>;
+  declare noShowGraceMinutes: CreationOptional<number>;
+  declare refundPolicy: CreationOptional<string>;
+  declare updatedBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -19,6 +25,11 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         taxMode: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'included' },
         taxRateBp: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'tax_rate_bp' },
         maxPiecesPerCustomer: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 36 },
+        timeZone: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'UTC' },
+        holdMinutes: { type: DataTypes.INTEGER, allowNull: true },
+        noShowGraceMinutes: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 30 },
+        refundPolicy: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        updatedBy: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

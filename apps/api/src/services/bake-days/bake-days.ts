@@ -5,6 +5,7 @@ import { BakeDay, BakeDayBox, MenuItem, PickupWindow } from '../../db/models/ind
 import { notFound } from '../../lib/app-error.js';
 import { shopSettings } from '../shop/settings.js';
 import { ReadCache } from '../../lib/read-cache.js';
+import { photoViewsFor } from '../menu/photo-view.js';
 
 /** What a customer sees: not yet open, open, closed (past the cut-off), or done (the day is over). */
 export function viewStatus(day: Pick<BakeDay, 'status' | 'ordersOpenAt' | 'cutoffAt' | 'date' | 'timeZone'>, now: Date): BakeDayStatus {
@@ -25,6 +26,7 @@ export const bakeDayInclude = [
 
 export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
   const settings = await shopSettings();
+  const photos = await photoViewsFor(day.menuItems ?? []);
   return {
     id: day.id,
     date: day.date,
@@ -55,6 +57,7 @@ export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
         kind: m.kind,
         surchargeCents: m.surchargeCents,
         allergens: m.allergens as Allergen[],
+        photo: (m.photoId && photos.get(m.photoId)) || null,
       })),
     tax: settings.tax,
   };

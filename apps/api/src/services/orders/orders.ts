@@ -9,6 +9,7 @@ import { checkOrder } from './order-rules.js';
 import { releaseOrder, takeWindowSlot, giveBackWindowSlot } from '../../db/queries/capacity.js';
 import { insertHeldOrder, saveCheckoutSession, takeOrderCapacity } from '../../db/queries/orders.js';
 import { context } from '../../integrations/context.js';
+import { shopSettings } from '../shop/settings.js';
 import { audit } from '../audit/audit.js';
 import { queueCancellation, queuePickupMoved } from '../mail/order-mails.js';
 import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
@@ -91,9 +92,9 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     throw new AppError('closed', day.status === 'upcoming' ? 'Orders for this bake day are not open yet' : 'Orders for this bake day are closed', 409);
   }
   const checked = checkOrder(day, input);
-  const { maxPiecesPerCustomer } = await shopSettings();
+  const { maxPiecesPerCustomer, holdMinutes } = await shopSettings();
   if (checked.rings + checked.holes > maxPiecesPerCustomer) throw overLimit(maxPiecesPerCustomer, 0);
-  const holdExpiresAt = new Date(now.getTime() + context().config.HOLD_MINUTES * 60_000);
+  const holdExpiresAt = new Date(now.getTime() + holdMinutes * 60_000);
 
   let orderId: string;
   try {

@@ -1,20 +1,38 @@
 import type { Transaction } from 'sequelize';
-import type { ShopInfo, TaxSetting } from '@fryline/schemas';
+import type { ShopSettingsView } from '@fryline/schemas';
 import { ShopSettings } from '../../db/models/index.js';
+import { context } from '../../integrations/context.js';
 import { ReadCache } from '../../lib/read-cache.js';
 
-export interface Settings {
-  shopName: string;
+/** Said to customers before they pay, until the owner writes their own. */
+export const DEFAULT_REFUND_POLICY =
+  'You can cancel your order for a full refund until orders close for your bake day. After that we refund only if we call the bake day off or cannot make your order. Boxes not collected by the end of the pickup window are not refunded.';
+
+export type Settings = ShopSettingsView & {
   /** An absolute URL of the shop's logo, or null (no logo is stored yet). */
   logoUrl: string | null;
-  currency: string;
-  tax: TaxSetting;
   /** A customer's share of one bake day: rings and holes together, over all their orders. */
   maxPiecesPerCustomer: number;
-}
+};
 
 /** Three dozen: a family's weekend order, not a reseller's (common practice, no source). */
 export const DEFAULT_MAX_PIECES = 36;
+
+/** The shop's settings as every part of the API reads them, with the defaults filled in. */
+export function settingsView(row: ShopSettings | null): Settings {
+  return {
+    shopName: row?.shopName ?? 'Fryline',
+    timeZone: row?.timeZone ?? 'UTC',
+    currency: (row?.currency ?? 'usd') as Settings['currency'],
+    tax: { mode: row?.taxMode ?? 'included', rateBasisPoints: row?.taxRateBp ?? 0 },
+    holdMinutes: row?.holdMinutes ?? context().config.HOLD_MINUTES,
+    noShowGraceMinutes: row?.noShowGraceMinutes ?? 30,
+    refundPolicy: row?.refundPolicy || DEFAULT_REFUND_POLICY,
+    updatedAt: row?.updatedAt?.toISOString() ?? null,
+    logoUrl: null,
+    maxPiecesPerCustomer: row?.maxPiecesPerCustomer ?? DEFAULT_MAX_PIECES,
+  };
+}
 
 const cache = new ReadCache<Settings>();
 
@@ -23,23 +41,6 @@ export const forgetShopSettings = () => cache.forget();
 
 /** The shop's settings; inside a transaction always read fresh, otherwise possibly from the read cache. */
 export async function shopSettings(transaction?: Transaction): Promise<Settings> {
-  if (transaction) return readSettings(transaction);
-  return cache.get('shop', () => readSettings());
-}
-
-async function readSettings(transaction?: Transaction): Promise<Settings> {
-  const row = await ShopSettings.findByPk(1, { transaction });
-  return {
-    shopName: row?.shopName ?? 'Fryline',
-    logoUrl: null,
-    currency: row?.currency ?? 'usd',
-    tax: { mode: row?.taxMode ?? 'included', rateBasisPoints: row?.taxRateBp ?? 0 },
-    maxPiecesPerCustomer: row?.maxPiecesPerCustomer ?? DEFAULT_MAX_PIECES,
-  };
-}
-
-/** The shop's public face: its name and logo. */
-export async function shopInfo(): Promise<ShopInfo> {
-  const { shopName, logoUrl } = await shopSettings();
-  return { name: shopName, logoUrl };
+  if (transaction) return settingsView(await ShopSettings.findByPk(1, { transaction }));
+  return cache.get('shop', async () => settingsView(await ShopSettings.findByPk(1)));
 }

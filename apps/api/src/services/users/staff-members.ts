@@ -5,6 +5,7 @@ import { User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit/audit.js';
 import { forgetMe } from './users.js';
+import { queueStaffInvitation } from './invitations.js';
 
 const toMember = (u: User): StaffMemberView => ({ id: u.id, email: u.email, name: u.name, role: u.role as StaffMemberView['role'], signedIn: u.googleSub !== null });
 
@@ -14,16 +15,20 @@ export async function listStaff(): Promise<StaffMemberView[]> {
 }
 
 /**
- * Gives an address a staff role. An existing account keeps its identity; a
- * new address is linked to whoever first signs in with it, verified.
+ * Gives an address a staff role and e-mails them an invitation with the
+ * sign-in link (through the outbox). An existing account keeps its identity;
+ * a new address is linked to whoever first signs in with it, verified.
  */
 export async function addStaff(owner: Me, input: StaffMemberInput): Promise<StaffMemberView> {
   const member = await database().transaction(async (transaction) => {
     const existing = await User.findOne({ where: { email: { [Op.iLike]: input.email } }, transaction, lock: transaction.LOCK.UPDATE });
+    const roleBefore = existing?.role;
     const user = existing
       ? await existing.update({ role: input.role, name: existing.name || input.name }, { transaction })
       : await User.create({ email: input.email, name: input.name, role: input.role, googleSub: null, emailVerified: false }, { transaction });
     await audit({ actorId: owner.id, action: 'staff.role', subjectType: 'user', subjectId: user.id, details: { role: input.role } }, transaction);
+    // the invitation goes out when the role is new to them (adding them twice sends it once)
+    if (roleBefore !== input.role) await queueStaffInvitation(owner, user, input.role, transaction);
     return toMember(user);
   });
   // the signed-in user is read through the read cache: this process sees the new role at once

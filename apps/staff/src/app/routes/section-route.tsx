@@ -13,6 +13,9 @@ import { lazyPage } from '../../lib/lazy-page';
 
 // The charting library loads only with this page.
 const SalesPage = lazyPage(() => import('../../features/sales/components/sales-page'), 'Loading the sales page…');
+import { MenuPage } from '../../features/menu/components/menu-page';
+import { ShopSettingsPage } from '../../features/shop-settings/components/shop-settings-page';
+import { AuditLogPage } from '../../features/audit-log/components/audit-log-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
@@ -22,6 +25,9 @@ const builtPages: Record<string, ReactNode> = {
   equipment: <EquipmentPage />,
   staff: <StaffPage />,
   sales: <SalesPage />,
+  menu: <MenuPage />,
+  settings: <ShopSettingsPage />,
+  'audit-log': <AuditLogPage />,
 };
 
 /** Whether a section has a working page (the menu lists only those). */

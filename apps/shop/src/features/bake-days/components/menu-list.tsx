@@ -1,5 +1,6 @@
 import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { MenuItemInfo } from '../../../components/menu-item-info';
+import { MenuPhoto } from '@fryline/ui';
 
 /** The bake day's boxes and menu, to read (when orders are not open). */
 export function MenuList({ day }: { day: BakeDayView }) {
@@ -21,6 +22,9 @@ export function MenuList({ day }: { day: BakeDayView }) {
       <ul className="grid gap-3 sm:grid-cols-2">
         {day.menu.map((item) => (
           <li key={item.id} className="card">
+            {item.photo && (
+              <MenuPhoto photo={item.photo} alt={`${item.name}, photographed`} sizes="(min-width: 640px) 320px, 100vw" className="mb-3 aspect-[4/3] w-full rounded-xl" />
+            )}
             <MenuItemInfo item={item} headingLevel="h3" />
             <p className="mt-1 text-xs font-semibold text-muted uppercase">{item.kind === 'hole' ? 'Holes' : 'Rings'}</p>
           </li>

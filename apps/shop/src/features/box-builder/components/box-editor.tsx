@@ -2,6 +2,7 @@ import { useId, useState, type Dispatch } from 'react';
 import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { boxOf, filledCount, itemsForBox, type DraftAction, type DraftBox } from '../model/draft';
 import { MenuItemInfo } from '../../../components/menu-item-info';
+import { MenuPhoto } from '@fryline/ui';
 import { QuantityStepper } from './quantity-stepper';
 
 interface BoxEditorProps {
@@ -55,7 +56,12 @@ export function BoxEditor({ day, box, title, priceCents, dispatch }: BoxEditorPr
       <ul className="mt-2">
         {items.map((item) => (
           <li key={item.id} className="flex items-start justify-between gap-3 border-t border-line py-3 first:border-t-0">
-            <MenuItemInfo item={item} />
+            <div className="flex min-w-0 items-start gap-3">
+              {item.photo && (
+                <MenuPhoto photo={item.photo} alt={`${item.name}, photographed`} sizes="80px" className="aspect-square w-16 shrink-0 rounded-xl sm:w-20" />
+              )}
+              <MenuItemInfo item={item} />
+            </div>
             <QuantityStepper
               itemName={item.name}
               value={box.items[item.id] ?? 0}

@@ -1,4 +1,5 @@
 import { useState, type ReactNode } from 'react';
+import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -8,10 +9,12 @@ import { boxOf, boxTitle, previewBill, toBoxInputs, type Draft } from '../model/
 import { PriceLines } from '../../../components/price-lines';
 import { clearDraft } from '../model/draft-storage';
 import { detailString, isApiError, putFieldErrors } from '@fryline/ui/api-client';
-import { formatClockRange, formatDate, listWords } from '@fryline/ui/format';
+import { formatClockRange, formatDate, listWords, plural } from '@fryline/ui/format';
 import { goToSignIn, signInUrl, currentPath } from '../../../lib/sign-in';
 import { AllergenCaution } from '../../../components/allergen-caution';
 import { allergensOf } from '../../../components/allergen-list';
+import { RefundPolicy } from '../../../components/refund-policy';
+import { shopQueries } from '../../../lib/shop-queries';
 
 const consentSchema = z.object({
   allergensRead: z.boolean().refine((ticked) => ticked, 'Please tick the box to say you have read the allergens.'),
@@ -37,6 +40,7 @@ interface OrderReviewProps {
 /** The last step: everything in the order, its price and allergens, a required tick, then payment. */
 export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, renderHoldExists }: OrderReviewProps) {
   const createOrder = useCreateOrder();
+  const holdMinutes = useQuery(shopQueries.info()).data?.holdMinutes;
   const [messages, setMessages] = useState<string[]>([]);
   const [holdOrderId, setHoldOrderId] = useState<string | null>(null);
   const form = useForm<Consent>({ resolver: zodResolver(consentSchema), defaultValues: { allergensRead: false } });
@@ -161,8 +165,10 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
 
           {holdOrderId && renderHoldExists?.(holdOrderId, () => setHoldOrderId(null))}
 
+          <RefundPolicy />
+
           <p className="text-sm text-muted">
-            When you continue, your boxes are held for you for a few minutes while you pay on the secure checkout page.
+            When you continue, your boxes are held for you for {holdMinutes ? plural(holdMinutes, 'minute') : 'a few minutes'} while you pay on the secure checkout page.
             If the payment does not go through in that time, the hold lapses and nothing is charged.
           </p>
 

@@ -9,7 +9,7 @@ export function OwnerHome() {
       <CapacityTable caption="Upcoming bake days and what is left" />
       <SectionLinks
         label="Owner pages"
-        paths={['bake-days', 'menu', 'equipment', 'staff', 'sales', 'production', 'formula', 'pickups']}
+        paths={['bake-days', 'menu', 'equipment', 'staff', 'sales', 'settings', 'audit-log', 'production', 'formula', 'pickups']}
       />
       <Caution title="Selling home-made food">
         <p>

@@ -6,7 +6,7 @@ import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
 import { settingsQueries } from '../../../lib/queries/settings-queries';
 import { menuItemQueries } from '../api/menu-item-queries';
 import { latestBakeDay, newBakeDayDefaults } from '../model/new-bake-day-form';
-import { browserZone } from '../model/time-zones';
+import { browserZone } from '../../../lib/time-zones';
 import { AnnounceForm } from './announce-form';
 
 /** A date picker's "YYYY-MM-DD" for today here. */

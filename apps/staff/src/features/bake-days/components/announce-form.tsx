@@ -12,7 +12,8 @@ import {
   placeServerErrors,
   type NewBakeDayValues,
 } from '../model/new-bake-day-form';
-import { zoneGroups, zoneName } from '../model/time-zones';
+import { zoneName } from '../../../lib/time-zones';
+import { ZoneOptions } from '../../../lib/zone-options';
 import { BoxesFieldset } from './boxes-fieldset';
 import { FieldShell } from '@fryline/ui';
 import { MenuFieldset } from './menu-fieldset';
@@ -112,15 +113,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
           <FieldShell id={id('zone')} label="Time zone" help="Pickup windows and the times below are in this zone." error={errors.timeZone?.message}>
             {(input) => (
               <select {...input} {...register('timeZone')}>
-                {zoneGroups(defaults.timeZone).map((group) => (
-                  <optgroup key={group.region} label={group.region}>
-                    {group.zones.map((choice) => (
-                      <option key={choice.zone} value={choice.zone}>
-                        {choice.label}
-                      </option>
-                    ))}
-                  </optgroup>
-                ))}
+                <ZoneOptions current={defaults.timeZone} />
               </select>
             )}
           </FieldShell>

@@ -61,9 +61,8 @@ export function AddStaffForm() {
         Add someone
       </h2>
       <p id="add-staff-help" className="text-muted">
-        They sign in with this e-mail address through the usual sign-in, and get the role you choose. Nothing is
-        e-mailed to them: let them know yourself. If the address already has a shop account, that account gets the
-        role.
+        We e-mail them an invitation with a sign-in link. They sign in with this address through the usual sign-in
+        and get the role you choose. If the address already has a shop account, that account gets the role.
       </p>
       <form onSubmit={(event) => void submit(event)} noValidate className="flex flex-col gap-3" aria-labelledby="add-staff-heading">
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2">

@@ -2,6 +2,7 @@ import { useEffect, useId, useRef, useState } from 'react';
 import type { StaffMemberView } from '@fryline/schemas';
 import { errorMessage } from '@fryline/ui/api-client';
 import { useChangeRole } from '../api/use-change-role';
+import { useResendInvitation } from '../api/use-resend-invitation';
 import { confirmationFor, displayName, roleChoices, roleLabels, roleNowMessage, type RoleChoice } from '../model/roles';
 
 interface MemberCardProps {
@@ -19,6 +20,7 @@ function SignedInBadge({ signedIn }: { signedIn: boolean }) {
 /** One person on the staff: name, address, whether they have signed in, and their role. */
 export function MemberCard({ member, isYou, onRemoved }: MemberCardProps) {
   const change = useChangeRole();
+  const resend = useResendInvitation();
   const [choice, setChoice] = useState<RoleChoice>(member.role);
   const [confirming, setConfirming] = useState(false);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
@@ -132,6 +134,22 @@ export function MemberCard({ member, isYou, onRemoved }: MemberCardProps) {
             </button>
           </div>
         </div>
+      )}
+
+      {!member.signedIn && !isYou && (
+        <button
+          type="button"
+          className="btn btn-quiet btn-small self-start"
+          disabled={resend.isPending}
+          onClick={() =>
+            resend.mutate(member.id, {
+              onSuccess: () => setMessage({ ok: true, text: `The invitation is on its way to ${member.email} again.` }),
+              onError: (error) => setMessage({ ok: false, text: errorMessage(error) }),
+            })
+          }
+        >
+          Send the invitation again<span className="sr-only"> to {name}</span>
+        </button>
       )}
 
       {message && (

@@ -52,7 +52,7 @@ describe('how people are named', () => {
     );
     expect(roleNowMessage({ id: '3', ...tobias, role: 'owner', signedIn: true })).toMatch(/^Tobias Wrenfield is now an owner\./);
     expect(roleNowMessage({ id: '2', name: '', email: 'new.helper@example.test', role: 'counter', signedIn: false })).toBe(
-      'new.helper@example.test is now a counter. The role takes effect when they first sign in with new.helper@example.test.',
+      'new.helper@example.test is now a counter. We have e-mailed new.helper@example.test an invitation; the role takes effect when they first sign in with it.',
     );
   });
 });

@@ -65,6 +65,6 @@ export function roleNowMessage(member: StaffMemberView): string {
   const role = member.role === 'owner' ? 'an owner' : `a ${roleLabels[member.role].toLowerCase()}`;
   const when = member.signedIn
     ? 'They can open the staff pages now.'
-    : `The role takes effect when they first sign in with ${member.email}.`;
+    : `We have e-mailed ${member.email} an invitation; the role takes effect when they first sign in with it.`;
   return `${displayName(member)} is now ${role}. ${when}`;
 }

@@ -1,0 +1,14 @@
+import { Router } from 'express';
+import { api } from '@fryline/schemas';
+import { currentUser, requireRole } from '../middleware/auth.js';
+import { route } from '../lib/route.js';
+import { getShopSettings, publicShop, saveShopSettings } from '../services/shop/shop-settings.js';
+
+/** /api/shop (what every customer sees) and /api/staff/shop-settings (the owner's form). */
+export const shopSettingsRouter = Router();
+
+route(shopSettingsRouter, api.getShop, [], () => publicShop());
+
+route(shopSettingsRouter, api.getShopSettings, [requireRole('owner')], () => getShopSettings(), { noStore: true });
+
+route(shopSettingsRouter, api.saveShopSettings, [requireRole('owner')], ({ req, body }) => saveShopSettings(currentUser(req), body));
