@@ -17,7 +17,6 @@ import { expireCheckout, openCheckout } from '../../integrations/checkout.js';
 import { recordRefundIntent, refundableCents, sendRefundIntent } from '../payments/refund-intents.js';
 import { applyCompletedSession } from '../payments/payment-events.js';
 import { describePaymentsError } from '../payments/errors.js';
-import { shopSettings } from '../shop/settings.js';
 import { logger } from '../../lib/logger.js';
 
 /** Customers may move or cancel until the cut-off, or later when the owner changed their order's window or place. */

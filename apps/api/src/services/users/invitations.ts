@@ -31,13 +31,19 @@ export async function queueStaffInvitation(
 ): Promise<void> {
   const { shopName } = await shopSettings(transaction);
   const article = role === 'owner' ? 'an' : 'a';
-  const mail = renderMail(`You're invited to the ${shopName} staff pages`, [
-    `Hello ${user.name || 'there'},`,
-    `${owner.name || owner.email} has added you to the ${shopName} staff as ${article} ${role}. You can ${roleWork[role]}.`,
-    `Sign in with this address (${user.email}) here: ${staffSignInUrl()}`,
-    `If you weren't expecting this, you can ignore this e-mail: nothing changes until you sign in.`,
-    `— ${shopName}`,
-  ]);
+  const { logoUrl } = await shopSettings(transaction);
+  const mail = await renderMail({
+    subject: `You're invited to the ${shopName} staff pages`,
+    shop: { name: shopName, logoUrl },
+    preview: `${owner.name || owner.email} has added you to the ${shopName} staff as ${article} ${role}.`,
+    blocks: [
+      { type: 'paragraph', text: `Hello ${user.name || 'there'},` },
+      { type: 'paragraph', text: `${owner.name || owner.email} has added you to the ${shopName} staff as ${article} ${role}. You can ${roleWork[role]}.` },
+      { type: 'paragraph', text: `Sign in with this address (${user.email}) here: ${staffSignInUrl()}` },
+      { type: 'button', label: 'Sign in to the staff pages', href: staffSignInUrl() },
+      { type: 'paragraph', text: `If you weren't expecting this, you can ignore this e-mail: nothing changes until you sign in.` },
+    ],
+  });
   await enqueueMail(
     { kind: 'staff-invitation', to: user.email, ...mail, dedupeKey: `staff-invitation:${user.id}:${crypto.randomUUID()}` },
     transaction,
