@@ -19,6 +19,7 @@ import { webhooksRouter } from './routes/webhooks.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
 import { productionRouter } from './routes/production.js';
 import { setupRouter } from './routes/setup.js';
+import { counterRouter } from './routes/counter.js';
 import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -102,6 +103,7 @@ export function createApp(config: Config) {
   app.use(csrfProtection(SESSION_COOKIE, config.SESSION_SECRET));
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
+  app.use(counterRouter); // before the orders router: /api/orders/by-code is not an order id
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);

@@ -12,3 +12,4 @@ export * from './cautions.js';
 export * from './plan.js';
 export * from './defaults.js';
 export { formatInstant, parseInstant, requireTimeZone } from './time.js';
+export * from './surplus.js';

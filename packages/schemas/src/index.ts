@@ -5,3 +5,4 @@ export * from './orders.js';
 export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
+export * from './counter.js';

@@ -6,6 +6,10 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare currency: CreationOptional<string>;
   declare taxMode: CreationOptional<'included' | 'added'>;
   declare taxRateBp: CreationOptional<number>;
+  /** After a window closes, how long before its unclaimed orders may be marked no-show. */
+  declare noShowGraceMinutes: CreationOptional<number>;
+  /** How long a hand-over can be undone. */
+  declare handOverUndoSeconds: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -17,6 +21,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         currency: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'usd' },
         taxMode: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'included' },
         taxRateBp: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0, field: 'tax_rate_bp' },
+        noShowGraceMinutes: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 30 },
+        handOverUndoSeconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 15 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
