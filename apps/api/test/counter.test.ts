@@ -199,3 +199,38 @@ describe('walk-up sales of the surplus', () => {
     expect(audit[0]!.actor_id).toBe(await userId('counter@fryline.test'));
   });
 });
+
+describe('the end of the day', () => {
+  it('adds up to a hand-computed expectation from a seeded day', async () => {
+    const { seeded, counter } = await counterDay();
+    // spare pieces glazed vanilla, at least 12 rings and 12 holes: enough surplus for the sales below
+    await sql(`UPDATE production_settings SET spare = '{"percent": 5, "minimumRings": 12, "minimumHoles": 12, "glazeId": "vanilla-milk-glaze"}'`);
+    const byName = (name: string) => seeded.orders.find((o) => o.name === name)!;
+    for (const name of ['Ada Quillfeather', 'Bram Ellery', 'Hollis Penrose']) {
+      expect((await counter.send('POST', `/api/orders/${byName(name).id}/collect`, { bakeDayId: seeded.day.id })).status).toBe(200);
+    }
+    expect((await counter.send('POST', `/api/bake-days/${seeded.day.id}/no-shows`, {})).body.marked).toBe(1); // Wren; the other windows are not over
+
+    const surplus = (await counter.getJson(`/api/bake-days/${seeded.day.id}/surplus`)).body;
+    const vanilla = surplus.items.find((i: any) => i.name === 'Vanilla Bean Glaze');
+    const holes = surplus.items.find((i: any) => i.kind === 'hole');
+    const sell = async (items: Array<[any, number]>, method: string, amountCents: number) =>
+      expect((await counter.send('POST', `/api/bake-days/${seeded.day.id}/walk-ups`, { items: items.map(([i, quantity]) => ({ menuItemId: i.menuItemId, quantity })), method, amountCents })).status).toBe(201);
+    await sell([[vanilla, 1]], 'cash', 350);
+    await sell([[vanilla, 2]], 'cash', 700);
+    await sell([[vanilla, 2], [holes, 3]], 'card', 1100);
+
+    const eod = await counter.getJson(`/api/bake-days/${seeded.day.id}/end-of-day`);
+    expect(eod.status).toBe(200);
+    // by hand: Ada 12 rings + 12 holes, Bram 6, Hollis 6 handed over; Wren's 12 a no-show; Cleo 6 and Dorian 12 still to come
+    expect(eod.body.orders).toEqual({ paid: 6, handedOver: 3, toHandOver: 2, noShows: 1, refunded: 0 });
+    expect(eod.body.pieces).toEqual({ handedOver: { rings: 24, holes: 12 }, noShows: { rings: 12, holes: 0 }, toHandOver: { rings: 18, holes: 0 } });
+    // walk-ups: $3.50 + $7.00 cash, $11.00 card; 5 rings and 3 holes
+    expect(eod.body.walkUps).toEqual({ sales: 3, rings: 5, holes: 3, totalCents: 2150, byMethod: { cash: { sales: 2, amountCents: 1050 }, card: { sales: 1, amountCents: 1100 } } });
+    expect(eod.body.cashToCountCents).toBe(1050);
+    const leftVanilla = eod.body.leftOver.items.find((i: any) => i.menuItemId === vanilla.menuItemId);
+    expect(leftVanilla).toEqual({ ...vanilla, sold: 5, left: vanilla.made - 21 - 5 });
+    expect(vanilla.made).toBeGreaterThanOrEqual(21 + 12);
+    expect(eod.body.leftOver.items.find((i: any) => i.menuItemId === holes.menuItemId)).toMatchObject({ sold: 3, left: holes.made - 12 - 3 });
+  });
+});
