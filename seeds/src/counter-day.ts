@@ -121,3 +121,15 @@ export async function seedCounterDay(nowDate: Date = new Date(), orders: Counter
     return { day, windows, orders: seeded };
   });
 }
+
+/** Removes a day made by seedCounterDay with everything recorded against it, so later tests see the demo as it was. */
+export async function removeCounterDay(bakeDayId: string): Promise<void> {
+  await database().transaction(async (transaction) => {
+    const q = (sql: string) => database().query(sql, { replacements: { bakeDayId }, transaction });
+    await q('DELETE FROM walk_up_sales WHERE bake_day_id = :bakeDayId');
+    await q('DELETE FROM bake_day_surplus WHERE bake_day_id = :bakeDayId');
+    await q('DELETE FROM refunds WHERE order_id IN (SELECT id FROM orders WHERE bake_day_id = :bakeDayId)');
+    await q('DELETE FROM orders WHERE bake_day_id = :bakeDayId');
+    await q('DELETE FROM bake_days WHERE id = :bakeDayId');
+  });
+}

@@ -4,6 +4,7 @@ import { hasRole } from '@fryline/schemas';
 import { roleNames, sections } from '../../config/sections';
 import { useStaffMember } from '../../features/session/components/staff-member';
 import { SignOutButton } from '../../features/session/components/sign-out-button';
+import { WaitingToSend } from '../../features/counter/components/waiting-to-send';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `block whitespace-nowrap rounded-full px-2.5 py-1.5 text-[0.95rem] font-extrabold no-underline sm:px-3 sm:text-base ${
@@ -29,6 +30,7 @@ export function StaffHeader() {
           Fryline <span className="font-semibold text-muted">staff</span>
         </Link>
         <div className="ml-auto flex items-center gap-3">
+          <WaitingToSend />
           <span className="hidden text-right leading-tight sm:block">
             <span className="block font-semibold">{member.name}</span>
           </span>

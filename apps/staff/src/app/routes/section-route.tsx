@@ -9,9 +9,11 @@ import { EquipmentPage } from '../../features/equipment/components/equipment-pag
 import { FormulaPage } from '../../features/formula/components/formula-page';
 import { ProductionPage } from '../../features/production/components/production-page';
 import { StaffPage } from '../../features/staff-members/components/staff-page';
+import { CounterPage } from '../../features/counter/components/counter-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
+  pickups: <CounterPage />,
   'bake-days': <BakeDaysPage />,
   production: <ProductionPage />,
   formula: <FormulaPage />,
