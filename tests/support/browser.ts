@@ -7,7 +7,7 @@ const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
  * new browser context (its own cookies), so one person's late responses can
  * never sign the next person in.
  */
-export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<{
+export async function openBrowser(viewport = { width: 390, height: 844 }, extraArgs: string[] = []): Promise<{
   page: Page;
   context: BrowserContext;
   fresh(): Promise<{ page: Page; context: BrowserContext }>;
@@ -16,7 +16,7 @@ export async function openBrowser(viewport = { width: 390, height: 844 }): Promi
   const browser: Browser = await chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', ...extraArgs],
   });
   const fresh = async () => {
     const context = await browser.newContext({ viewport });
