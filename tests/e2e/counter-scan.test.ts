@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, chooseAccount } from '../support/browser.js';
+import { openBrowser, chooseAccount, payWithTestCard } from '../support/browser.js';
 import { pngToY4m } from '../support/y4m.js';
 
 const { appUrl, mailUrl } = inject('stack');
@@ -42,12 +42,7 @@ describe('scanning the pickup QR code with the camera', () => {
         data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[0]!.id, boxes: [{ size: 'half-dozen', items: [{ menuItemId: day.menu.find((m) => m.kind === 'ring')!.id, quantity: 6 }] }] },
       })
     ).json()) as { id: string; checkoutUrl: string };
-    await page.goto(created.checkoutUrl);
-    await page.getByLabel(/card number/i).fill('4242 4242 4242 4242');
-    await page.getByLabel(/expiry/i).fill('12/34');
-    await page.getByLabel(/security code/i).fill('123');
-    await page.getByRole('button', { name: /^pay/i }).click();
-    await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+    await payWithTestCard(page, created.checkoutUrl);
 
     let message: { id: string; subject: string } | undefined;
     await expect

@@ -42,3 +42,13 @@ export async function chooseAccount(page: Page, email: string) {
   }
 }
 
+
+/** Pays a checkout on the payments stand-in's page with the test card that succeeds (4242 4242 4242 4242, Stripe's testing docs) and waits for the order page. */
+export async function payWithTestCard(page: Page, checkoutUrl: string) {
+  await page.goto(checkoutUrl);
+  await page.getByLabel(/card number/i).fill('4242 4242 4242 4242');
+  await page.getByLabel(/expiry/i).fill('12/34');
+  await page.getByLabel(/security code/i).fill('123');
+  await page.getByRole('button', { name: /^pay/i }).click();
+  await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+}
