@@ -14,7 +14,7 @@ async function counterDay(): Promise<{ seeded: SeededCounterDay; counter: Browse
   return { seeded, counter };
 }
 
-const sql = <T>(query: string, replacements: Record<string, unknown> = {}) => database().query<T>(query, { replacements, type: QueryTypes.SELECT });
+const sql = <T extends object>(query: string, replacements: Record<string, unknown> = {}) => database().query<T>(query, { replacements, type: QueryTypes.SELECT });
 const auditFor = (subjectId: string) =>
   sql<{ action: string; actor_id: string; created_at: Date; details: any }>('SELECT action, actor_id, created_at, details FROM audit_log WHERE subject_id = :subjectId ORDER BY id', { subjectId });
 const userId = async (email: string) => (await sql<{ id: string }>('SELECT id FROM users WHERE email = :email', { email }))[0]!.id;
@@ -232,5 +232,26 @@ describe('the end of the day', () => {
     expect(leftVanilla).toEqual({ ...vanilla, sold: 5, left: vanilla.made - 21 - 5 });
     expect(vanilla.made).toBeGreaterThanOrEqual(21 + 12);
     expect(eod.body.leftOver.items.find((i: any) => i.menuItemId === holes.menuItemId)).toMatchObject({ sold: 3, left: holes.made - 12 - 3 });
+  });
+});
+
+describe('the owner’s counter settings', () => {
+  it('the owner sets the no-show grace and the undo time; the counter reads them but cannot change them; bad values change nothing', async () => {
+    const { seeded, counter } = await counterDay();
+    expect((await counter.getJson('/api/counter/settings')).body).toEqual({ noShowGraceMinutes: 30, handOverUndoSeconds: 15 });
+    expect((await counter.send('PUT', '/api/counter/settings', { noShowGraceMinutes: 45, handOverUndoSeconds: 20 })).status).toBe(403);
+    const owner = new Browser(stack.url);
+    await signIn(owner, 'owner@fryline.test');
+    const bad = await owner.send('PUT', '/api/counter/settings', { noShowGraceMinutes: -5, handOverUndoSeconds: 20 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details.fields.noShowGraceMinutes).toMatch(/at least 0/i);
+    const saved = await owner.send('PUT', '/api/counter/settings', { noShowGraceMinutes: 45, handOverUndoSeconds: 20 });
+    expect(saved.body).toEqual({ noShowGraceMinutes: 45, handOverUndoSeconds: 20 });
+    const rows = (await counter.getJson(`/api/bake-days/${seeded.day.id}/pickups`)).body;
+    const row = rows.find((r: any) => r.windowId === seeded.windows[1]!.id);
+    expect(Date.parse(row.noShowFrom)).toBe(seeded.windows[1]!.endsAt.getTime() + 45 * 60_000);
+    const collected = await counter.send('POST', `/api/orders/${row.orderId}/collect`, {});
+    expect(Date.parse(collected.body.undoUntil) - Date.parse(collected.body.collectedAt)).toBe(20_000);
+    expect((await sql<{ action: string }>("SELECT action FROM audit_log WHERE action = 'shop.counter_settings'"))).toHaveLength(1);
   });
 });

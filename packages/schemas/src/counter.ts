@@ -160,3 +160,10 @@ export interface EndOfDay {
   cashToCountCents: number;
   leftOver: Surplus;
 }
+
+/** The owner's counter settings. */
+export const counterSettingsSchema = z.strictObject({
+  noShowGraceMinutes: z.number({ error: 'Give the minutes as a number' }).int('Whole minutes').min(0, 'At least 0 minutes').max(1440, 'At most a day (1440 minutes)'),
+  handOverUndoSeconds: z.number({ error: 'Give the seconds as a number' }).int('Whole seconds').min(5, 'At least 5 seconds').max(600, 'At most 10 minutes (600 seconds)'),
+});
+export type CounterSettings = z.infer<typeof counterSettingsSchema>;

@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { counterActionSchema, markRestNoShowSchema, walkUpSaleSchema, type WalkUpSaleInput } from '@fryline/schemas';
+import { counterActionSchema, counterSettingsSchema, markRestNoShowSchema, walkUpSaleSchema, type CounterSettings, type WalkUpSaleInput } from '@fryline/schemas';
 import { currentUser, requireRole } from '../middleware/auth.js';
 import { validate, valid } from '../middleware/validate.js';
 import { listPickups, findByCode } from '../services/counter/pickups.js';
@@ -9,6 +9,7 @@ import { getSurplus } from '../services/counter/surplus.js';
 import { sellWalkUp } from '../services/counter/walk-ups.js';
 import { endOfDay } from '../services/counter/end-of-day.js';
 import { checkKey, type Answer } from '../services/counter/idempotency.js';
+import { counterSettings, saveCounterSettings } from '../services/counter/settings.js';
 
 // The counter on bake day (counter role and up): pickup list, hand-over with
 // undo, no-shows, walk-up sales of the surplus, end of day. Changes take an
@@ -54,3 +55,11 @@ for (const action of ['collect', 'uncollect', 'no-show', 'reverse-no-show'] sati
     send(res, await changeOrder(action, { user, orderId: id(res), bakeDayId: valid<{ bakeDayId?: string }>(res, 'body').bakeDayId ?? null, key: key(req) }));
   });
 }
+
+counterRouter.get('/api/counter/settings', requireRole('counter'), async (_req, res) => {
+  res.json(await counterSettings());
+});
+
+counterRouter.put('/api/counter/settings', requireRole('owner'), validate('body', counterSettingsSchema), async (req, res) => {
+  res.json(await saveCounterSettings(currentUser(req).id, valid<CounterSettings>(res, 'body')));
+});
