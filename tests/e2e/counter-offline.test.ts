@@ -98,6 +98,15 @@ describe('the counter keeps working through a dead connection', () => {
     // the counter person deals with it
     await conflict.getByRole('button', { name: 'Dealt with' }).click();
     await conflict.first().waitFor({ state: 'detached' });
+    // the day's close shows the walk-up's cash to count
+    await page.getByRole('button', { name: 'End of day' }).click();
+    await expect.poll(async () => page.getByTestId('cash-to-count').textContent()).toBe('$3.50');
+    if (process.env.SCREENSHOT_DIR) {
+      await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/counter-end-of-day.png`, fullPage: true });
+      await page.getByRole('button', { name: 'Walk-up sale' }).click();
+      await page.getByRole('button', { name: /one more vanilla bean glaze/i }).waitFor();
+      await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/counter-walk-up.png`, fullPage: true });
+    }
     await other.context.close();
   });
 });

@@ -148,7 +148,11 @@ function isOrderChange(m: Mutation<any, any, any, any>, orderId: string, action:
 
 export function useWalkUpSale() {
   const mutation = useMutation<WalkUpSale, unknown, WalkUpChange>({ mutationKey: counterMutationKeys.walkUp });
-  return { ...mutation, sell: (v: Omit<WalkUpChange, 'key' | 'at'>) => mutation.mutate({ ...v, key: newKey(), at: new Date().toISOString() }) };
+  return {
+    ...mutation,
+    sell: (v: Omit<WalkUpChange, 'key' | 'at'>, callbacks?: { onSuccess?: () => void; onError?: () => void }) =>
+      mutation.mutate({ ...v, key: newKey(), at: new Date().toISOString() }, callbacks),
+  };
 }
 
 export function useRestNoShow() {

@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { BakeDayView, EndOfDay, OrderByCode, PickupRow, Surplus } from '@fryline/schemas';
+import type { BakeDayView, CounterSettings, EndOfDay, OrderByCode, PickupRow, Surplus } from '@fryline/schemas';
 import { api } from '../../../lib/api-client';
 
 // The counter's reads. Everything under the 'counter' root is kept on the
@@ -44,6 +44,14 @@ export const counterQueries = {
       queryKey: [...day(bakeDayId), 'end-of-day'] as const,
       queryFn: () => api.get<EndOfDay>(`/api/bake-days/${encodeURIComponent(bakeDayId)}/end-of-day`),
       staleTime: 0,
+      gcTime: DAY_MS,
+    }),
+  /** The owner's no-show grace and undo time. */
+  settings: () =>
+    queryOptions({
+      queryKey: [...root, 'settings'] as const,
+      queryFn: () => api.get<CounterSettings>('/api/counter/settings'),
+      staleTime: 5 * 60_000,
       gcTime: DAY_MS,
     }),
   /** The order a scanned or typed code names (any bake day). */

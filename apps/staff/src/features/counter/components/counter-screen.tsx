@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router-dom';
 import type { BakeDayView, Surplus } from '@fryline/schemas';
@@ -8,7 +8,9 @@ import { useStaffMember } from '../../session/components/staff-member';
 import { counterQueries, defaultBakeDay } from '../api/counter-queries';
 import { useOrderChange, useWaitingChanges, type OrderChange, type WalkUpChange } from '../api/counter-mutations';
 import { withPending, type ShownRow } from '../model/pickups';
+import { ConflictList } from './conflict-list';
 import { EndOfDayPanel } from './end-of-day-panel';
+import type { Lookup } from './find-order';
 import type { CardActions } from './pickup-card';
 import { PickupList } from './pickup-list';
 import { StatusIcon } from './status-icon';
@@ -47,19 +49,21 @@ function DayPicker({ days, value, onChange }: { days: BakeDayView[]; value: stri
   );
 }
 
-function CounterDay({ day, view }: { day: BakeDayView; view: View }) {
+function CounterDay({ day, view, onView }: { day: BakeDayView; view: View; onView: (view: View) => void }) {
+  const [lookup, setLookup] = useState<Lookup | null>(null);
   const member = useStaffMember();
   const now = useNow(1000);
   const online = useOnline();
   const pickups = useQuery(counterQueries.pickups(day.id));
   const surplus = useQuery({ ...counterQueries.surplus(day.id), enabled: view !== 'pickups' || undefined });
   const waiting = useWaitingChanges();
+  const settings = useQuery(counterQueries.settings());
   const { change } = useOrderChange();
 
   const rows: ShownRow[] = useMemo(() => {
     const pending = waiting.filter((w) => w.key === 'order-change').map((w) => w.variables as OrderChange).filter((v) => v.bakeDayId === day.id);
-    return withPending(pickups.data ?? [], pending);
-  }, [pickups.data, waiting, day.id]);
+    return withPending(pickups.data ?? [], pending, settings.data?.handOverUndoSeconds);
+  }, [pickups.data, waiting, day.id, settings.data]);
 
   const act = (action: OrderChange['action']) => (row: ShownRow) => change({ action, orderId: row.orderId, bakeDayId: day.id, by: member.name, name: row.name });
   const actions: CardActions = { handOver: act('collect'), undo: act('uncollect'), noShow: act('no-show'), reverseNoShow: act('reverse-no-show') };
@@ -74,7 +78,13 @@ function CounterDay({ day, view }: { day: BakeDayView; view: View }) {
           <StatusIcon name="offline" /> No connection. Keep going: hand-overs and sales wait on this phone and are sent when it is back.
         </p>
       )}
-      {view === 'pickups' && <PickupList day={day} rows={rows} now={now} actions={actions} />}
+      <ConflictList
+        onShow={(orderId) => {
+          onView('pickups');
+          setLookup({ kind: 'row', orderId });
+        }}
+      />
+      {view === 'pickups' && <PickupList day={day} rows={rows} now={now} actions={actions} lookup={lookup} onLookup={setLookup} />}
       {view === 'walk-up' &&
         (surplus.data ? (
           <WalkUpForm bakeDayId={day.id} surplus={surplusAfterWaiting(surplus.data, waiting.filter((w) => w.key === 'walk-up').map((w) => w.variables as WalkUpChange))} />
@@ -129,7 +139,7 @@ export default function CounterScreen() {
               </button>
             ))}
           </nav>
-          <CounterDay key={chosen.id} day={chosen} view={view} />
+          <CounterDay key={chosen.id} day={chosen} view={view} onView={(v) => set('view', v)} />
         </>
       )}
     </section>

@@ -6,6 +6,9 @@ import { counterQueries } from '../api/counter-queries';
 import { restForNoShow, type ShownRow } from '../model/pickups';
 import { RestNoShowButton } from './rest-no-show';
 import { useOnline } from './use-online';
+import { CounterSettingsForm } from './counter-settings-form';
+import { hasRole } from '@fryline/schemas';
+import { useStaffMember } from '../../session/components/staff-member';
 
 function Figure({ label, value, detail }: { label: string; value: string; detail?: string }) {
   return (
@@ -23,6 +26,7 @@ function Figure({ label, value, detail }: { label: string; value: string; detail
 export function EndOfDayPanel({ bakeDayId, rows, now }: { bakeDayId: string; rows: ShownRow[]; now: number }) {
   const eod = useQuery({ ...counterQueries.endOfDay(bakeDayId), refetchInterval: 10_000 });
   const online = useOnline();
+  const member = useStaffMember();
   if (eod.isPending) return <LoadingState label="Adding up the day…" />;
   if (eod.isError && !eod.data) return <ErrorState error={eod.error} title="The day’s figures could not be loaded" onRetry={() => void eod.refetch()} />;
   const d = eod.data!;
@@ -62,6 +66,7 @@ export function EndOfDayPanel({ bakeDayId, rows, now }: { bakeDayId: string; row
         )}
       </section>
       <RestNoShowButton bakeDayId={bakeDayId} rest={restForNoShow(rows, now)} />
+      {hasRole(member.role, 'owner') && <CounterSettingsForm />}
     </div>
   );
 }

@@ -2,7 +2,6 @@ import { useState } from 'react';
 import type { BakeDayView } from '@fryline/schemas';
 import { formatClockRange, plural } from '../../../lib/format';
 import { groupByWindow, matchesSearch, restForNoShow, type ShownRow } from '../model/pickups';
-import { ConflictList } from './conflict-list';
 import { FoundOrder, isWholeCode, type Lookup } from './find-order';
 import { PickupCard, type CardActions } from './pickup-card';
 import { QrScan } from './qr-scan';
@@ -11,23 +10,30 @@ import { RestNoShowButton } from './rest-no-show';
 const whenWords = { now: 'Now', next: 'Next', later: 'Later', over: 'Over' } as const;
 
 /** The day's orders by pickup window, the current window first, with search, scanning and one-tap hand-over. */
-export function PickupList({ day, rows, now, actions }: { day: BakeDayView; rows: ShownRow[]; now: number; actions: CardActions }) {
+export function PickupList({
+  day, rows, now, actions, lookup, onLookup,
+}: {
+  day: BakeDayView;
+  rows: ShownRow[];
+  now: number;
+  actions: CardActions;
+  lookup: Lookup | null;
+  onLookup: (lookup: Lookup | null) => void;
+}) {
   const [query, setQuery] = useState('');
   const [scanning, setScanning] = useState(false);
-  const [lookup, setLookup] = useState<Lookup | null>(null);
   const shown = rows.filter((r) => matchesSearch(r, query));
   const groups = groupByWindow(day.pickupWindows, shown, now).filter((g) => query === '' || g.rows.length > 0);
 
   return (
     <div className="flex flex-col gap-4">
-      <ConflictList onShow={(orderId) => setLookup({ kind: 'row', orderId })} />
       <form
         role="search"
         className="flex flex-col gap-2"
         onSubmit={(e) => {
           e.preventDefault();
-          if (shown.length === 1) setLookup({ kind: 'row', orderId: shown[0]!.orderId });
-          else if (isWholeCode(query)) setLookup({ kind: 'code', code: query });
+          if (shown.length === 1) onLookup({ kind: 'row', orderId: shown[0]!.orderId });
+          else if (isWholeCode(query)) onLookup({ kind: 'code', code: query });
         }}
       >
         <label htmlFor="pickup-search" className="font-extrabold">
@@ -55,7 +61,7 @@ export function PickupList({ day, rows, now, actions }: { day: BakeDayView; rows
           onClose={() => setScanning(false)}
           onCode={(text) => {
             setScanning(false);
-            setLookup({ kind: 'code', code: text });
+            onLookup({ kind: 'code', code: text });
           }}
         />
       )}
@@ -63,7 +69,7 @@ export function PickupList({ day, rows, now, actions }: { day: BakeDayView; rows
         <div className="notice notice-warn flex flex-col gap-2">
           <p>Nobody on this day’s list matches “{query}”.</p>
           {isWholeCode(query) && (
-            <button type="button" className="btn btn-quiet min-h-12 bg-white" onClick={() => setLookup({ kind: 'code', code: query })}>
+            <button type="button" className="btn btn-quiet min-h-12 bg-white" onClick={() => onLookup({ kind: 'code', code: query })}>
               Look the code up on other days
             </button>
           )}
@@ -89,7 +95,7 @@ export function PickupList({ day, rows, now, actions }: { day: BakeDayView; rows
         </section>
       ))}
       <RestNoShowButton bakeDayId={day.id} rest={restForNoShow(rows, now)} />
-      {lookup && <FoundOrder lookup={lookup} rows={rows} bakeDayId={day.id} timeZone={day.timeZone} now={now} actions={actions} onClose={() => setLookup(null)} />}
+      {lookup && <FoundOrder lookup={lookup} rows={rows} bakeDayId={day.id} timeZone={day.timeZone} now={now} actions={actions} onClose={() => onLookup(null)} />}
     </div>
   );
 }

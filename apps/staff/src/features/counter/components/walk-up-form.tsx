@@ -3,13 +3,7 @@ import { formatCents, type PaymentMethod, type Surplus } from '@fryline/schemas'
 import { plural } from '../../../lib/format';
 import { useWalkUpSale } from '../api/counter-mutations';
 import { useOnline } from './use-online';
-
-/** Dollars as typed ("3.50", "$7", "12,00") to whole cents, or null when it is not an amount. */
-export function parseDollars(text: string): number | null {
-  const t = text.trim().replace(/^\$/, '').replace(',', '.');
-  if (!/^\d{1,5}(\.\d{0,2})?$/.test(t)) return null;
-  return Math.round(Number(t) * 100);
-}
+import { parseDollars } from '../model/money';
 
 /** Sell what is left to someone without a pre-order: items, cash or card (on the card reader), and the amount taken. */
 export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus: Surplus }) {
@@ -37,8 +31,12 @@ export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus:
         if (chosen.length === 0) return setProblem('Add at least one doughnut.');
         if (cents === null) return setProblem('Type the amount taken, for example 3.50.');
         setProblem(null);
-        sell({ bakeDayId, method, amountCents: cents, items: chosen.map((i) => ({ menuItemId: i.menuItemId, name: i.name, quantity: counts[i.menuItemId]! })) });
-        setMessage(online ? `Sale recorded: ${formatCents(cents)} ${method}.` : `Sale kept on this phone (${formatCents(cents)} ${method}); it is sent when the connection is back.`);
+        const what = `${formatCents(cents)} ${method}`;
+        sell(
+          { bakeDayId, method, amountCents: cents, items: chosen.map((i) => ({ menuItemId: i.menuItemId, name: i.name, quantity: counts[i.menuItemId]! })) },
+          { onSuccess: () => setMessage(`Sale recorded: ${what}.`), onError: () => setMessage(null) },
+        );
+        setMessage(online ? `Recording the sale (${what})…` : `Sale kept on this phone (${what}); it is sent when the connection is back.`);
         setCounts({});
         setAmount('');
       }}
