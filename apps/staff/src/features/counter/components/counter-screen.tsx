@@ -55,7 +55,8 @@ function CounterDay({ day, view, onView }: { day: BakeDayView; view: View; onVie
   const now = useNow(1000);
   const online = useOnline();
   const pickups = useQuery(counterQueries.pickups(day.id));
-  const surplus = useQuery({ ...counterQueries.surplus(day.id), enabled: view !== 'pickups' || undefined });
+  // loaded on every view, so what is left is on the phone before the signal goes
+  const surplus = useQuery(counterQueries.surplus(day.id));
   const waiting = useWaitingChanges();
   const settings = useQuery(counterQueries.settings());
   const { change } = useOrderChange();
