@@ -75,7 +75,9 @@ describe('handing over', () => {
 
     const other = new Browser(stack.url);
     await signIn(other, 'baker@fryline.test');
-    const twice = await other.send('POST', `/api/orders/${order.id}/collect`, {});
+    const twice = await other.send('POST', `/api/orders/${order.id}/collect`, {}, { 'idempotency-key': 'hand-over-key-0002' });
+    // the refusal is the first answer for that key, too
+    expect(await other.send('POST', `/api/orders/${order.id}/collect`, {}, { 'idempotency-key': 'hand-over-key-0002' })).toEqual(twice);
     expect(twice.status).toBe(409);
     expect(twice.body.error.code).toBe('already_collected');
     expect(twice.body.error.details).toMatchObject({ collectedAt: first.body.collectedAt, collectedBy: 'Priya Halloway' });

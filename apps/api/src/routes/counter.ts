@@ -8,7 +8,7 @@ import { changeOrder, markRestNoShow, type CounterAction } from '../services/cou
 import { getSurplus } from '../services/counter/surplus.js';
 import { sellWalkUp } from '../services/counter/walk-ups.js';
 import { endOfDay } from '../services/counter/end-of-day.js';
-import { checkKey, type Answer } from '../services/counter/idempotency.js';
+import { checkKey } from '../services/counter/idempotency.js';
 import { counterSettings, saveCounterSettings } from '../services/counter/settings.js';
 
 // The counter on bake day (counter role and up): pickup list, hand-over with
@@ -20,13 +20,12 @@ const dayParams = z.object({ id: z.uuid('Unknown bake day') });
 const orderParams = z.object({ id: z.uuid('Unknown order') });
 const id = (res: Parameters<typeof valid>[0]) => valid<{ id: string }>(res, 'params').id;
 const key = (req: Request) => checkKey(req.get('idempotency-key'));
-const send = (res: { status(n: number): { json(b: unknown): void } }, answer: Answer) => res.status(answer.status).json(answer.body);
 const noStore = { 'Cache-Control': 'no-store' };
 
 counterRouter.use(['/api/bake-days/:id/pickups', '/api/bake-days/:id/surplus', '/api/bake-days/:id/walk-ups', '/api/bake-days/:id/no-shows', '/api/bake-days/:id/end-of-day', '/api/orders/by-code'], requireRole('counter'));
 
 counterRouter.get('/api/bake-days/:id/pickups', validate('params', dayParams), async (_req, res) => {
-  res.set(noStore).json(await listPickups(id(res)));
+  res.set(noStore).json(await listPickups(id(res), new Date()));
 });
 
 counterRouter.get('/api/bake-days/:id/surplus', validate('params', dayParams), async (_req, res) => {
@@ -34,11 +33,11 @@ counterRouter.get('/api/bake-days/:id/surplus', validate('params', dayParams), a
 });
 
 counterRouter.post('/api/bake-days/:id/walk-ups', validate('params', dayParams), validate('body', walkUpSaleSchema), async (req, res) => {
-  send(res, await sellWalkUp(currentUser(req), id(res), valid<WalkUpSaleInput>(res, 'body'), key(req), new Date()));
+  res.status(201).json(await sellWalkUp(currentUser(req), id(res), valid<WalkUpSaleInput>(res, 'body'), key(req), new Date()));
 });
 
 counterRouter.post('/api/bake-days/:id/no-shows', validate('params', dayParams), validate('body', markRestNoShowSchema), async (req, res) => {
-  send(res, await markRestNoShow(currentUser(req), id(res), valid<{ windowId?: string }>(res, 'body').windowId ?? null, key(req)));
+  res.json(await markRestNoShow(currentUser(req), id(res), valid<{ windowId?: string }>(res, 'body').windowId ?? null, key(req), new Date()));
 });
 
 counterRouter.get('/api/bake-days/:id/end-of-day', validate('params', dayParams), async (_req, res) => {
@@ -46,13 +45,13 @@ counterRouter.get('/api/bake-days/:id/end-of-day', validate('params', dayParams)
 });
 
 counterRouter.get('/api/orders/by-code/:code', validate('params', z.object({ code: z.string().trim().min(1).max(40) })), async (_req, res) => {
-  res.set(noStore).json(await findByCode(valid<{ code: string }>(res, 'params').code));
+  res.set(noStore).json(await findByCode(valid<{ code: string }>(res, 'params').code, new Date()));
 });
 
 for (const action of ['collect', 'uncollect', 'no-show', 'reverse-no-show'] satisfies CounterAction[]) {
   counterRouter.post(`/api/orders/:id/${action}`, requireRole('counter'), validate('params', orderParams), validate('body', counterActionSchema), async (req, res) => {
     const user = currentUser(req);
-    send(res, await changeOrder(action, { user, orderId: id(res), bakeDayId: valid<{ bakeDayId?: string }>(res, 'body').bakeDayId ?? null, key: key(req) }));
+    res.json(await changeOrder(action, { user, now: new Date(), orderId: id(res), bakeDayId: valid<{ bakeDayId?: string }>(res, 'body').bakeDayId ?? null, key: key(req) }));
   });
 }
 

@@ -4,7 +4,8 @@ import { database } from '../sequelize.js';
 // The counter's reads and its conditional status changes on orders. Every
 // change is one statement whose WHERE is the rule (status, undo window,
 // window end plus grace), so two devices racing get one winner and the
-// loser changes nothing.
+// loser changes nothing. Time is the caller's `now`, passed in as a
+// parameter, never the database's clock.
 
 /** The owner's counter settings, with the defaults the schema gives when the shop row is missing. */
 const SETTINGS = `settings AS (
@@ -35,7 +36,6 @@ export interface CounterOrderRow {
   time_zone: string;
   undo_seconds: number;
   grace_minutes: number;
-  now: Date;
 }
 
 const ORDER_COLUMNS = `
@@ -44,10 +44,10 @@ const ORDER_COLUMNS = `
   w.starts_at, w.ends_at,
   w.ends_at + make_interval(mins => s.grace_minutes) AS no_show_from,
   o.collected_at, o.collected_by AS collected_by_id, COALESCE(NULLIF(cb.name, ''), cb.email) AS collected_by,
-  CASE WHEN o.status = 'collected' AND o.collected_at + make_interval(secs => s.undo_seconds) > now()
+  CASE WHEN o.status = 'collected' AND o.collected_at + make_interval(secs => s.undo_seconds) > CAST(:now AS timestamptz)
        THEN o.collected_at + make_interval(secs => s.undo_seconds) END AS undo_until,
   o.no_show_at, COALESCE(NULLIF(nb.name, ''), nb.email) AS no_show_by,
-  d.date AS day_date, d.place AS day_place, d.time_zone, s.undo_seconds, s.grace_minutes, now() AS now`;
+  d.date AS day_date, d.place AS day_place, d.time_zone, s.undo_seconds, s.grace_minutes`;
 
 const ORDER_JOINS = `
   FROM orders o
@@ -59,21 +59,21 @@ const ORDER_JOINS = `
   CROSS JOIN settings s`;
 
 /** Orders the counter sees for a bake day: paid ones in any state, and paid-then-refunded or cancelled ones so a customer can be told why. */
-export async function pickupOrders(bakeDayId: string, transaction?: Transaction): Promise<CounterOrderRow[]> {
+export async function pickupOrders(bakeDayId: string, now: Date, transaction?: Transaction): Promise<CounterOrderRow[]> {
   return database().query<CounterOrderRow>(
     `WITH ${SETTINGS}
      SELECT ${ORDER_COLUMNS} ${ORDER_JOINS}
       WHERE o.bake_day_id = :bakeDayId
         AND (o.status IN ('paid', 'collected', 'no_show') OR (o.paid_at IS NOT NULL AND o.status IN ('refunded', 'cancelled')))
       ORDER BY w.starts_at, lower(COALESCE(NULLIF(u.name, ''), u.email)), o.id`,
-    { replacements: { bakeDayId }, type: QueryTypes.SELECT, transaction },
+    { replacements: { bakeDayId, now }, type: QueryTypes.SELECT, transaction },
   );
 }
 
-export async function counterOrder(where: { id: string } | { pickupCode: string }, transaction?: Transaction): Promise<CounterOrderRow | null> {
+export async function counterOrder(where: { id: string } | { pickupCode: string }, now: Date, transaction?: Transaction): Promise<CounterOrderRow | null> {
   const rows = await database().query<CounterOrderRow>(
     `WITH ${SETTINGS} SELECT ${ORDER_COLUMNS} ${ORDER_JOINS} WHERE ${'id' in where ? 'o.id = :value' : 'o.pickup_code = :value'}`,
-    { replacements: { value: 'id' in where ? where.id : where.pickupCode }, type: QueryTypes.SELECT, transaction },
+    { replacements: { value: 'id' in where ? where.id : where.pickupCode, now }, type: QueryTypes.SELECT, transaction },
   );
   return rows[0] ?? null;
 }
@@ -112,7 +112,7 @@ async function change(sql: string, replacements: Record<string, unknown>, transa
 const DAY_GUARD = `(CAST(:bakeDayId AS uuid) IS NULL OR o.bake_day_id = CAST(:bakeDayId AS uuid))`;
 
 /** Paid (or marked no-show) → collected. */
-export async function markCollected(orderId: string, userId: string, bakeDayId: string | null, transaction: Transaction): Promise<Changed | null> {
+export async function markCollected(orderId: string, userId: string, bakeDayId: string | null, now: Date, transaction: Transaction): Promise<Changed | null> {
   const rows = await change(
     `WITH prev AS (
        SELECT o.id, o.status FROM orders o
@@ -120,29 +120,29 @@ export async function markCollected(orderId: string, userId: string, bakeDayId: 
         FOR UPDATE
      )
      UPDATE orders o
-        SET status = 'collected', collected_at = now(), collected_by = :userId, no_show_at = NULL, no_show_by = NULL, updated_at = now()
+        SET status = 'collected', collected_at = :now, collected_by = :userId, no_show_at = NULL, no_show_by = NULL, updated_at = now()
        FROM prev WHERE o.id = prev.id
      RETURNING o.id, prev.status AS was`,
-    { orderId, userId, bakeDayId },
+    { orderId, userId, bakeDayId, now },
     transaction,
   );
   return rows[0] ?? null;
 }
 
 /** Collected → paid again, only within the undo time after the hand-over. */
-export async function undoCollected(orderId: string, bakeDayId: string | null, transaction: Transaction): Promise<Changed | null> {
+export async function undoCollected(orderId: string, bakeDayId: string | null, now: Date, transaction: Transaction): Promise<Changed | null> {
   const rows = await change(
     `WITH ${SETTINGS}, prev AS (
        SELECT o.id, o.status FROM orders o CROSS JOIN settings s
         WHERE o.id = :orderId AND o.status = 'collected' AND ${DAY_GUARD}
-          AND o.collected_at + make_interval(secs => s.undo_seconds) > now()
+          AND o.collected_at + make_interval(secs => s.undo_seconds) > CAST(:now AS timestamptz)
         FOR UPDATE OF o
      )
      UPDATE orders o
         SET status = 'paid', collected_at = NULL, collected_by = NULL, updated_at = now()
        FROM prev WHERE o.id = prev.id
      RETURNING o.id, prev.status AS was`,
-    { orderId, bakeDayId },
+    { orderId, bakeDayId, now },
     transaction,
   );
   return rows[0] ?? null;
@@ -155,6 +155,7 @@ export async function undoCollected(orderId: string, bakeDayId: string | null, t
 export async function markNoShow(
   target: { orderId: string; bakeDayId: string | null } | { bakeDayId: string; windowId: string | null },
   userId: string,
+  now: Date,
   transaction: Transaction,
 ): Promise<Changed[]> {
   const one = 'orderId' in target;
@@ -163,16 +164,16 @@ export async function markNoShow(
        SELECT o.id, o.status FROM orders o
          JOIN pickup_windows w ON w.id = o.pickup_window_id
          CROSS JOIN settings s
-        WHERE o.status = 'paid' AND now() >= w.ends_at + make_interval(mins => s.grace_minutes)
+        WHERE o.status = 'paid' AND CAST(:now AS timestamptz) >= w.ends_at + make_interval(mins => s.grace_minutes)
           AND ${one ? `o.id = :orderId AND ${DAY_GUARD}` : 'o.bake_day_id = :bakeDayId AND (CAST(:windowId AS uuid) IS NULL OR o.pickup_window_id = CAST(:windowId AS uuid))'}
         ORDER BY o.id
         FOR UPDATE OF o
      )
      UPDATE orders o
-        SET status = 'no_show', no_show_at = now(), no_show_by = :userId, updated_at = now()
+        SET status = 'no_show', no_show_at = :now, no_show_by = :userId, updated_at = now()
        FROM prev WHERE o.id = prev.id
      RETURNING o.id, prev.status AS was`,
-    one ? { orderId: target.orderId, bakeDayId: target.bakeDayId, userId } : { bakeDayId: target.bakeDayId, windowId: target.windowId, userId },
+    one ? { orderId: target.orderId, bakeDayId: target.bakeDayId, userId, now } : { bakeDayId: target.bakeDayId, windowId: target.windowId, userId, now },
     transaction,
   );
 }

@@ -90,13 +90,13 @@ export async function takeSurplus(bakeDayId: string, menuItemId: string, quantit
 }
 
 export async function insertWalkUpSale(
-  sale: { bakeDayId: string; method: 'cash' | 'card'; amountCents: number; soldBy: string; idempotencyKey: string | null; items: Array<{ menuItemId: string; quantity: number }> },
+  sale: { bakeDayId: string; method: 'cash' | 'card'; amountCents: number; soldBy: string; idempotencyKey: string | null; soldAt: Date; items: Array<{ menuItemId: string; quantity: number }> },
   transaction: Transaction,
 ): Promise<{ id: string; sold_at: Date }> {
   const { items, ...head } = sale;
   const [row] = await database().query<{ id: string; sold_at: Date }>(
-    `INSERT INTO walk_up_sales (bake_day_id, method, amount_cents, sold_by, idempotency_key)
-     VALUES (:bakeDayId, :method, :amountCents, :soldBy, :idempotencyKey) RETURNING id, sold_at`,
+    `INSERT INTO walk_up_sales (bake_day_id, method, amount_cents, sold_by, idempotency_key, sold_at)
+     VALUES (:bakeDayId, :method, :amountCents, :soldBy, :idempotencyKey, :soldAt) RETURNING id, sold_at`,
     { replacements: head, type: QueryTypes.SELECT, transaction },
   );
   for (const item of items) {

@@ -5,7 +5,7 @@ import { counterOrder, markCollected, markNoShow, reverseNoShow, undoCollected, 
 import { BakeDay } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit.js';
-import { once, type Answer } from './idempotency.js';
+import { once } from './idempotency.js';
 import { pickupRow } from './pickups.js';
 
 // Hand-over, its undo, no-shows and their reversal. Each change is one
@@ -16,6 +16,7 @@ export type CounterAction = 'collect' | 'uncollect' | 'no-show' | 'reverse-no-sh
 
 interface ActionRequest {
   user: Me;
+  now: Date;
   orderId: string;
   bakeDayId: string | null;
   key: string | null;
@@ -69,8 +70,8 @@ function refusal(o: CounterOrderRow, action: CounterAction, bakeDayId: string | 
   return new AppError('not_collectable', 'This order can’t be handed over', 409);
 }
 
-async function explain(orderId: string, action: CounterAction, bakeDayId: string | null, transaction: Transaction): Promise<AppError> {
-  const order = await counterOrder({ id: orderId }, transaction);
+async function explain(orderId: string, action: CounterAction, bakeDayId: string | null, now: Date, transaction: Transaction): Promise<AppError> {
+  const order = await counterOrder({ id: orderId }, now, transaction);
   return order ? refusal(order, action, bakeDayId) : notFound('Order');
 }
 
@@ -82,33 +83,33 @@ const auditNames: Record<CounterAction, string> = {
 };
 
 const changes: Record<CounterAction, (r: ActionRequest, t: Transaction) => Promise<{ id: string; was: string } | null>> = {
-  collect: (r, t) => markCollected(r.orderId, r.user.id, r.bakeDayId, t),
-  uncollect: (r, t) => undoCollected(r.orderId, r.bakeDayId, t),
-  'no-show': async (r, t) => (await markNoShow({ orderId: r.orderId, bakeDayId: r.bakeDayId }, r.user.id, t))[0] ?? null,
+  collect: (r, t) => markCollected(r.orderId, r.user.id, r.bakeDayId, r.now, t),
+  uncollect: (r, t) => undoCollected(r.orderId, r.bakeDayId, r.now, t),
+  'no-show': async (r, t) => (await markNoShow({ orderId: r.orderId, bakeDayId: r.bakeDayId }, r.user.id, r.now, t))[0] ?? null,
   'reverse-no-show': (r, t) => reverseNoShow(r.orderId, r.bakeDayId, t),
 };
 
 /** One counter change on one order; answers the order as the pickup list shows it. */
-export async function changeOrder(action: CounterAction, request: ActionRequest): Promise<Answer> {
-  return once({ key: request.key, userId: request.user.id, action: `${action}:${request.orderId}` }, async (transaction): Promise<Answer<PickupRow>> => {
+export async function changeOrder(action: CounterAction, request: ActionRequest): Promise<PickupRow> {
+  return once({ key: request.key, userId: request.user.id, action: `${action}:${request.orderId}` }, async (transaction): Promise<PickupRow> => {
     const changed = await changes[action](request, transaction);
-    if (!changed) throw await explain(request.orderId, action, request.bakeDayId, transaction);
+    if (!changed) throw await explain(request.orderId, action, request.bakeDayId, request.now, transaction);
     await audit(
       { actorId: request.user.id, action: auditNames[action], subjectType: 'order', subjectId: changed.id, details: { from: changed.was, ...(request.key ? { idempotencyKey: request.key } : {}) } },
       transaction,
     );
-    return { status: 200, body: await pickupRow(changed.id, transaction) };
+    return pickupRow(changed.id, request.now, transaction);
   });
 }
 
 /** End of the day: every paid order whose window and grace are over becomes a no-show, in one go. */
-export async function markRestNoShow(user: Me, bakeDayId: string, windowId: string | null, key: string | null): Promise<Answer> {
+export async function markRestNoShow(user: Me, bakeDayId: string, windowId: string | null, key: string | null, now: Date): Promise<MarkRestNoShowResult> {
   if (!(await BakeDay.findByPk(bakeDayId, { attributes: ['id'] }))) throw notFound('Bake day');
-  return once({ key, userId: user.id, action: `no-shows:${bakeDayId}:${windowId ?? 'all'}` }, async (transaction): Promise<Answer<MarkRestNoShowResult>> => {
-    const marked = await markNoShow({ bakeDayId, windowId }, user.id, transaction);
+  return once({ key, userId: user.id, action: `no-shows:${bakeDayId}:${windowId ?? 'all'}` }, async (transaction): Promise<MarkRestNoShowResult> => {
+    const marked = await markNoShow({ bakeDayId, windowId }, user.id, now, transaction);
     for (const m of marked) {
       await audit({ actorId: user.id, action: 'order.no_show', subjectType: 'order', subjectId: m.id, details: { from: m.was, all: true } }, transaction);
     }
-    return { status: 200, body: { marked: marked.length, orderIds: marked.map((m) => m.id) } };
+    return { marked: marked.length, orderIds: marked.map((m) => m.id) };
   });
 }

@@ -3,21 +3,21 @@ import { database } from '../../db/sequelize.js';
 import { completeAnswer, findAnswer, storeAnswer, type StoredAnswer } from '../../db/queries/counter-requests.js';
 import { AppError } from '../../lib/app-error.js';
 
-export interface Answer<T = unknown> {
-  status: number;
-  body: T;
-}
-
 class AlreadyAnswered extends Error {}
 
 /** 4xx answers that say something about the request itself are kept and replayed; sign-in and permission ones are not. */
 const replayable = (err: unknown): err is AppError => err instanceof AppError && err.status >= 400 && err.status < 500 && err.status !== 401 && err.status !== 403;
 
-function replay(stored: StoredAnswer, action: string, userId: string): Answer {
+/** The first answer again: its body, or its refusal thrown as it was. */
+function replay<T>(stored: StoredAnswer, action: string, userId: string): T {
   if (stored.action !== action || (stored.user_id !== null && stored.user_id !== userId)) {
     throw new AppError('idempotency_mismatch', 'This Idempotency-Key was already used for a different request', 422);
   }
-  return { status: stored.status_code, body: stored.body };
+  if (stored.status_code >= 400) {
+    const { error } = stored.body as { error: { code: string; message: string; details?: unknown } };
+    throw new AppError(error.code, error.message, stored.status_code, error.details);
+  }
+  return stored.body as T;
 }
 
 export function checkKey(key: string | undefined): string | null {
@@ -35,26 +35,26 @@ export function checkKey(key: string | undefined): string | null {
  * refusal such as already_collected) is kept for every later repeat.
  */
 export async function once<T>(
-  request: { key: string | null; userId: string; action: string },
-  work: (transaction: Transaction) => Promise<Answer<T>>,
-): Promise<Answer> {
+  request: { key: string | null; userId: string; action: string; status?: number },
+  work: (transaction: Transaction) => Promise<T>,
+): Promise<T> {
   const { key, userId, action } = request;
   if (key === null) return database().transaction(work);
   const prior = await findAnswer(key);
-  if (prior) return replay(prior, action, userId);
+  if (prior) return replay<T>(prior, action, userId);
   try {
     return await database().transaction(async (transaction) => {
       if (!(await storeAnswer({ key, userId, action, statusCode: 0, body: null }, transaction))) throw new AlreadyAnswered();
       const answer = await work(transaction);
-      await completeAnswer(key, answer.status, answer.body, transaction);
+      await completeAnswer(key, request.status ?? 200, answer, transaction);
       return answer;
     });
   } catch (err) {
-    if (err instanceof AlreadyAnswered) return replay((await findAnswer(key))!, action, userId);
+    if (err instanceof AlreadyAnswered) return replay<T>((await findAnswer(key))!, action, userId);
     if (replayable(err)) {
       const body = { error: { code: err.code, message: err.message, details: err.details } };
       if (await storeAnswer({ key, userId, action, statusCode: err.status, body })) throw err;
-      return replay((await findAnswer(key))!, action, userId);
+      return replay<T>((await findAnswer(key))!, action, userId);
     }
     throw err;
   }

@@ -23,7 +23,7 @@ function boxesByOrder(lines: BoxLineRow[]): Map<string, PickupBox[]> {
 
 const iso = (d: Date | null) => (d ? new Date(d).toISOString() : null);
 
-export function toPickupRow(o: CounterOrderRow, boxes: PickupBox[]): PickupRow {
+export function toPickupRow(o: CounterOrderRow, boxes: PickupBox[], now: Date): PickupRow {
   return {
     orderId: o.id,
     name: o.name,
@@ -35,7 +35,7 @@ export function toPickupRow(o: CounterOrderRow, boxes: PickupBox[]): PickupRow {
     holes: o.holes,
     window: { startsAt: iso(o.starts_at)!, endsAt: iso(o.ends_at)! },
     noShowFrom: iso(o.no_show_from)!,
-    late: o.status === 'paid' && new Date(o.now) > new Date(o.ends_at),
+    late: o.status === 'paid' && now > new Date(o.ends_at),
     collectedAt: iso(o.collected_at),
     collectedBy: o.collected_by,
     undoUntil: iso(o.undo_until),
@@ -45,25 +45,25 @@ export function toPickupRow(o: CounterOrderRow, boxes: PickupBox[]): PickupRow {
 }
 
 /** The bake day's pickup list, by window then name. */
-export async function listPickups(bakeDayId: string): Promise<PickupRow[]> {
+export async function listPickups(bakeDayId: string, now: Date): Promise<PickupRow[]> {
   if (!(await BakeDay.findByPk(bakeDayId, { attributes: ['id'] }))) throw notFound('Bake day');
-  const orders = await pickupOrders(bakeDayId);
+  const orders = await pickupOrders(bakeDayId, now);
   const boxes = boxesByOrder(await boxLines(orders.map((o) => o.id)));
-  return orders.map((o) => toPickupRow(o, boxes.get(o.id) ?? []));
+  return orders.map((o) => toPickupRow(o, boxes.get(o.id) ?? [], now));
 }
 
 /** One order as the counter's list shows it, read inside the change that touched it. */
-export async function pickupRow(orderId: string, transaction?: Transaction): Promise<PickupRow> {
-  const order = await counterOrder({ id: orderId }, transaction);
+export async function pickupRow(orderId: string, now: Date, transaction?: Transaction): Promise<PickupRow> {
+  const order = await counterOrder({ id: orderId }, now, transaction);
   if (!order) throw notFound('Order');
   const boxes = boxesByOrder(await boxLines([order.id], transaction));
-  return toPickupRow(order, boxes.get(order.id) ?? []);
+  return toPickupRow(order, boxes.get(order.id) ?? [], now);
 }
 
 /** The order a pickup code names, typed any case, with spaces or dashes, or with look-alike characters. */
-export async function findByCode(code: string): Promise<OrderByCode> {
+export async function findByCode(code: string, now: Date): Promise<OrderByCode> {
   const normalised = normalisePickupCode(code);
-  const order = normalised ? await counterOrder({ pickupCode: normalised }) : null;
+  const order = normalised ? await counterOrder({ pickupCode: normalised }, now) : null;
   if (!order || !order.pickup_code) throw notFound('Order with that pickup code');
   const boxes = boxesByOrder(await boxLines([order.id])).get(order.id) ?? [];
   return {

@@ -3,7 +3,7 @@ import { insertWalkUpSale, surplusLeft, takeSurplus } from '../../db/queries/sur
 import { BakeDay, MenuItem } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit.js';
-import { once, type Answer } from './idempotency.js';
+import { once } from './idempotency.js';
 import { ensureSurplus } from './surplus.js';
 
 /**
@@ -13,7 +13,7 @@ import { ensureSurplus } from './surplus.js';
  * so two sales never wait on each other in a circle; if any item has run
  * out, nothing of the sale is kept.
  */
-export async function sellWalkUp(user: Me, bakeDayId: string, input: WalkUpSaleInput, key: string | null, now: Date): Promise<Answer> {
+export async function sellWalkUp(user: Me, bakeDayId: string, input: WalkUpSaleInput, key: string | null, now: Date): Promise<WalkUpSale> {
   const day = await BakeDay.findByPk(bakeDayId, { attributes: ['id', 'status'] });
   if (!day || day.status === 'draft') throw notFound('Bake day');
   if (day.status === 'cancelled') throw new AppError('bake_day_cancelled', 'This bake day was cancelled', 409);
@@ -23,7 +23,7 @@ export async function sellWalkUp(user: Me, bakeDayId: string, input: WalkUpSaleI
   );
   const items = [...input.items].sort((a, b) => a.menuItemId.localeCompare(b.menuItemId));
 
-  return once({ key, userId: user.id, action: `walk-up:${bakeDayId}` }, async (transaction): Promise<Answer<WalkUpSale>> => {
+  return once({ key, userId: user.id, action: `walk-up:${bakeDayId}`, status: 201 }, async (transaction): Promise<WalkUpSale> => {
     for (const item of items) {
       const menuItem = names.get(item.menuItemId);
       const left = await takeSurplus(bakeDayId, item.menuItemId, item.quantity, transaction);
@@ -38,14 +38,12 @@ export async function sellWalkUp(user: Me, bakeDayId: string, input: WalkUpSaleI
         { menuItemId: item.menuItemId, name: menuItem.name, left: stillLeft, wanted: item.quantity },
       );
     }
-    const sale = await insertWalkUpSale({ bakeDayId, method: input.method, amountCents: input.amountCents, soldBy: user.id, idempotencyKey: key, items }, transaction);
+    const sale = await insertWalkUpSale({ bakeDayId, method: input.method, amountCents: input.amountCents, soldBy: user.id, idempotencyKey: key, soldAt: now, items }, transaction);
     await audit(
       { actorId: user.id, action: 'walk_up.sold', subjectType: 'walk_up_sale', subjectId: sale.id, details: { bakeDayId, method: input.method, amountCents: input.amountCents, items } },
       transaction,
     );
     return {
-      status: 201,
-      body: {
         id: sale.id,
         bakeDayId,
         method: input.method,
@@ -53,7 +51,6 @@ export async function sellWalkUp(user: Me, bakeDayId: string, input: WalkUpSaleI
         soldAt: new Date(sale.sold_at).toISOString(),
         soldBy: user.name || user.email,
         items: input.items.map((i) => ({ menuItemId: i.menuItemId, name: names.get(i.menuItemId)?.name ?? '', kind: names.get(i.menuItemId)?.kind ?? 'ring', quantity: i.quantity })),
-      },
     };
   });
 }
