@@ -29,52 +29,56 @@ export function normalisePickupCode(input: string): string {
     .replace(/[OQ0IL1Z2]/g, (c) => LOOK_ALIKES[c] ?? c);
 }
 
-export const counterStatuses = orderStatuses;
+const statusSchema = z.enum(orderStatuses);
+const instant = z.string();
 
-export interface PickupBox {
-  size: z.infer<typeof boxSizeSchema>;
-  pieces: number;
-  items: Array<{ menuItemId: string; name: string; quantity: number }>;
-}
+export const pickupBoxSchema = z.object({
+  size: boxSizeSchema,
+  pieces: z.number().int(),
+  items: z.array(z.object({ menuItemId: z.string(), name: z.string(), quantity: z.number().int() })),
+});
+export type PickupBox = z.infer<typeof pickupBoxSchema>;
 
 /** One row of `GET /api/bake-days/:id/pickups`. */
-export interface PickupRow {
-  orderId: string;
-  name: string;
-  pickupCode: string | null;
-  windowId: string;
-  status: (typeof orderStatuses)[number];
-  boxes: PickupBox[];
-  rings: number;
-  holes: number;
-  window: { startsAt: string; endsAt: string };
+export const pickupRowSchema = z.object({
+  orderId: z.string(),
+  name: z.string(),
+  pickupCode: z.string().nullable(),
+  windowId: z.string(),
+  status: statusSchema,
+  boxes: z.array(pickupBoxSchema),
+  rings: z.number().int(),
+  holes: z.number().int(),
+  window: z.object({ startsAt: instant, endsAt: instant }),
   /** From this instant a paid order may be marked no-show (window end plus the owner's grace). */
-  noShowFrom: string;
-  late: boolean;
-  collectedAt: string | null;
-  collectedBy: string | null;
+  noShowFrom: instant,
+  late: z.boolean(),
+  collectedAt: instant.nullable(),
+  collectedBy: z.string().nullable(),
   /** Until when the hand-over can still be undone, while it can. */
-  undoUntil: string | null;
-  noShowAt: string | null;
-  noShowBy: string | null;
-}
+  undoUntil: instant.nullable(),
+  noShowAt: instant.nullable(),
+  noShowBy: z.string().nullable(),
+});
+export type PickupRow = z.infer<typeof pickupRowSchema>;
 
 /** `GET /api/orders/by-code/:code`. */
-export interface OrderByCode {
-  id: string;
-  status: (typeof orderStatuses)[number];
-  pickupCode: string;
-  bakeDayId: string;
-  windowId: string;
-  name: string;
-  boxes: PickupBox[];
-  rings: number;
-  holes: number;
-  bakeDay: { date: string; place: string; timeZone: string };
-  window: { startsAt: string; endsAt: string };
-  collectedAt: string | null;
-  collectedBy: string | null;
-}
+export const orderByCodeSchema = z.object({
+  id: z.string(),
+  status: statusSchema,
+  pickupCode: z.string(),
+  bakeDayId: z.string(),
+  windowId: z.string(),
+  name: z.string(),
+  boxes: z.array(pickupBoxSchema),
+  rings: z.number().int(),
+  holes: z.number().int(),
+  bakeDay: z.object({ date: z.string(), place: z.string(), timeZone: z.string() }),
+  window: z.object({ startsAt: instant, endsAt: instant }),
+  collectedAt: instant.nullable(),
+  collectedBy: z.string().nullable(),
+});
+export type OrderByCode = z.infer<typeof orderByCodeSchema>;
 
 /** Optional body of collect / uncollect / no-show: the bake day the counter is working, so another day's order is refused. */
 export const counterActionSchema = z.strictObject({
@@ -90,10 +94,8 @@ export const markRestNoShowSchema = z.strictObject({
   windowId: z.uuid('Unknown pickup window').optional(),
 });
 
-export interface MarkRestNoShowResult {
-  marked: number;
-  orderIds: string[];
-}
+export const markRestNoShowResultSchema = z.object({ marked: z.number().int(), orderIds: z.array(z.string()) });
+export type MarkRestNoShowResult = z.infer<typeof markRestNoShowResultSchema>;
 
 export const paymentMethods = ['cash', 'card'] as const;
 export type PaymentMethod = (typeof paymentMethods)[number];
@@ -114,52 +116,51 @@ export const walkUpSaleSchema = z.strictObject({
 });
 export type WalkUpSaleInput = z.infer<typeof walkUpSaleSchema>;
 
-export interface WalkUpSale {
-  id: string;
-  bakeDayId: string;
-  method: PaymentMethod;
-  amountCents: number;
-  soldAt: string;
-  soldBy: string | null;
-  items: Array<{ menuItemId: string; name: string; kind: 'ring' | 'hole'; quantity: number }>;
-}
+const kindSchema = z.enum(['ring', 'hole']);
 
-export interface SurplusItem {
-  menuItemId: string;
-  name: string;
-  kind: 'ring' | 'hole';
+export const walkUpSaleViewSchema = z.object({
+  id: z.string(),
+  bakeDayId: z.string(),
+  method: z.enum(paymentMethods),
+  amountCents: z.number().int(),
+  soldAt: instant,
+  soldBy: z.string().nullable(),
+  items: z.array(z.object({ menuItemId: z.string(), name: z.string(), kind: kindSchema, quantity: z.number().int() })),
+});
+export type WalkUpSale = z.infer<typeof walkUpSaleViewSchema>;
+
+export const surplusItemSchema = z.object({
+  menuItemId: z.string(),
+  name: z.string(),
+  kind: kindSchema,
   /** Left to sell now. */
-  left: number;
+  left: z.number().int(),
   /** What the production plan made of it. */
-  made: number;
+  made: z.number().int(),
   /** Paid pre-orders of it (handed over, waiting, or no-show). */
-  preOrdered: number;
+  preOrdered: z.number().int(),
   /** Sold to walk-ups so far. */
-  sold: number;
-}
+  sold: z.number().int(),
+});
+export type SurplusItem = z.infer<typeof surplusItemSchema>;
 
 /** `GET /api/bake-days/:id/surplus`: left per item, and rings and holes left in all. */
-export interface Surplus {
-  items: SurplusItem[];
-  rings: number;
-  holes: number;
-}
+export const surplusSchema = z.object({ items: z.array(surplusItemSchema), rings: z.number().int(), holes: z.number().int() });
+export type Surplus = z.infer<typeof surplusSchema>;
 
-export interface EndOfDay {
-  bakeDayId: string;
-  orders: { paid: number; handedOver: number; toHandOver: number; noShows: number; refunded: number };
-  pieces: { handedOver: { rings: number; holes: number }; noShows: { rings: number; holes: number }; toHandOver: { rings: number; holes: number } };
-  walkUps: {
-    sales: number;
-    rings: number;
-    holes: number;
-    totalCents: number;
-    byMethod: Record<PaymentMethod, { sales: number; amountCents: number }>;
-  };
+const pieces = z.object({ rings: z.number().int(), holes: z.number().int() });
+const byMethod = z.object({ sales: z.number().int(), amountCents: z.number().int() });
+
+export const endOfDaySchema = z.object({
+  bakeDayId: z.string(),
+  orders: z.object({ paid: z.number().int(), handedOver: z.number().int(), toHandOver: z.number().int(), noShows: z.number().int(), refunded: z.number().int() }),
+  pieces: z.object({ handedOver: pieces, noShows: pieces, toHandOver: pieces }),
+  walkUps: z.object({ sales: z.number().int(), rings: z.number().int(), holes: z.number().int(), totalCents: z.number().int(), byMethod: z.object({ cash: byMethod, card: byMethod }) }),
   /** Cash taken for walk-ups today: what should be in the box, on top of the float. */
-  cashToCountCents: number;
-  leftOver: Surplus;
-}
+  cashToCountCents: z.number().int(),
+  leftOver: surplusSchema,
+});
+export type EndOfDay = z.infer<typeof endOfDaySchema>;
 
 /** The owner's counter settings. */
 export const counterSettingsSchema = z.strictObject({
