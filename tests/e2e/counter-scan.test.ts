@@ -69,10 +69,11 @@ describe('scanning the pickup QR code with the camera', () => {
     await phone.page.getByRole('button', { name: 'Scan QR' }).click();
     const found = phone.page.getByRole('dialog');
     await found.waitFor({ timeout: 30_000 });
-    await expect.poll(async () => found.textContent(), { timeout: 20_000 }).toContain(code);
-    // the order it opens: the customer's name and what is in the box
-    expect(await found.getByRole('heading').first().textContent()).toMatch(/Scan Customer|scan\.customer/i);
+    // the order it opens: the customer's name, the code and what is in the box; it is for another day than the one on screen
+    await expect.poll(async () => found.getByRole('heading').first().textContent(), { timeout: 20_000 }).toMatch(/Scan Customer|scan\.customer/i);
+    expect(await found.textContent()).toContain(code);
     expect(await found.textContent()).toMatch(/Half dozen: 6 /);
+    expect(await found.textContent()).toMatch(/This order is for .*not this bake day/);
 
     // a browser with no camera at all says so in one line, and the typed code still works
     const plain = await openBrowser();
@@ -83,6 +84,6 @@ describe('scanning the pickup QR code with the camera', () => {
     expect(await plain.page.getByRole('alert').filter({ hasText: /camera/i }).textContent()).toMatch(/^(No camera found|The camera (is blocked|could not start)|This browser gives)[^\n]*type the code/);
     await plain.page.getByRole('searchbox').fill(code.toLowerCase());
     await plain.page.getByRole('searchbox').press('Enter');
-    await plain.page.getByRole('dialog').filter({ hasText: code }).waitFor();
+    await plain.page.getByRole('dialog').filter({ hasText: /Half dozen: 6 / }).waitFor();
   });
 });
