@@ -4,6 +4,6 @@ import { defineConfig } from 'vitest/config';
 // carry their own vitest.config.ts with a globalSetup.
 export default defineConfig({
   test: {
-    projects: ['packages/*', 'fakes/*', 'apps/api', 'apps/shop', 'apps/staff', 'tests'],
+    projects: ['packages/*', 'fakes/*', 'apps/api', 'apps/shop', 'apps/staff', 'tests', 'tests/structure'],
   },
 });

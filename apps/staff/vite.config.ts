@@ -2,7 +2,7 @@ import { defineConfig, loadEnv } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { VitePWA } from 'vite-plugin-pwa';
-import { apiProxy, sideEffectFreeSource, uiAlias } from '../../packages/ui/src/vite-shared.ts';
+import { apiProxy, sideEffectFreeSource } from '@fryline/ui/vite';
 
 // Served by the API under /staff/; the shop has the site root.
 export default defineConfig(({ mode }) => {
@@ -30,7 +30,6 @@ export default defineConfig(({ mode }) => {
         },
       }),
     ],
-    resolve: { alias: uiAlias },
     build: { outDir: 'dist', rolldownOptions: { treeshake: { moduleSideEffects: sideEffectFreeSource } } },
     server: { port: 5174, strictPort: true, proxy },
     preview: { proxy },

@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, database, MenuItem, Order, OrderBox, OrderLine, PickupWindow, User } from '@fryline/api/db';
-import { newPickupCode } from '@fryline/api/services/pickup-codes';
+import { newPickupCode } from '@fryline/api/services/orders/pickup-codes';
 import { DEMO_TIME_ZONE, demoBoxes } from './demo.js';
 
 // A bake day happening now, for the counter: one window already over (its

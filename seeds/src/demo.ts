@@ -1,11 +1,12 @@
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
 import { DEFAULT_FORMULA, DEFAULT_PLAN_SETTINGS, type Formula } from '@fryline/production';
-import { cutoffFromSchedule } from '@fryline/api/services/production';
+import { boxCatalogue, boxSizes, priceOrder, roundHalfUp, type BoxSize } from '@fryline/schemas';
+import { cutoffFromSchedule } from '@fryline/api/services/production/production';
 import {
   database, FormulaVersion, ProductionSettings, BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, Order, OrderBox, OrderLine, PickupWindow, ShopSettings, User,
 } from '@fryline/api/db';
-import { newPickupCode } from '@fryline/api/services/pickup-codes';
+import { newPickupCode } from '@fryline/api/services/orders/pickup-codes';
 
 // A fictional pop-up, invented for the demo: Brindle & Bell Doughnuts sells
 // on Saturdays and Sundays from a stall at the (equally fictional)
@@ -61,11 +62,10 @@ export const demoMenu = [
   { name: 'Cinnamon Sugar Holes', glazeRecipeId: 'cinnamon-sugar', flavour: 'Plain', glaze: 'Cinnamon sugar', kind: 'hole', surchargeCents: 0, allergens: A, description: 'Doughnut holes rolled in cinnamon sugar.' },
 ] as const;
 
-export const demoBoxes = [
-  { size: 'dozen', pieces: 12, priceCents: 3000 },
-  { size: 'half-dozen', pieces: 6, priceCents: 1600 },
-  { size: 'holes', pieces: 12, priceCents: 800 },
-] as const;
+const DEMO_BOX_PRICES: Record<BoxSize, number> = { dozen: 3000, 'half-dozen': 1600, holes: 800 };
+
+/** The demo's boxes: the catalogue's sizes and pieces at the demo's prices. */
+export const demoBoxes = boxSizes.map((size) => ({ size, pieces: boxCatalogue[size].pieces, priceCents: DEMO_BOX_PRICES[size] }));
 
 const WINDOWS = [
   ['08:00', '09:00'],
@@ -138,18 +138,25 @@ async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, 
   let ringsTaken = 0;
   let holesTaken = 0;
   for (const [i, status] of statuses.entries()) {
-    const dozen = i % 3 !== 2;
-    const pieces = dozen ? 12 : 6;
+    const size: BoxSize = i % 3 !== 2 ? 'dozen' : 'half-dozen';
+    const pieces = boxCatalogue[size].pieces;
+    const bagPieces = boxCatalogue.holes.pieces;
     const first = rings[i % rings.length]!;
     const second = rings[(i + 2) % rings.length]!;
     const withHoles = i % 4 === 0;
-    const boxPrice = dozen ? 3000 : 1600;
-    const surcharge = first.surchargeCents * (pieces / 2) + second.surchargeCents * (pieces / 2);
-    const subtotal = boxPrice + surcharge + (withHoles ? 800 : 0);
+    const boxPrice = DEMO_BOX_PRICES[size];
+    const price = priceOrder(
+      [
+        { boxPriceCents: boxPrice, items: [first, second].map((m) => ({ surchargeCents: m.surchargeCents, quantity: pieces / 2 })) },
+        ...(withHoles ? [{ boxPriceCents: DEMO_BOX_PRICES.holes, items: [{ surchargeCents: hole.surchargeCents, quantity: bagPieces }] }] : []),
+      ],
+      { mode: 'included', rateBasisPoints: 0 },
+    );
+    const subtotal = price.totalCents;
     const counted = status !== 'cancelled' && status !== 'refunded';
     if (counted) {
       ringsTaken += pieces;
-      holesTaken += withHoles ? 12 : 0;
+      holesTaken += withHoles ? bagPieces : 0;
     }
     const paidAt = date.minus({ days: 3, hours: i }).toJSDate();
     const order = await Order.create(
@@ -159,13 +166,14 @@ async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, 
         pickupWindowId: windows[i % windows.length]!.id,
         status,
         rings: pieces,
-        holes: withHoles ? 12 : 0,
+        holes: withHoles ? bagPieces : 0,
         holdsCapacity: counted,
         subtotalCents: subtotal,
         taxCents: 0,
         totalCents: subtotal,
         refundedCents: status === 'refunded' || status === 'cancelled' ? subtotal : 0,
-        feeCents: Math.round(subtotal * 0.029) + 30,
+        // the demo's card fee, our own round figures: 2.9 % + 30 ¢, half up to the cent
+        feeCents: roundHalfUp(subtotal * 29, 1000) + 30,
         pickupCode: newPickupCode(),
         paidAt,
         collectedAt: status === 'collected' ? windows[i % windows.length]!.startsAt : null,
@@ -174,7 +182,7 @@ async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, 
       },
       { transaction },
     );
-    const box = await OrderBox.create({ orderId: order.id, position: 0, size: dozen ? 'dozen' : 'half-dozen', pieces, priceCents: boxPrice }, { transaction });
+    const box = await OrderBox.create({ orderId: order.id, position: 0, size, pieces, priceCents: boxPrice }, { transaction });
     for (const item of [first, second]) {
       await OrderLine.create(
         { orderBoxId: box.id, menuItemId: item.id, name: item.name, kind: 'ring', quantity: pieces / 2, surchargeCents: item.surchargeCents, allergens: item.allergens },
@@ -182,9 +190,9 @@ async function seedPastWeek(menu: MenuItem[], customers: User[], now: DateTime, 
       );
     }
     if (withHoles) {
-      const bag = await OrderBox.create({ orderId: order.id, position: 1, size: 'holes', pieces: 12, priceCents: 800 }, { transaction });
+      const bag = await OrderBox.create({ orderId: order.id, position: 1, size: 'holes', pieces: bagPieces, priceCents: DEMO_BOX_PRICES.holes }, { transaction });
       await OrderLine.create(
-        { orderBoxId: bag.id, menuItemId: hole.id, name: hole.name, kind: 'hole', quantity: 12, surchargeCents: 0, allergens: hole.allergens },
+        { orderBoxId: bag.id, menuItemId: hole.id, name: hole.name, kind: 'hole', quantity: bagPieces, surchargeCents: hole.surchargeCents, allergens: hole.allergens },
         { transaction },
       );
     }

@@ -16,11 +16,16 @@ import { bakeDaysRouter } from './routes/bake-days.js';
 import { ordersRouter } from './routes/orders.js';
 import { waitlistRouter } from './routes/waitlist.js';
 import { webhooksRouter } from './routes/webhooks.js';
+import { staffBakeDaysRouter } from './routes/staff-bake-days.js';
 import { staffOrdersRouter } from './routes/staff-orders.js';
+import { staffMembersRouter } from './routes/staff-members.js';
+import { menuItemsRouter } from './routes/menu-items.js';
 import { productionRouter } from './routes/production.js';
-import { setupRouter } from './routes/setup.js';
+import { setContext } from './integrations/context.js';
+import { requestClock } from './middleware/request-clock.js';
+import { requestLog } from './middleware/request-log.js';
+import { checkResponsesAgainstContract } from './lib/route.js';
 import { counterRouter } from './routes/counter.js';
-import { setContext } from './services/context.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -44,10 +49,12 @@ function spa(app: express.Express, mount: string, dir: string) {
  */
 export function createApp(config: Config) {
   setContext(config);
+  checkResponsesAgainstContract(config.NODE_ENV !== 'production');
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.set('query parser', 'extended');
+  app.use(requestLog);
 
   // Everything the apps load comes from this origin; images may be data: URLs (QR codes).
   app.use(
@@ -72,6 +79,7 @@ export function createApp(config: Config) {
     }),
   );
 
+  app.use(requestClock);
   app.use(healthRouter);
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
@@ -103,13 +111,15 @@ export function createApp(config: Config) {
   app.use(csrfProtection(SESSION_COOKIE, config.SESSION_SECRET));
 
   app.use(authRouter(passport, SESSION_COOKIE, config.SESSION_SECRET));
-  app.use(counterRouter); // before the orders router: /api/orders/by-code is not an order id
   app.use(bakeDaysRouter);
   app.use(ordersRouter);
   app.use(waitlistRouter);
+  app.use(staffBakeDaysRouter);
   app.use(staffOrdersRouter);
+  app.use(staffMembersRouter);
+  app.use(menuItemsRouter);
   app.use(productionRouter);
-  app.use(setupRouter);
+  app.use(counterRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -3,9 +3,12 @@ import { loadConfig, ConfigError } from './config/env.js';
 import { connectDatabase, closeDatabase } from './db/sequelize.js';
 import { createApp } from './app.js';
 import { startJobs } from './jobs/index.js';
+import { logger } from './lib/logger.js';
 
 async function main() {
+  logger.level = 'info';
   const config = loadConfig(process.env);
+  logger.level = config.LOG_LEVEL;
   const sequelize = connectDatabase(config.DATABASE_URL);
   const app = createApp(config);
   const stopJobs = config.JOBS === 'on' ? startJobs(config, sequelize) : async () => {};
@@ -13,15 +16,15 @@ async function main() {
   const server = app.listen(config.PORT, config.HOST);
   server.on('error', (err: NodeJS.ErrnoException) => {
     if (err.code === 'EADDRINUSE') {
-      console.error(`Fryline cannot start: port ${config.PORT} is already in use. Set PORT to a free port.`);
+      logger.fatal(`Fryline cannot start: port ${config.PORT} is already in use. Set PORT to a free port.`);
     } else {
-      console.error('Fryline cannot start:', err.message);
+      logger.fatal({ err }, `Fryline cannot start: ${err.message}`);
     }
     process.exit(1);
   });
   server.on('listening', () => {
     const { port } = server.address() as AddressInfo;
-    console.log(`Fryline API listening on http://${config.HOST}:${port} (public address ${config.publicUrl})`);
+    logger.info({ port, publicUrl: config.publicUrl }, `Fryline API listening on http://${config.HOST}:${port} (public address ${config.publicUrl})`);
   });
 
   let closing = false;
@@ -40,6 +43,7 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(err instanceof ConfigError ? err.message : err);
+  if (err instanceof ConfigError) logger.fatal(err.message);
+  else logger.fatal({ err }, 'Fryline cannot start');
   process.exit(1);
 });

@@ -132,6 +132,6 @@ describe('roles on staff routes', () => {
   it('answers 401 to /api/me without a session', async () => {
     const res = await request(stack.app).get('/api/me');
     expect(res.status).toBe(401);
-    expect(res.body).toEqual({ error: { code: 'unauthenticated', message: expect.any(String) } });
+    expect(res.body).toEqual({ error: { code: 'unauthenticated', message: expect.any(String), details: { requestId: res.headers['x-request-id'] } } });
   });
 });

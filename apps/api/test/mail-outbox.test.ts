@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { database } from '../src/db/sequelize.js';
 import { OutboxMessage } from '../src/db/models/index.js';
-import { enqueueMail } from '../src/services/outbox.js';
+import { enqueueMail } from '../src/services/mail/outbox.js';
 import { relayOutbox, backoffSeconds } from '../src/jobs/outbox-relay.js';
 import { createMailTransport } from '../src/integrations/mailer.js';
 import { useStack } from './support.js';

@@ -4,8 +4,8 @@ import jsQR from 'jsqr';
 import ICAL from 'ical.js';
 import { DateTime } from 'luxon';
 import { BakeDay, Order, OutboxMessage, PickupWindow, ShopSettings } from '../src/db/models/index.js';
-import { PICKUP_CODE_ALPHABET } from '../src/services/pickup-codes.js';
-import { context } from '../src/services/context.js';
+import { PICKUP_CODE_ALPHABET } from '../src/services/orders/pickup-codes.js';
+import { context } from '../src/integrations/context.js';
 import { Browser, signIn, useStack } from './support.js';
 import { CARD_OK, deliverMail, halfDozen, mixedDozen, openDay, orderAndPay, remaining, sessionIdOf } from './order-helpers.js';
 

@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay, Order, OutboxMessage, Refund, WaitlistEntry } from '../src/db/models/index.js';
-import { lapseOffers, OFFER_MINUTES } from '../src/services/waitlist.js';
+import { lapseOffers, OFFER_MINUTES } from '../src/services/waitlist/waitlist.js';
 import { Browser, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay, remaining } from './order-helpers.js';
 

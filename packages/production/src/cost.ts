@@ -11,7 +11,7 @@
 import { ProductionInputError, requirePositive, requireWholeNonNegative, requireNonNegative } from './errors.js';
 import type { ScaledIngredient } from './formula.js';
 import type { GlazeRecipe } from './glaze.js';
-import { roundCents } from './units.js';
+import { roundHalfUp } from './units.js';
 
 export interface Prices {
   /** Integer cents per kg by ingredient name (formula lines and glaze parts). */
@@ -123,7 +123,7 @@ export function costBake(input: CostInput): CostPlan {
 
   const perPiece: PieceCost[] = [null, ...input.glazes.map((g) => g.id)].map((glazeId) => {
     const c = unrounded(glazeId, 'glazes');
-    return { glazeId, ringCents: roundCents(c.ring), holeCents: roundCents(c.hole) };
+    return { glazeId, ringCents: roundHalfUp(c.ring), holeCents: roundHalfUp(c.hole) };
   });
   const boxes = input.boxes.map((box, i): BoxCost => {
     const field = `boxes[${i}]`;
@@ -132,9 +132,9 @@ export function costBake(input: CostInput): CostPlan {
     const priceCents = requireWholeNonNegative(`${field}.priceCents`, box.priceCents);
     const packaging = requireWholeNonNegative(`${field}.packagingCents`, box.packagingCents ?? 0);
     const c = unrounded(box.glazeId, `${field}.glazeId`);
-    const costCents = roundCents(rings * c.ring + holes * c.hole + packaging);
+    const costCents = roundHalfUp(rings * c.ring + holes * c.hole + packaging);
     const marginCents = priceCents - costCents;
     return { id: box.id, name: box.name, priceCents, costCents, marginCents, marginPercent: priceCents > 0 ? (marginCents / priceCents) * 100 : null };
   });
-  return { doughCents: roundCents(doughCents), perPiece, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
+  return { doughCents: roundHalfUp(doughCents), perPiece, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
 }

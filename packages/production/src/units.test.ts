@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  cDeltaToF, centsToDollars, cToF, dollarsToCents, fDeltaToC, fToC, gToLb, gToOz, inToMm, lbToG, mmToIn, ozToG, roundCents, tempInBothScales,
+  cDeltaToF, cToF, fDeltaToC, fToC, gToLb, gToOz, inToMm, lbToG, mmToIn, ozToG, roundHalfUp, tempInBothScales,
 } from './units.js';
 import { ProductionInputError } from './errors.js';
 
@@ -46,17 +46,12 @@ describe('masses and lengths (NIST Handbook 44 App. C, exact)', () => {
 });
 
 describe('money helpers', () => {
-  it('dollars to integer cents, nearest cent with halves away from zero (worked by hand)', () => {
-    expect(dollarsToCents(1.005)).toBe(101);
-    expect(dollarsToCents(19.99)).toBe(1999);
-    expect(dollarsToCents(-2.5)).toBe(-250);
-    expect(centsToDollars(1999)).toBe(19.99);
-    expect(roundCents(12.5)).toBe(13);
-    expect(roundCents(12.49)).toBe(12);
+  it('rounds cents to the nearest cent with halves up (worked by hand)', () => {
+    expect(roundHalfUp(12.5)).toBe(13);
+    expect(roundHalfUp(12.49)).toBe(12);
   });
 
-  it('refuses non-numbers and fractional cents with a clear error', () => {
+  it('refuses non-numbers with a clear error', () => {
     expect(() => fToC(Number.NaN)).toThrow(ProductionInputError);
-    expect(() => centsToDollars(1.5)).toThrow(/whole number of cents/);
   });
 });

@@ -56,30 +56,17 @@ export function mmToIn(millimetres: number): number {
 }
 
 /**
- * Dollars (or any currency's major unit) → integer cents, rounded to the
- * nearest cent with halves away from zero. The decimal string is rounded
- * first so that 1.005 stays 101 rather than falling to 100 in binary.
+ * The one half-up rounding: num ÷ den to a whole number, halves up
+ * (0.5 → 1, 2.5 → 3). With integer num and den > 0 (the price and tax sums)
+ * there is no floating-point drift; with den = 1 it rounds an amount already
+ * worked out, as each cost sum does once at its end. @fryline/schemas
+ * re-exports it for money.
  */
-export function dollarsToCents(amount: number): number {
-  requireFinite('amount', amount);
-  const cents = Number((Math.abs(amount) * 100).toFixed(6));
-  return Math.sign(amount) * Math.round(cents);
-}
-
-/** Integer cents → major units (for display only). */
-export function centsToDollars(cents: number): number {
-  requireFinite('cents', cents);
-  if (!Number.isInteger(cents)) throw new ProductionInputError('cents', `must be a whole number of cents (got ${cents})`);
-  return cents / 100;
-}
-
-/**
- * Rounds a non-integer amount of cents to a whole cent: nearest cent, halves
- * up (away from zero). Used once, at the end of each cost sum.
- */
-export function roundCents(cents: number): number {
-  requireFinite('cents', cents);
-  return Math.sign(cents) * Math.round(Math.abs(cents));
+export function roundHalfUp(num: number, den = 1): number {
+  requireFinite('amount', num);
+  requireFinite('divisor', den);
+  if (den <= 0) throw new ProductionInputError('divisor', `must be more than 0 (got ${den})`);
+  return Math.floor((2 * num + den) / (2 * den));
 }
 
 /** A temperature in words for the baker's texts, both scales: "188 °C (370 °F)". */

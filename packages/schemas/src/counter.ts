@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
 import { orderStatuses } from './orders.js';
 
 // The counter on bake day: the pickup list, hand-over with undo, no-shows,

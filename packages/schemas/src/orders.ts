@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
 
 const quantity = z
   .number({ error: 'Quantity must be a number' })
@@ -36,44 +36,54 @@ export const moveOrderSchema = z.strictObject({
 export const orderStatuses = ['held', 'paid', 'collected', 'no_show', 'cancelled', 'refunded', 'expired'] as const;
 export type OrderStatus = (typeof orderStatuses)[number];
 
-export interface OrderBoxView {
-  size: z.infer<typeof boxSizeSchema>;
-  pieces: number;
-  priceCents: number;
-  items: Array<{ menuItemId: string; name: string; quantity: number; surchargeCents: number; allergens: string[] }>;
-}
+const windowRefSchema = z.object({ id: z.string(), startsAt: z.string(), endsAt: z.string() });
 
-export interface OrderView {
-  id: string;
-  status: OrderStatus;
-  subtotalCents: number;
-  taxCents: number;
-  totalCents: number;
-  refundedCents: number;
-  pickupCode: string | null;
-  holdExpiresAt: string | null;
-  checkoutUrl: string | null;
-  pickupWindow: { id: string; startsAt: string; endsAt: string };
-  bakeDay: { id: string; date: string; place: string; address: string; timeZone: string; cutoffAt: string };
-  boxes: OrderBoxView[];
-  createdAt: string;
-  canCancel: boolean;
-}
+export const orderStatusSchema = z.enum(orderStatuses);
+
+export const orderBoxViewSchema = z.object({
+  size: boxSizeSchema,
+  pieces: z.number().int(),
+  priceCents: z.number().int(),
+  items: z.array(z.object({ menuItemId: z.string(), name: z.string(), quantity: z.number().int(), surchargeCents: z.number().int(), allergens: z.array(z.string()) })),
+});
+export type OrderBoxView = z.infer<typeof orderBoxViewSchema>;
+
+export const orderViewSchema = z.object({
+  id: z.string(),
+  status: orderStatusSchema,
+  subtotalCents: z.number().int(),
+  taxCents: z.number().int(),
+  totalCents: z.number().int(),
+  refundedCents: z.number().int(),
+  pickupCode: z.string().nullable(),
+  holdExpiresAt: z.string().nullable(),
+  checkoutUrl: z.string().nullable(),
+  pickupWindow: windowRefSchema,
+  bakeDay: z.object({ id: z.string(), date: z.string(), place: z.string(), address: z.string(), timeZone: z.string(), cutoffAt: z.string() }),
+  boxes: z.array(orderBoxViewSchema),
+  createdAt: z.string(),
+  canCancel: z.boolean(),
+});
+export type OrderView = z.infer<typeof orderViewSchema>;
 
 /** What POST /api/orders answers: the hold and where to pay for it. */
-export interface CreatedOrder {
-  id: string;
-  status: 'held';
-  totalCents: number;
-  holdExpiresAt: string;
-  checkoutUrl: string;
-}
+export const createdOrderSchema = z.object({
+  id: z.string(),
+  status: z.literal('held'),
+  totalCents: z.number().int(),
+  holdExpiresAt: z.string(),
+  checkoutUrl: z.string(),
+});
+export type CreatedOrder = z.infer<typeof createdOrderSchema>;
 
 /** One order as its customer sees it, with the QR code and calendar link once paid. */
-export interface OrderDetail extends OrderView {
-  qrDataUrl: string | null;
-  calendarUrl: string | null;
-}
+export const orderDetailSchema = orderViewSchema.extend({
+  qrDataUrl: z.string().nullable(),
+  calendarUrl: z.string().nullable(),
+});
+export type OrderDetail = z.infer<typeof orderDetailSchema>;
+
+export const checkoutLinkSchema = z.object({ checkoutUrl: z.string() });
 
 export const joinWaitlistSchema = z
   .strictObject({
@@ -83,41 +93,60 @@ export const joinWaitlistSchema = z
   .refine((b) => b.rings + b.holes > 0, { message: 'Ask for at least one doughnut', path: ['rings'] });
 export type JoinWaitlistInput = z.infer<typeof joinWaitlistSchema>;
 
-export interface WaitlistEntryView {
-  id: string;
-  bakeDayId: string;
-  rings: number;
-  holes: number;
-  status: 'waiting' | 'offered' | 'claimed' | 'lapsed' | 'left';
-  /** Place in the queue while waiting (1 = next), null otherwise. */
-  position: number | null;
-  offerExpiresAt: string | null;
-}
+export const waitlistStatuses = ['waiting', 'offered', 'claimed', 'lapsed', 'left'] as const;
 
-export interface WaitlistOfferView {
-  bakeDayId: string;
-  rings: number;
-  holes: number;
-  expiresAt: string;
-}
+export const waitlistEntryViewSchema = z.object({
+  id: z.string(),
+  bakeDayId: z.string(),
+  rings: z.number().int(),
+  holes: z.number().int(),
+  status: z.enum(waitlistStatuses),
+  /** Place in the queue while waiting (1 = next), null otherwise. */
+  position: z.number().int().nullable(),
+  offerExpiresAt: z.string().nullable(),
+});
+export type WaitlistEntryView = z.infer<typeof waitlistEntryViewSchema>;
+
+/** What POST /api/bake-days/:id/waitlist answers: the entry and its place in the queue. */
+export const joinedWaitlistSchema = waitlistEntryViewSchema.pick({ id: true, position: true, status: true, rings: true, holes: true });
+export type JoinedWaitlist = z.infer<typeof joinedWaitlistSchema>;
+
+export const waitlistOfferViewSchema = z.object({
+  bakeDayId: z.string(),
+  rings: z.number().int(),
+  holes: z.number().int(),
+  expiresAt: z.string(),
+});
+export type WaitlistOfferView = z.infer<typeof waitlistOfferViewSchema>;
 
 /** One order as the staff see it in a bake day's list. */
-export interface StaffOrderView {
-  id: string;
-  status: OrderStatus;
-  customer: { name: string; email: string };
-  pickupCode: string | null;
-  pickupWindow: { id: string; startsAt: string; endsAt: string };
-  totalCents: number;
-  refundedCents: number;
-  paidAt: string | null;
-  rings: number;
-  holes: number;
-  boxes: Array<{ size: z.infer<typeof boxSizeSchema>; items: Array<{ name: string; quantity: number }> }>;
-}
+export const staffOrderViewSchema = z.object({
+  id: z.string(),
+  status: orderStatusSchema,
+  customer: z.object({ name: z.string(), email: z.string() }),
+  pickupCode: z.string().nullable(),
+  pickupWindow: windowRefSchema,
+  totalCents: z.number().int(),
+  refundedCents: z.number().int(),
+  paidAt: z.string().nullable(),
+  rings: z.number().int(),
+  holes: z.number().int(),
+  boxes: z.array(z.object({ size: boxSizeSchema, items: z.array(z.object({ name: z.string(), quantity: z.number().int() })) })),
+});
+export type StaffOrderView = z.infer<typeof staffOrderViewSchema>;
 
 export const refundRequestSchema = z.strictObject({
   amountCents: z.number().int('Amount must be whole cents').min(1, 'Amount must be at least 1 cent'),
   reason: z.string().trim().min(1, 'Give a reason').max(200),
 });
 export type RefundRequest = z.infer<typeof refundRequestSchema>;
+
+export const refundViewSchema = z.object({
+  id: z.string(),
+  orderId: z.string(),
+  amountCents: z.number().int(),
+  reason: z.string(),
+  createdAt: z.string(),
+  order: z.object({ status: orderStatusSchema, totalCents: z.number().int(), refundedCents: z.number().int() }),
+});
+export type RefundView = z.infer<typeof refundViewSchema>;

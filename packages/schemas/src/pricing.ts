@@ -1,4 +1,5 @@
 import type { TaxSetting } from './bake-days.js';
+import { roundHalfUp } from '@fryline/production';
 
 export interface PricedBoxInput {
   boxPriceCents: number;
@@ -10,14 +11,6 @@ export interface OrderPrice {
   subtotalCents: number;
   taxCents: number;
   totalCents: number;
-}
-
-/**
- * Rounds a non-negative rational amount of cents half up (0.5 ¢ → 1 ¢).
- * Works on integers only, so no floating-point drift: value = num / den.
- */
-function roundHalfUp(num: number, den: number): number {
-  return Math.floor((2 * num + den) / (2 * den));
 }
 
 /**
@@ -40,9 +33,4 @@ export function priceOrder(boxes: PricedBoxInput[], tax: TaxSetting): OrderPrice
   }
   const net = roundHalfUp(subtotalCents * 10_000, 10_000 + rate);
   return { boxesCents, subtotalCents, taxCents: subtotalCents - net, totalCents: subtotalCents };
-}
-
-/** Formats integer cents as dollars for display, e.g. 1250 → "$12.50". */
-export function formatCents(cents: number, currency = 'USD'): string {
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
 }

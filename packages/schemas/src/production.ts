@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { BakePlan, Capacity } from '@fryline/production';
 
 // Forms and the API validate the baker's settings with these schemas; the
 // maths itself lives in @fryline/production and re-checks what it is given.
@@ -135,13 +136,65 @@ export const capacityOverrideSchema = z.strictObject({
 });
 
 /** What the production sheet route says about the numbers it worked out. */
-export interface PlanMeta {
-  bakeDay: { id: string; date: string; place: string; timeZone: string; cutoffAt: string; capacity: { rings: number; holes: number } };
-  ordersCounted: number;
-  paidOrders: number;
-  heldOrders: number;
-  computedAt: string;
-  formula: { id: string | null; version: number; note: string };
-  latestFormulaVersion: number;
-  menu: Array<{ id: string; name: string; kind: string; glaze: string; glazeRecipeId: string | null }>;
-}
+export const planMetaSchema = z.object({
+  bakeDay: z.object({
+    id: z.string(), date: z.string(), place: z.string(), timeZone: z.string(), cutoffAt: z.string(),
+    capacity: z.object({ rings: z.number().int(), holes: z.number().int() }),
+  }),
+  ordersCounted: z.number().int(),
+  paidOrders: z.number().int(),
+  heldOrders: z.number().int(),
+  computedAt: z.string(),
+  formula: z.object({ id: z.string().nullable(), version: z.number().int(), note: z.string() }),
+  latestFormulaVersion: z.number().int(),
+  menu: z.array(z.object({ id: z.string(), name: z.string(), kind: z.string(), glaze: z.string(), glazeRecipeId: z.string().nullable() })),
+});
+export type PlanMeta = z.infer<typeof planMetaSchema>;
+
+/** The bake maths' own result types are TypeScript from packages/production: carried, not re-validated. */
+export const bakePlanSchema = z.custom<BakePlan>((v) => typeof v === 'object' && v !== null);
+export const equipmentCapacitySchema = z.custom<Capacity>((v) => typeof v === 'object' && v !== null);
+
+/** `GET /api/bake-days/:id/plan`: the sheet, and what it was worked out from. */
+export const planResponseSchema = z.object({ plan: bakePlanSchema, meta: planMetaSchema });
+export type PlanResponse = z.infer<typeof planResponseSchema>;
+
+/** The saved production settings, and when they were last saved (null: never, the defaults). */
+export const productionSettingsViewSchema = z.object({
+  equipment: z.custom<EquipmentInput>(),
+  schedule: z.custom<z.infer<typeof scheduleSchema>>(),
+  spare: z.custom<z.infer<typeof spareSchema>>(),
+  glazes: z.custom<Array<z.infer<typeof glazeRecipeSchema>>>(),
+  prices: z.custom<z.infer<typeof pricesSchema>>(),
+  roomTempC: z.number(),
+  updatedAt: z.string().nullable(),
+});
+export type ProductionSettingsView = z.infer<typeof productionSettingsViewSchema>;
+
+export const formulaVersionViewSchema = z.object({
+  id: z.string(),
+  version: z.number().int(),
+  note: z.string(),
+  createdAt: z.string(),
+  formula: z.custom<FormulaInput>(),
+});
+export type FormulaVersionView = z.infer<typeof formulaVersionViewSchema>;
+
+export const formulaListSchema = z.object({
+  /** The newest version (id null and version 0: the built-in starting formula, never saved). */
+  current: z.object({ id: z.string().nullable(), version: z.number().int(), formula: z.custom<FormulaInput>(), note: z.string(), createdAt: z.string().nullable() }),
+  /** Newest first. */
+  versions: z.array(formulaVersionViewSchema),
+});
+export type FormulaList = z.infer<typeof formulaListSchema>;
+
+export const pinFormulaSchema = z.strictObject({ formulaVersionId: z.uuid() });
+
+/** What setting a bake day's capacity answers. */
+export const capacityResultSchema = z.object({
+  rings: z.number().int(),
+  holes: z.number().int(),
+  remaining: z.object({ rings: z.number().int(), holes: z.number().int() }),
+  derived: equipmentCapacitySchema,
+});
+export type CapacityResult = z.infer<typeof capacityResultSchema>;

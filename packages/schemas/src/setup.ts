@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { boxSizeSchema } from './bake-days.js';
+import { boxSizeSchema } from './boxes.js';
+import { menuItemViewSchema } from './bake-days.js';
 import { roleSchema } from './roles.js';
 
 // The owner's setup: new bake days and the staff who may sign in.
@@ -54,22 +55,19 @@ export type StaffMemberInput = z.infer<typeof staffMemberInputSchema>;
 
 export const changeRoleSchema = z.strictObject({ role: roleSchema });
 
-export interface StaffMemberView {
-  id: string;
-  email: string;
-  name: string;
-  role: 'counter' | 'baker' | 'owner';
+export const staffMemberViewSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema.exclude(['customer']),
   /** False until they have signed in once with this (verified) address. */
-  signedIn: boolean;
-}
+  signedIn: z.boolean(),
+});
+export type StaffMemberView = z.infer<typeof staffMemberViewSchema>;
 
-export interface MenuItemAdminView {
-  id: string;
-  name: string;
-  flavour: string;
-  glaze: string;
-  kind: 'ring' | 'hole';
-  surchargeCents: number;
-  allergens: string[];
-  active: boolean;
-}
+/** A menu item as the staff manage it: the customer's view without the description, with whether it is on sale. */
+export const menuItemAdminViewSchema = menuItemViewSchema.omit({ description: true }).extend({
+  allergens: z.array(z.string()),
+  active: z.boolean(),
+});
+export type MenuItemAdminView = z.infer<typeof menuItemAdminViewSchema>;

@@ -51,6 +51,10 @@ describe('words', () => {
     expect(listWords(['wheat'])).toBe('wheat');
     expect(listWords(['wheat', 'milk', 'eggs'])).toBe('wheat, milk and eggs');
   });
+
+  it('offers a choice with a final “or” (English usage, no serial comma)', () => {
+    expect(listWords(['a dozen', 'a half dozen', 'a bag of holes'], 'or')).toBe('a dozen, a half dozen or a bag of holes');
+  });
 });
 
 describe('piece counts', () => {

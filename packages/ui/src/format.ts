@@ -68,10 +68,10 @@ export function plural(count: number, one: string, many = `${one}s`): string {
   return `${count} ${count === 1 ? one : many}`;
 }
 
-/** "wheat, milk and eggs". */
-export function listWords(words: readonly string[]): string {
+/** "wheat, milk and eggs"; "a dozen, a half dozen or a bag of holes" with `last = 'or'`. */
+export function listWords(words: readonly string[], last: 'and' | 'or' = 'and'): string {
   if (words.length <= 1) return words.join('');
-  return `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
+  return `${words.slice(0, -1).join(', ')} ${last} ${words[words.length - 1]}`;
 }
 
 /** "12 rings and 20 holes", "6 rings": leaves out a kind with none. */

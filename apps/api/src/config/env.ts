@@ -25,6 +25,7 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Fryline orders <orders@fryline.test>'),
     HOLD_MINUTES: z.coerce.number().int().min(1).max(120).default(10),
     JOBS: z.enum(['on', 'off']).default('on'),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     STATIC_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {

@@ -1,7 +1,7 @@
 import passport from 'passport';
 import { Strategy as GoogleStrategy, type Profile } from 'passport-google-oauth20';
 import type { Config } from '../config/env.js';
-import { findMe, signIn } from '../services/users.js';
+import { findMe, signIn } from '../services/users/users.js';
 
 /** Google sign-in through passport, pointed by configuration at the provider (or its local stand-in). */
 export function configurePassport(config: Config) {

@@ -1,9 +1,9 @@
 import { Op } from 'sequelize';
 import { database } from '../db/sequelize.js';
 import { Order } from '../db/models/index.js';
-import { releaseOrder } from '../services/capacity.js';
-import { expireCheckout } from '../services/checkout.js';
-import { lapseOffers, offerFreedCapacity } from '../services/waitlist.js';
+import { releaseOrder } from '../db/queries/capacity.js';
+import { expireCheckout } from '../integrations/checkout.js';
+import { lapseOffers, offerFreedCapacity } from '../services/waitlist/waitlist.js';
 
 /**
  * Expires unpaid holds whose time is up. The checkout session is expired
@@ -23,7 +23,7 @@ export async function sweepHolds(now: Date): Promise<{ expired: number; lapsedOf
       const released = await releaseOrder(order.id, ['held'], 'expired', transaction);
       if (released) {
         expired += 1;
-        await offerFreedCapacity(order.bakeDayId, transaction);
+        await offerFreedCapacity(order.bakeDayId, transaction, now);
       }
     });
   }

@@ -5,14 +5,15 @@ import { relayOutbox } from './outbox-relay.js';
 import { sweepHolds } from './hold-sweeper.js';
 import { queueReminders } from './reminders.js';
 import { every } from './scheduler.js';
+import { now } from '../integrations/context.js';
 
 /** Background work of one API process; several processes may run side by side. */
 export function startJobs(config: Config, sequelize: Sequelize): () => Promise<void> {
   const transport = createMailTransport(config);
   const stops = [
     every('outbox', 1_000, () => relayOutbox(sequelize, transport, config.MAIL_FROM)),
-    every('holds', 5_000, () => sweepHolds(new Date())),
-    every('reminders', 60_000, () => queueReminders(new Date())),
+    every('holds', 5_000, () => sweepHolds(now())),
+    every('reminders', 60_000, () => queueReminders(now())),
   ];
   return async () => {
     await Promise.all(stops.map((stop) => stop()));

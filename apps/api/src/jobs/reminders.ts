@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { database } from '../db/sequelize.js';
-import { queueReminder } from '../services/order-mails.js';
+import { queueReminder } from '../services/mail/order-mails.js';
 
 /** Queues the day-before reminder for paid orders whose pickup starts within 24 hours; once per order. */
 export async function queueReminders(now: Date): Promise<number> {

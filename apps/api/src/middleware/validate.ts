@@ -1,4 +1,4 @@
-import type { Request, RequestHandler } from 'express';
+import type { RequestHandler } from 'express';
 import type { z } from 'zod';
 import { AppError } from '../lib/app-error.js';
 
@@ -35,9 +35,3 @@ export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHan
     next();
   };
 }
-
-export function valid<T>(res: { locals: Record<string, unknown> }, part: Part): T {
-  return (res.locals.valid as Record<Part, T>)[part];
-}
-
-export type { Request };

@@ -1,7 +1,9 @@
 import { Router, type Request, type Response } from 'express';
 import type { PassportStatic } from 'passport';
 import { csrfToken } from '../middleware/csrf.js';
-import { requireUser } from '../middleware/auth.js';
+import { api } from '@fryline/schemas';
+import { currentUser, requireUser } from '../middleware/auth.js';
+import { route } from '../lib/route.js';
 
 /** Only a same-origin path may be a return address after sign-in. */
 export function safeReturnTo(value: unknown): string {
@@ -51,14 +53,12 @@ export function authRouter(passport: PassportStatic, cookieName: string, secret:
     });
   });
 
-  router.get('/api/csrf', (req, res) => {
-    res.set("Cache-Control", "no-store").json({ token: csrfToken(req, secret) });
-  });
+  route(router, api.csrf, [], ({ req }) => ({ token: csrfToken(req, secret) }), { noStore: true });
 
-  router.get('/api/me', requireUser, (req, res) => {
-    const { id, email, name, role } = req.user!;
-    res.set('Cache-Control', 'no-store').json({ id, email, name, role });
-  });
+  route(router, api.me, [requireUser], ({ req }) => {
+    const { id, email, name, role } = currentUser(req);
+    return { id, email, name, role };
+  }, { noStore: true });
 
   return router;
 }

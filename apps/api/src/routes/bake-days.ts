@@ -1,20 +1,46 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { validate, valid } from '../middleware/validate.js';
-import { getBakeDay, listPast, listUpcoming } from '../services/bake-days.js';
-import { requireRole } from '../middleware/auth.js';
+import { api } from '@fryline/schemas';
+import { currentUser, requireRole, requireUser } from '../middleware/auth.js';
+import { route } from '../lib/route.js';
+import { getBakeDay, listUpcoming } from '../services/bake-days/bake-days.js';
+import { planForBakeDay, pinFormula, setBakeDayCapacity } from '../services/production/production.js';
+import { joinWaitlist } from '../services/waitlist/waitlist.js';
+import { listPickups } from '../services/counter/pickups.js';
+import { getSurplus } from '../services/counter/surplus.js';
+import { sellWalkUp } from '../services/counter/walk-ups.js';
+import { markRestNoShow } from '../services/counter/hand-over.js';
+import { endOfDay } from '../services/counter/end-of-day.js';
+import { idempotencyKey } from '../services/counter/idempotency.js';
 
+/** /api/bake-days: the days customers see, their waiting lists, each day's production sheet and capacity, and the counter's bake day. */
 export const bakeDaysRouter = Router();
-const idParams = z.object({ id: z.uuid('Unknown bake day') });
 
-bakeDaysRouter.get('/api/bake-days', async (_req, res) => {
-  res.json(await listUpcoming(new Date()));
+route(bakeDaysRouter, api.listBakeDays, [], ({ now }) => listUpcoming(now));
+
+route(bakeDaysRouter, api.getBakeDay, [], ({ params, now }) => getBakeDay(params.id, now));
+
+route(bakeDaysRouter, api.joinWaitlist, [requireUser], ({ req, params, body, now }) => joinWaitlist(currentUser(req), params.id, body.rings, body.holes, now));
+
+route(bakeDaysRouter, api.getPlan, [requireRole('baker')], ({ params, now }) => planForBakeDay(params.id, now), { noStore: true });
+
+route(bakeDaysRouter, api.pinFormula, [requireRole('baker')], async ({ req, params, body, now }) => {
+  await pinFormula(currentUser(req).id, params.id, body.formulaVersionId);
+  return planForBakeDay(params.id, now);
 });
 
-bakeDaysRouter.get('/api/bake-days/:id', validate('params', idParams), async (_req, res) => {
-  res.json(await getBakeDay(valid<z.infer<typeof idParams>>(res, 'params').id, new Date()));
-});
+route(bakeDaysRouter, api.setCapacity, [requireRole('owner')], ({ req, params, body }) =>
+  setBakeDayCapacity(currentUser(req).id, params.id, body.rings, body.holes, body.acceptAboveEquipment),
+);
 
-bakeDaysRouter.get('/api/staff/bake-days/past', requireRole('counter'), async (_req, res) => {
-  res.json(await listPast(new Date()));
-});
+// the counter on bake day
+const counter = [requireRole('counter')];
+
+route(bakeDaysRouter, api.listPickups, counter, ({ params, now }) => listPickups(params.id, now), { noStore: true });
+
+route(bakeDaysRouter, api.getSurplus, counter, ({ params, now }) => getSurplus(params.id, now), { noStore: true });
+
+route(bakeDaysRouter, api.sellWalkUp, counter, ({ req, params, body, now }) => sellWalkUp(currentUser(req), params.id, body, idempotencyKey(req), now));
+
+route(bakeDaysRouter, api.markRestNoShow, counter, ({ req, params, body, now }) => markRestNoShow(currentUser(req), params.id, body.windowId ?? null, idempotencyKey(req), now));
+
+route(bakeDaysRouter, api.getEndOfDay, counter, ({ params, now }) => endOfDay(params.id, now), { noStore: true });

@@ -1,62 +1,47 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { createOrderSchema, moveOrderSchema } from '@fryline/schemas';
-import { currentUser, requireUser } from '../middleware/auth.js';
-import { validate, valid } from '../middleware/validate.js';
-import { cancelOrder, createOrder, getOrder, listOrders, moveOrder, resumeCheckout } from '../services/orders.js';
-import { pickupCalendar } from '../services/calendar.js';
-import { Order, BakeDay, PickupWindow } from '../db/models/index.js';
-import { notFound } from '../lib/app-error.js';
-import { shopSettings } from '../services/settings.js';
-import { context } from '../services/context.js';
+import { api } from '@fryline/schemas';
+import { currentUser, requireRole, requireUser } from '../middleware/auth.js';
+import { route } from '../lib/route.js';
+import { cancelOrder, createOrder, getOrder, listOrders, moveOrder, resumeCheckout } from '../services/orders/orders.js';
+import { orderCalendar } from '../services/orders/calendar.js';
+import { findByCode } from '../services/counter/pickups.js';
+import { changeOrder, type CounterAction } from '../services/counter/hand-over.js';
+import { idempotencyKey } from '../services/counter/idempotency.js';
 
+/** /api/orders: a customer's own orders, and the counter's look-up and hand-over of any order. */
 export const ordersRouter = Router();
-const idParams = z.object({ id: z.uuid('Unknown order') });
-const createBody = createOrderSchema.extend({ claimToken: z.string().min(10).max(100).optional() });
-const id = (res: Parameters<typeof valid>[0]) => valid<{ id: string }>(res, 'params').id;
 
 ordersRouter.use('/api/orders', requireUser);
 
-ordersRouter.get('/api/orders', async (req, res) => {
-  res.json(await listOrders(currentUser(req), new Date()));
+route(ordersRouter, api.listOrders, [], ({ req, now }) => listOrders(currentUser(req), now));
+
+route(ordersRouter, api.createOrder, [], ({ req, body, now }) => createOrder(currentUser(req), body, now));
+
+route(ordersRouter, api.getOrder, [], ({ req, params, now }) => getOrder(currentUser(req), params.id, now), { noStore: true });
+
+route(ordersRouter, api.cancelOrder, [], ({ req, params, now }) => cancelOrder(currentUser(req), params.id, now));
+
+route(ordersRouter, api.moveOrder, [], ({ req, params, body, now }) => moveOrder(currentUser(req), params.id, body.pickupWindowId, now));
+
+route(ordersRouter, api.resumeCheckout, [], ({ req, params, now }) => resumeCheckout(currentUser(req), params.id, now));
+
+route(ordersRouter, api.orderCalendar, [], ({ req, params }) => orderCalendar(currentUser(req), params.id), {
+  send: (res, ics) => res.type('text/calendar').attachment('pickup.ics').send(ics),
 });
 
-ordersRouter.post('/api/orders', validate('body', createBody), async (req, res) => {
-  res.status(201).json(await createOrder(currentUser(req), valid(res, 'body'), new Date()));
-});
+// the counter (counter and up): find by pickup code, hand over, undo, no-show and its reversal
+const counter = [requireRole('counter')];
 
-ordersRouter.get('/api/orders/:id', validate('params', idParams), async (req, res) => {
-  res.set('Cache-Control', 'no-store').json(await getOrder(currentUser(req), id(res), new Date()));
-});
+route(ordersRouter, api.findOrderByCode, counter, ({ params, now }) => findByCode(params.code, now), { noStore: true });
 
-ordersRouter.post('/api/orders/:id/cancel', validate('params', idParams), async (req, res) => {
-  res.json(await cancelOrder(currentUser(req), id(res), new Date()));
-});
-
-ordersRouter.post('/api/orders/:id/move', validate('params', idParams), validate('body', moveOrderSchema), async (req, res) => {
-  res.json(await moveOrder(currentUser(req), id(res), valid<{ pickupWindowId: string }>(res, 'body').pickupWindowId, new Date()));
-});
-
-ordersRouter.post('/api/orders/:id/checkout', validate('params', idParams), async (req, res) => {
-  res.json(await resumeCheckout(currentUser(req), id(res), new Date()));
-});
-
-ordersRouter.get('/api/orders/:id/calendar.ics', validate('params', idParams), async (req, res) => {
-  const order = await Order.findOne({
-    where: { id: id(res), userId: currentUser(req).id },
-    include: [{ model: BakeDay, as: 'bakeDay' }, { model: PickupWindow, as: 'pickupWindow' }],
-  });
-  if (!order || !order.pickupCode || !['paid', 'collected'].includes(order.status)) throw notFound('Order');
-  const { shopName } = await shopSettings();
-  const ics = pickupCalendar({
-    orderId: order.id,
-    code: order.pickupCode,
-    shopName,
-    place: order.bakeDay!.place,
-    address: order.bakeDay!.address,
-    startsAt: order.pickupWindow!.startsAt,
-    endsAt: order.pickupWindow!.endsAt,
-    url: `${context().config.publicUrl}/orders/${order.id}`,
-  });
-  res.type('text/calendar').attachment('pickup.ics').send(ics);
-});
+const changes: Array<[CounterAction, typeof api.collectOrder | typeof api.uncollectOrder | typeof api.markNoShow | typeof api.reverseNoShow]> = [
+  ['collect', api.collectOrder],
+  ['uncollect', api.uncollectOrder],
+  ['no-show', api.markNoShow],
+  ['reverse-no-show', api.reverseNoShow],
+];
+for (const [action, endpoint] of changes) {
+  route(ordersRouter, endpoint, counter, ({ req, params, body, now }) =>
+    changeOrder(action, { user: currentUser(req), now, orderId: params.id, bakeDayId: body?.bakeDayId ?? null, key: idempotencyKey(req) }),
+  );
+}

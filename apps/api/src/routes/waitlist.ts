@@ -1,27 +1,16 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { joinWaitlistSchema } from '@fryline/schemas';
+import { api } from '@fryline/schemas';
 import { currentUser, requireUser } from '../middleware/auth.js';
-import { validate, valid } from '../middleware/validate.js';
-import { getOffer, joinWaitlist, leaveWaitlist, listMyWaitlist } from '../services/waitlist.js';
+import { route } from '../lib/route.js';
+import { getOffer, leaveWaitlist, listMyWaitlist } from '../services/waitlist/waitlist.js';
 
+/** /api/waitlist: a customer's places in the waiting lists, and the offers made to them (joining is on /api/bake-days/:id/waitlist). */
 export const waitlistRouter = Router();
 
+route(waitlistRouter, api.listWaitlist, [requireUser], ({ req }) => listMyWaitlist(currentUser(req)));
 
-waitlistRouter.post('/api/bake-days/:id/waitlist', requireUser, validate('params', z.object({ id: z.uuid() })), validate('body', joinWaitlistSchema), async (req, res) => {
-  const body = valid<z.infer<typeof joinWaitlistSchema>>(res, 'body');
-  res.status(201).json(await joinWaitlist(currentUser(req), valid<{ id: string }>(res, 'params').id, body.rings, body.holes));
+route(waitlistRouter, api.leaveWaitlist, [requireUser], async ({ req, params, now }) => {
+  await leaveWaitlist(currentUser(req), params.id, now);
 });
 
-waitlistRouter.get('/api/waitlist', requireUser, async (req, res) => {
-  res.json(await listMyWaitlist(currentUser(req)));
-});
-
-waitlistRouter.delete('/api/waitlist/:id', requireUser, validate('params', z.object({ id: z.uuid() })), async (req, res) => {
-  await leaveWaitlist(currentUser(req), valid<{ id: string }>(res, 'params').id);
-  res.status(204).end();
-});
-
-waitlistRouter.get('/api/waitlist/claims/:token', requireUser, validate('params', z.object({ token: z.string().min(10).max(100) })), async (req, res) => {
-  res.json(await getOffer(currentUser(req), valid<{ token: string }>(res, 'params').token));
-});
+route(waitlistRouter, api.getOffer, [requireUser], ({ req, params, now }) => getOffer(currentUser(req), params.token, now));

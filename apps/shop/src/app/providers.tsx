@@ -1,13 +1,11 @@
-import { useState, type ReactNode } from 'react';
-import { QueryClientProvider } from '@tanstack/react-query';
-import { createQueryClient } from './query-client';
+import type { ReactNode } from 'react';
+import { QueryProvider } from '@fryline/ui';
 import { ToastProvider } from '../components/toast';
 
 export function Providers({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(createQueryClient);
   return (
-    <QueryClientProvider client={queryClient}>
+    <QueryProvider staleTime={15_000}>
       <ToastProvider>{children}</ToastProvider>
-    </QueryClientProvider>
+    </QueryProvider>
   );
 }

@@ -1,5 +1,4 @@
-import type { MenuItemView } from '@fryline/schemas';
-import { formatCents } from '../lib/format';
+import { formatCents, type MenuItemView } from '@fryline/schemas';
 import { AllergenList } from './allergen-list';
 
 /** A menu item's name, flavour and glaze, extra charge and allergens. */

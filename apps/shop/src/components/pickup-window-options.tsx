@@ -1,5 +1,5 @@
 import type { PickupWindowView } from '@fryline/schemas';
-import { formatClockRange, plural } from '../lib/format';
+import { formatClockRange, plural } from '@fryline/ui/format';
 
 interface PickupWindowOptionsProps {
   legend: string;

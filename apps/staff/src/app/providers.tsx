@@ -1,16 +1,14 @@
 import { useState, type ReactNode } from 'react';
-import { onlineManager, QueryClient } from '@tanstack/react-query';
+import { onlineManager } from '@tanstack/react-query';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
-import { shouldRetry } from '../lib/api-client';
+import { createQueryClient } from '@fryline/ui';
 import { offlinePersistOptions } from '../lib/offline-cache';
 import { registerCounterMutations, sendKeptChanges } from '../features/counter/api/counter-mutations';
 import { loadConflicts } from '../features/counter/model/conflicts';
 
-function createQueryClient(): QueryClient {
-  const client = new QueryClient({
-    // gcTime a day: what is kept on the phone for a dead connection must outlive an idle hour in memory too
-    defaultOptions: { queries: { staleTime: 10_000, retry: shouldRetry, gcTime: 24 * 3600_000 }, mutations: { retry: false } },
-  });
+function staffQueryClient() {
+  // gcTime a day: what is kept on the phone for a dead connection must outlive an idle hour in memory too
+  const client = createQueryClient(10_000, 24 * 3600_000);
   registerCounterMutations(client);
   return client;
 }
@@ -18,8 +16,9 @@ function createQueryClient(): QueryClient {
 // The browser's own word on the connection from the first moment (after a reload with none, too).
 if (typeof navigator !== 'undefined') onlineManager.setOnline(navigator.onLine);
 
+/** The staff app's query client, its cache and waiting changes kept on the device (IndexedDB) for a dead connection. */
 export function Providers({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(createQueryClient);
+  const [queryClient] = useState(staffQueryClient);
   return (
     <PersistQueryClientProvider
       client={queryClient}

@@ -5,7 +5,7 @@ import { HomeRoute } from './routes/home-route';
 import { SectionRoute } from './routes/section-route';
 import { NotFoundRoute } from './routes/not-found-route';
 import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
-import { RoleGuard } from '../features/session/components/role-guard';
+import { RoleGuard } from './session/role-guard';
 import { AnnounceBakeDayPage } from '../features/bake-days/components/announce-bake-day-page';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */

@@ -1,10 +1,10 @@
 import { useEffect, type ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { Me } from '@fryline/schemas';
-import { meQueries } from '../features/session/api/me-queries';
-import { SignInScreen } from '../features/session/components/sign-in-screen';
-import { StaffMemberProvider, type StaffMember } from '../features/session/components/staff-member';
-import { ErrorState, LoadingState } from '../components/status';
+import { meQueries } from './session/me-queries';
+import { SignInScreen } from './session/sign-in-screen';
+import { StaffMemberProvider, type StaffMember } from './session/staff-member';
+import { ErrorState, LoadingState } from '@fryline/ui';
 
 function isStaff(me: Me): me is StaffMember {
   return me.role !== 'customer';

@@ -23,7 +23,7 @@ export const plannedPages: Record<string, PlannedPage> = {
     will: [
       'Flavour and glaze combinations, for rings and for holes',
       'The allergens of each item, shown to customers before they pay',
-      'Box sizes (dozen, half dozen, bag of holes), their prices and any extra charge per item',
+      'Box sizes, their prices and any extra charge per item',
     ],
   },
   sales: {

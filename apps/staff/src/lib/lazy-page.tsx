@@ -1,5 +1,5 @@
 import { lazy, Suspense, type ComponentType } from 'react';
-import { LoadingState } from '../components/status';
+import { LoadingState } from '@fryline/ui';
 
 /**
  * A page whose code loads the first time it is opened, with a loading line

@@ -4,7 +4,7 @@ import type { MarkRestNoShowResult, Me, PickupRow } from '@fryline/schemas';
 import { counterOrder, markCollected, markNoShow, reverseNoShow, undoCollected, type CounterOrderRow } from '../../db/queries/counter-orders.js';
 import { BakeDay } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
-import { audit } from '../audit.js';
+import { audit } from '../audit/audit.js';
 import { once } from './idempotency.js';
 import { pickupRow } from './pickups.js';
 

@@ -1,3 +1,4 @@
+import type { Request } from 'express';
 import type { Transaction } from 'sequelize';
 import { database } from '../../db/sequelize.js';
 import { completeAnswer, findAnswer, storeAnswer, type StoredAnswer } from '../../db/queries/counter-requests.js';
@@ -20,7 +21,9 @@ function replay<T>(stored: StoredAnswer, action: string, userId: string): T {
   return stored.body as T;
 }
 
-export function checkKey(key: string | undefined): string | null {
+/** The request's optional Idempotency-Key header, checked; null when there is none. */
+export function idempotencyKey(req: Request): string | null {
+  const key = req.get('idempotency-key');
   if (key === undefined || key === '') return null;
   if (key.length < 8 || key.length > 100 || !/^[\w.:-]+$/.test(key)) {
     throw new AppError('invalid', 'Idempotency-Key must be 8–100 letters, digits, dots, colons, dashes or underscores', 400);

@@ -2,7 +2,7 @@ import type { CounterSettings } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { ShopSettings } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
-import { audit } from '../audit.js';
+import { audit } from '../audit/audit.js';
 
 export async function counterSettings(): Promise<CounterSettings> {
   const row = await ShopSettings.findByPk(1, { attributes: ['noShowGraceMinutes', 'handOverUndoSeconds'] });

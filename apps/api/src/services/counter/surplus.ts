@@ -3,7 +3,7 @@ import type { Surplus, SurplusItem } from '@fryline/schemas';
 import { insertSurplus, noShowPieces, paidPreOrders, surplusRowCount, surplusRows } from '../../db/queries/surplus.js';
 import { BakeDay, BakeDayMenuItem } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
-import { getProductionSettings, planForBakeDay } from '../production.js';
+import { getProductionSettings, planForBakeDay } from '../production/production.js';
 
 // Surplus per menu item = what the production plan made − paid pre-orders −
 // walk-ups sold. The counters are written the first time the counter asks

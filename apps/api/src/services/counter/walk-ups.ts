@@ -2,7 +2,7 @@ import type { Me, WalkUpSale, WalkUpSaleInput } from '@fryline/schemas';
 import { insertWalkUpSale, surplusLeft, takeSurplus } from '../../db/queries/surplus.js';
 import { BakeDay, MenuItem } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
-import { audit } from '../audit.js';
+import { audit } from '../audit/audit.js';
 import { once } from './idempotency.js';
 import { ensureSurplus } from './surplus.js';
 

@@ -1,4 +1,4 @@
-import { listWords } from '../../lib/format';
+import { listWords } from '@fryline/ui/format';
 import { baseAllergens, site } from '../../config/site';
 
 export function SiteFooter() {

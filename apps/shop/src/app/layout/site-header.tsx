@@ -1,4 +1,5 @@
-import { Link, NavLink } from 'react-router-dom';
+import { NavLink } from 'react-router-dom';
+import { BrandLink } from '@fryline/ui';
 import { AccountMenu } from '../../features/auth/components/account-menu';
 import { site } from '../../config/site';
 
@@ -9,10 +10,7 @@ export function SiteHeader() {
   return (
     <header className="border-b border-line bg-paper">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3">
-        <Link to="/" className="flex items-center gap-2 text-2xl font-extrabold text-plum-800 no-underline">
-          <span className="brand-mark" aria-hidden="true" />
-          {site.name}
-        </Link>
+        <BrandLink className="text-2xl">{site.name}</BrandLink>
         <nav aria-label="Main" className="order-last w-full sm:order-none sm:w-auto">
           <ul className="flex gap-1">
             <li>

@@ -8,9 +8,9 @@ import { BoxBuilder } from '../../features/box-builder/components/box-builder';
 import { ExistingHold } from '../../features/orders/components/existing-hold';
 import { WaitlistForm } from '../../features/waitlist/components/waitlist-form';
 import { useSignedIn } from '../../features/auth/api/me-queries';
-import { isApiError } from '../../lib/api-client';
-import { formatDate } from '../../lib/format';
-import { ErrorState, LoadingState } from '../../components/status';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatDate } from '@fryline/ui/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { PageTitle } from '../../components/page-title';
 
 export function BakeDayRoute() {

@@ -1,15 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { ClaimOffer, ClaimOfferSummary } from '../../features/waitlist/components/claim-offer';
-import type { ClaimOfferView } from '../../features/waitlist/api/waitlist-queries';
+import type { WaitlistOfferView } from '@fryline/schemas';
 import { bakeDayQueries } from '../../features/bake-days/api/bake-day-queries';
 import { BoxBuilder } from '../../features/box-builder/components/box-builder';
 import { ExistingHold } from '../../features/orders/components/existing-hold';
 import { useSignedIn } from '../../features/auth/api/me-queries';
-import { ErrorState, LoadingState } from '../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 
 /** The offer's bake day, and a box builder limited to what was offered. */
-function ClaimWithDay({ offer, token }: { offer: ClaimOfferView; token: string }) {
+function ClaimWithDay({ offer, token }: { offer: WaitlistOfferView; token: string }) {
   const day = useQuery(bakeDayQueries.detail(offer.bakeDayId));
   const signedIn = useSignedIn();
 

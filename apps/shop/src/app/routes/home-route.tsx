@@ -1,13 +1,19 @@
+import { boxTypes } from '@fryline/schemas';
+import { listWords } from '@fryline/ui/format';
 import { BakeDayList } from '../../features/bake-days/components/bake-day-list';
 import { AllergenCaution } from '../../components/allergen-caution';
 import { PageTitle } from '../../components/page-title';
 
 const steps = [
   { title: 'Pick a bake day', text: 'Choose a date and a pickup window that suits you.' },
-  { title: 'Fill a box', text: 'A dozen, a half dozen or a bag of doughnut holes, in any mix of flavours.' },
+  { title: 'Fill a box', text: `${sentence(listWords(boxTypes.map((box) => box.label.toLowerCase()), 'or'))}, in any mix of flavours.` },
   { title: 'Pay up front', text: 'Your box is held for a few minutes while you pay, so nobody else can take it.' },
   { title: 'Pick it up', text: 'Show your pickup code at the stand during your window.' },
 ];
+
+function sentence(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
 
 export function HomeRoute() {
   return (

@@ -1,9 +1,10 @@
 import { useEffect } from 'react';
-import { Link, NavLink, useLocation } from 'react-router-dom';
+import { NavLink, useLocation } from 'react-router-dom';
+import { BrandLink } from '@fryline/ui';
 import { hasRole } from '@fryline/schemas';
 import { roleNames, sections } from '../../config/sections';
-import { useStaffMember } from '../../features/session/components/staff-member';
-import { SignOutButton } from '../../features/session/components/sign-out-button';
+import { useStaffMember } from '../session/staff-member';
+import { SignOutButton } from '../session/sign-out-button';
 import { WaitingToSend } from '../../features/counter/components/waiting-to-send';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
@@ -25,10 +26,9 @@ export function StaffHeader() {
   return (
     <header className="border-b border-line bg-paper">
       <div className="mx-auto flex max-w-6xl items-center gap-3 px-4 pt-3">
-        <Link to="/" className="flex items-center gap-2 text-xl font-extrabold text-plum-800 no-underline">
-          <span className="brand-mark" aria-hidden="true" />
+        <BrandLink className="text-xl">
           Fryline <span className="font-semibold text-muted">staff</span>
-        </Link>
+        </BrandLink>
         <div className="ml-auto flex items-center gap-3">
           <WaitingToSend />
           <span className="hidden text-right leading-tight sm:block">

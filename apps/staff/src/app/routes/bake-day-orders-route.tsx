@@ -1,6 +1,6 @@
 import { useParams } from 'react-router-dom';
-import { RoleGuard } from '../../features/session/components/role-guard';
-import { useCan } from '../../features/session/components/staff-member';
+import { RoleGuard } from '../session/role-guard';
+import { useCan } from '../session/staff-member';
 import { BakeDayOrdersPage } from '../../features/orders/components/bake-day-orders-page';
 
 /** `/staff/bake-days/:bakeDayId`: one bake day's orders, in the owner's Bake days section. */

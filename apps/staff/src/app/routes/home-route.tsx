@@ -1,4 +1,4 @@
-import { useStaffMember } from '../../features/session/components/staff-member';
+import { useStaffMember } from '../session/staff-member';
 import { CounterHome } from './homes/counter-home';
 import { BakerHome } from './homes/baker-home';
 import { OwnerHome } from './homes/owner-home';

@@ -3,7 +3,7 @@ import { roleNames, type StaffSection } from '../../config/sections';
 import { plannedPages } from '../../config/planned-pages';
 import { PageFrame } from '../../components/page-frame';
 import { PlannedPanel } from '../../components/planned-panel';
-import { RoleGuard } from '../../features/session/components/role-guard';
+import { RoleGuard } from '../session/role-guard';
 import { BakeDaysPage } from '../../features/bake-days/components/bake-days-page';
 import { EquipmentPage } from '../../features/equipment/components/equipment-page';
 import { FormulaPage } from '../../features/formula/components/formula-page';

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { BakeDayView } from '@fryline/schemas';
-import { api } from '../api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../query-keys';
 
 export const bakeDayQueries = {

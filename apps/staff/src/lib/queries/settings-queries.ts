@@ -1,11 +1,8 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { Capacity } from '@fryline/production';
-import type { ProductionSettingsInput } from '@fryline/schemas';
-import { api } from '../api-client';
+import type { ProductionSettingsView } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { productionRoot } from './production-queries';
-
-/** The kitchen's settings as stored; updatedAt is null until the owner first saves. */
-export type ProductionSettingsView = ProductionSettingsInput & { updatedAt: string | null };
 
 export const settingsQueries = {
   current: () =>

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Me } from '@fryline/schemas';
-import { fetchCurrentUser } from '../../../lib/api-client';
+import { fetchCurrentUser } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 export const meQueries = {

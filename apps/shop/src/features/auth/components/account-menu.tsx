@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { meQueries } from '../api/me-queries';
-import { useSignOut } from '../api/use-sign-out';
+import { SignOutButton } from '@fryline/ui';
 import { signInUrl } from '../../../lib/sign-in';
 import { useToast } from '../../../components/toast';
 import { useLocation } from 'react-router-dom';
@@ -8,7 +8,6 @@ import { useLocation } from 'react-router-dom';
 /** The header's right-hand side: who is signed in, with sign-in or sign-out. */
 export function AccountMenu() {
   const me = useQuery(meQueries.current());
-  const signOut = useSignOut();
   const toast = useToast();
   const location = useLocation();
 
@@ -28,20 +27,9 @@ export function AccountMenu() {
       <span className="hidden max-w-[12rem] truncate font-semibold sm:inline" title={me.data.email}>
         {me.data.name}
       </span>
-      <button
-        type="button"
-        className="btn btn-quiet btn-small"
-        disabled={signOut.isPending}
-        onClick={() =>
-          signOut.mutate(undefined, {
-            onSuccess: () => window.location.assign('/'),
-            onError: () => toast('Signing out did not work. Please try again.', 'bad'),
-          })
-        }
-      >
-        Sign out
+      <SignOutButton onError={() => toast('Signing out did not work. Please try again.', 'bad')}>
         <span className="sr-only"> ({me.data.name})</span>
-      </button>
+      </SignOutButton>
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import type { BakeDayView } from '@fryline/schemas';
-import { formatMoment, plural } from '../../../lib/format';
+import { formatMoment, plural } from '@fryline/ui/format';
 
 export type Availability = 'upcoming' | 'open' | 'sold-out' | 'closed' | 'done';
 

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { BakeDayView } from '@fryline/schemas';
-import { formatClockRange, formatDate, formatMoment } from '../../../lib/format';
+import { formatClockRange, formatDate, formatMoment } from '@fryline/ui/format';
 import { availabilityOf } from './availability';
 
 const actionLabel = {

@@ -1,5 +1,5 @@
 import type { BakeDayView } from '@fryline/schemas';
-import { formatDate, formatMoment } from '../../../lib/format';
+import { formatDate, formatMoment } from '@fryline/ui/format';
 import { availabilityOf } from './availability';
 
 /** The top of a bake day's page: when, where, and what is left. */

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { bakeDayQueries } from '../api/bake-day-queries';
 import { BakeDayCard } from './bake-day-card';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 
 export function BakeDayList() {
   const days = useQuery(bakeDayQueries.list());

@@ -1,5 +1,4 @@
-import type { BakeDayView } from '@fryline/schemas';
-import { formatCents } from '../../../lib/format';
+import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { MenuItemInfo } from '../../../components/menu-item-info';
 
 /** The bake day's boxes and menu, to read (when orders are not open). */

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CreatedOrder, CreateOrderInput } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
-
 
 /** An order request; `claimToken` orders within a waitlist offer. */
 export type OrderRequest = CreateOrderInput & { claimToken?: string };

@@ -1,10 +1,9 @@
 import { useEffect, useReducer, useRef, useState, type ReactNode } from 'react';
-import type { BakeDayView } from '@fryline/schemas';
+import { boxTakes, formatCents, type BakeDayView } from '@fryline/schemas';
 import {
   boxTitle,
   canAddBox,
   draftProblems,
-  kindForBox,
   offeredBoxes,
   piecesUsed,
   previewPrice,
@@ -14,7 +13,7 @@ import {
   type PieceLimits,
 } from '../model/draft';
 import { loadDraft, saveDraft } from '../model/draft-storage';
-import { formatCents, plural } from '../../../lib/format';
+import { plural } from '@fryline/ui/format';
 import { PickupWindowOptions } from '../../../components/pickup-window-options';
 import { BoxEditor } from './box-editor';
 import { OrderReview } from './order-review';
@@ -129,7 +128,7 @@ export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, sig
           <div className="grid gap-2 sm:grid-cols-3">
             {offered.map((box) => {
               const fits = canAddBox(day, draft, box.size, limits);
-              const kind = kindForBox(box.size) === 'hole' ? 'hole' : 'ring';
+              const kind = boxTakes(box.size);
               return (
                 <button
                   key={box.size}

@@ -1,7 +1,6 @@
 import { useId, useState, type Dispatch } from 'react';
-import type { BakeDayView } from '@fryline/schemas';
+import { formatCents, type BakeDayView } from '@fryline/schemas';
 import { boxOf, filledCount, itemsForBox, type DraftAction, type DraftBox } from '../model/draft';
-import { formatCents } from '../../../lib/format';
 import { MenuItemInfo } from '../../../components/menu-item-info';
 import { QuantityStepper } from './quantity-stepper';
 

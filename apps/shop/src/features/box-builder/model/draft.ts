@@ -1,5 +1,6 @@
 import {
   boxSizes,
+  boxTakes,
   priceOrder,
   type BakeDayView,
   type BoxInput,
@@ -7,9 +8,8 @@ import {
   type BoxView,
   type MenuItemView,
   type OrderPrice,
-  type PieceKind,
 } from '@fryline/schemas';
-import { plural } from '../../../lib/format';
+import { plural } from '@fryline/ui/format';
 
 /** One box being filled: how many of each menu item it holds. */
 export interface DraftBox {
@@ -34,16 +34,12 @@ export interface PieceLimits {
 
 export const emptyDraft: Draft = { pickupWindowId: null, boxes: [], step: 'build' };
 
-export function kindForBox(size: BoxSize): PieceKind {
-  return size === 'holes' ? 'hole' : 'ring';
-}
-
 export function boxOf(day: BakeDayView, size: BoxSize): BoxView | undefined {
   return day.boxes.find((b) => b.size === size);
 }
 
 export function itemsForBox(day: BakeDayView, size: BoxSize): MenuItemView[] {
-  const kind = kindForBox(size);
+  const kind = boxTakes(size);
   return day.menu.filter((item) => item.kind === kind);
 }
 
@@ -61,7 +57,7 @@ export function piecesUsed(day: BakeDayView, draft: Draft): PieceLimits {
   const used = { rings: 0, holes: 0 };
   for (const box of draft.boxes) {
     const pieces = boxOf(day, box.size)?.pieces ?? 0;
-    if (kindForBox(box.size) === 'hole') used.holes += pieces;
+    if (boxTakes(box.size) === 'hole') used.holes += pieces;
     else used.rings += pieces;
   }
   return used;
@@ -72,7 +68,7 @@ export function canAddBox(day: BakeDayView, draft: Draft, size: BoxSize, limits:
   const box = boxOf(day, size);
   if (!box) return false;
   const used = piecesUsed(day, draft);
-  return kindForBox(size) === 'hole' ? used.holes + box.pieces <= limits.holes : used.rings + box.pieces <= limits.rings;
+  return boxTakes(size) === 'hole' ? used.holes + box.pieces <= limits.holes : used.rings + box.pieces <= limits.rings;
 }
 
 export function toBoxInputs(draft: Draft): BoxInput[] {

@@ -1,10 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { OrderDetail } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
-
-/** One order as its owner sees it: once paid, with the pickup QR code and a calendar file. */
-export type OrderDetailView = OrderDetail;
 
 export const orderQueries = {
   list: () =>
@@ -15,6 +12,6 @@ export const orderQueries = {
   detail: (id: string) =>
     queryOptions({
       queryKey: [...queryRoots.orders, 'detail', id] as const,
-      queryFn: () => api.get<OrderDetailView>(`/api/orders/${encodeURIComponent(id)}`),
+      queryFn: () => api.get<OrderDetail>(`/api/orders/${encodeURIComponent(id)}`),
     }),
 };

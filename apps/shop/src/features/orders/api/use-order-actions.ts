@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { OrderView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import type { z } from 'zod';
+import type { checkoutLinkSchema, OrderDetail } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 function orderPath(id: string, action: string): string {
@@ -20,7 +21,7 @@ function useInvalidateAfterChange() {
 export function useCancelOrder() {
   const invalidate = useInvalidateAfterChange();
   return useMutation({
-    mutationFn: (id: string) => api.post<OrderView>(orderPath(id, 'cancel')),
+    mutationFn: (id: string) => api.post<OrderDetail>(orderPath(id, 'cancel')),
     onSettled: invalidate,
   });
 }
@@ -29,7 +30,7 @@ export function useMoveOrder() {
   const invalidate = useInvalidateAfterChange();
   return useMutation({
     mutationFn: ({ id, pickupWindowId }: { id: string; pickupWindowId: string }) =>
-      api.post<OrderView>(orderPath(id, 'move'), { pickupWindowId }),
+      api.post<OrderDetail>(orderPath(id, 'move'), { pickupWindowId }),
     onSettled: invalidate,
   });
 }
@@ -37,6 +38,6 @@ export function useMoveOrder() {
 /** A new checkout page for an order still on hold. */
 export function useResumeCheckout() {
   return useMutation({
-    mutationFn: (id: string) => api.post<{ checkoutUrl: string }>(orderPath(id, 'checkout')),
+    mutationFn: (id: string) => api.post<z.infer<typeof checkoutLinkSchema>>(orderPath(id, 'checkout')),
   });
 }

@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import type { OrderView } from '@fryline/schemas';
+import { formatCents, type OrderView } from '@fryline/schemas';
 import { useCancelOrder } from '../api/use-order-actions';
-import { ConfirmDialog } from '../../../components/confirm-dialog';
+import { ConfirmDialog } from '@fryline/ui';
 import { useToast } from '../../../components/toast';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { formatCents, formatMoment } from '../../../lib/format';
+import { errorMessage, isApiError } from '@fryline/ui/api-client';
+import { formatMoment } from '@fryline/ui/format';
 
 /** "Cancel order" with a confirmation; for a paid order that means a refund. */
 export function CancelOrder({ order, onCancelled }: { order: OrderView; onCancelled?: () => void }) {

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { orderQueries } from '../api/order-queries';
-import { formatCents, formatDate } from '../../../lib/format';
+import { formatCents } from '@fryline/schemas';
+import { formatDate } from '@fryline/ui/format';
 import { CancelOrder } from './cancel-order';
 import { ResumePayment } from './resume-payment';
 

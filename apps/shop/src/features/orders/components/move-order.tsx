@@ -3,9 +3,9 @@ import type { OrderView, PickupWindowView } from '@fryline/schemas';
 import { useMoveOrder } from '../api/use-order-actions';
 import { PickupWindowOptions } from '../../../components/pickup-window-options';
 import { useToast } from '../../../components/toast';
-import { LoadingState } from '../../../components/status';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { formatClockRange } from '../../../lib/format';
+import { LoadingState } from '@fryline/ui';
+import { errorMessage, isApiError } from '@fryline/ui/api-client';
+import { formatClockRange } from '@fryline/ui/format';
 
 interface MoveOrderProps {
   order: OrderView;

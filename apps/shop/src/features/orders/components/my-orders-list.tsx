@@ -1,11 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { orderQueries } from '../api/order-queries';
-import { isApiError } from '../../../lib/api-client';
-import { formatCents, formatClockRange, formatDate } from '../../../lib/format';
+import { isApiError } from '@fryline/ui/api-client';
+import { boxLabel, formatCents } from '@fryline/schemas';
+import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '../../../components/status';
-import { boxNames, OrderStatusBadge } from './order-status';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
+import { OrderStatusBadge } from './order-status';
 
 /** The signed-in customer's orders, newest first. */
 export function MyOrdersList() {
@@ -40,7 +41,7 @@ export function MyOrdersList() {
     <ul className="flex flex-col gap-3">
       {orders.data.map((order) => {
         const tz = order.bakeDay.timeZone;
-        const boxes = order.boxes.map((box) => boxNames[box.size].toLowerCase()).join(', ');
+        const boxes = order.boxes.map((box) => boxLabel(box.size).toLowerCase()).join(', ');
         return (
           <li key={order.id}>
             <Link

@@ -1,7 +1,6 @@
-import type { OrderView } from '@fryline/schemas';
-import { formatCents, listWords } from '../../../lib/format';
+import { boxLabel, formatCents, type OrderView } from '@fryline/schemas';
+import { listWords } from '@fryline/ui/format';
 import { allergensOf, AllergenList } from '../../../components/allergen-list';
-import { boxNames } from './order-status';
 
 /** What is in the order, what it cost, and its allergens. */
 export function OrderBoxes({ order }: { order: OrderView }) {
@@ -16,7 +15,7 @@ export function OrderBoxes({ order }: { order: OrderView }) {
           <li key={index} className="py-3">
             <p className="flex justify-between gap-3 font-extrabold">
               <span>
-                {boxNames[box.size]} <span className="font-semibold text-muted">({box.pieces})</span>
+                {boxLabel(box.size)} <span className="font-semibold text-muted">({box.pieces})</span>
               </span>
               <span>{formatCents(box.priceCents)}</span>
             </p>

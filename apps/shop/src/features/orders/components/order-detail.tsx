@@ -1,12 +1,13 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useSearchParams } from 'react-router-dom';
-import { orderQueries, type OrderDetailView } from '../api/order-queries';
+import { formatCents, type OrderDetail } from '@fryline/schemas';
+import { orderQueries } from '../api/order-queries';
 import { site } from '../../../config/site';
-import { isApiError } from '../../../lib/api-client';
-import { formatClock, formatCents, formatDate } from '../../../lib/format';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatClock, formatDate } from '@fryline/ui/format';
 import { signInUrl, currentPath } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '../../../components/status';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { PageTitle } from '../../../components/page-title';
 import { OrderStatusBadge } from './order-status';
 import { OrderBoxes } from './order-boxes';
@@ -17,7 +18,7 @@ import { ResumePayment } from './resume-payment';
 interface OrderDetailProps {
   id: string;
   /** Where the "change pickup window" panel goes for a paid order. */
-  renderMove?: (order: OrderDetailView) => ReactNode;
+  renderMove?: (order: OrderDetail) => ReactNode;
 }
 
 /**

@@ -1,4 +1,4 @@
-import type { BoxSize, OrderStatus } from '@fryline/schemas';
+import type { OrderStatus } from '@fryline/schemas';
 
 const statusBadge: Record<OrderStatus, { label: string; className: string }> = {
   held: { label: 'Waiting for payment', className: 'badge-warn' },
@@ -8,12 +8,6 @@ const statusBadge: Record<OrderStatus, { label: string; className: string }> = {
   cancelled: { label: 'Cancelled', className: '' },
   refunded: { label: 'Refunded', className: '' },
   expired: { label: 'Hold lapsed', className: '' },
-};
-
-export const boxNames: Record<BoxSize, string> = {
-  dozen: 'Dozen',
-  'half-dozen': 'Half dozen',
-  holes: 'Bag of holes',
 };
 
 export function OrderStatusBadge({ status }: { status: OrderStatus }) {

@@ -1,8 +1,8 @@
-import { formatClockRange, formatDate } from '../../../lib/format';
-import type { OrderDetailView } from '../api/order-queries';
+import { formatClockRange, formatDate } from '@fryline/ui/format';
+import type { OrderDetail } from '@fryline/schemas';
 
 /** The paid order's pass: the pickup code, its QR image, and where and when to come. */
-export function PickupPass({ order }: { order: OrderDetailView }) {
+export function PickupPass({ order }: { order: OrderDetail }) {
   const { bakeDay, pickupWindow } = order;
   return (
     <section className="card border-2 border-plum-700 text-center" aria-labelledby="pass-heading">

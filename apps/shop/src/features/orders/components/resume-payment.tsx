@@ -1,6 +1,6 @@
 import { useResumeCheckout } from '../api/use-order-actions';
 import { useToast } from '../../../components/toast';
-import { errorMessage } from '../../../lib/api-client';
+import { errorMessage } from '@fryline/ui/api-client';
 
 /** Opens a fresh checkout page for an order still on hold. */
 export function ResumePayment({ orderId, label = 'Continue to payment' }: { orderId: string; label?: string }) {

@@ -1,9 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { WaitlistEntryView, WaitlistOfferView as ClaimOfferView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import type { WaitlistEntryView, WaitlistOfferView } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
-
-export type { WaitlistEntryView, WaitlistOfferView as ClaimOfferView } from '@fryline/schemas';
 
 export const waitlistQueries = {
   mine: () =>
@@ -14,6 +12,6 @@ export const waitlistQueries = {
   claim: (token: string) =>
     queryOptions({
       queryKey: [...queryRoots.waitlist, 'claim', token] as const,
-      queryFn: () => api.get<ClaimOfferView>(`/api/waitlist/claims/${encodeURIComponent(token)}`),
+      queryFn: () => api.get<WaitlistOfferView>(`/api/waitlist/claims/${encodeURIComponent(token)}`),
     }),
 };

@@ -1,18 +1,18 @@
 import type { ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import type { BakeDayView } from '@fryline/schemas';
-import { waitlistQueries, type ClaimOfferView } from '../api/waitlist-queries';
-import { isApiError } from '../../../lib/api-client';
-import { formatDate, formatDateTime, formatPieces } from '../../../lib/format';
+import type { BakeDayView, WaitlistOfferView } from '@fryline/schemas';
+import { waitlistQueries } from '../api/waitlist-queries';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatDate, formatDateTime, formatPieces } from '@fryline/ui/format';
 import { currentPath, signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '../../../components/status';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { PageTitle } from '../../../components/page-title';
 
 interface ClaimOfferProps {
   token: string;
   /** What to show once the offer is known to be open. */
-  children: (offer: ClaimOfferView) => ReactNode;
+  children: (offer: WaitlistOfferView) => ReactNode;
 }
 
 function OfferProblem({ children }: { children: ReactNode }) {
@@ -69,7 +69,7 @@ export function ClaimOffer({ token, children }: ClaimOfferProps) {
 }
 
 /** The top of an open offer: which day, how much, and until when. */
-export function ClaimOfferSummary({ offer, day }: { offer: ClaimOfferView; day: BakeDayView }) {
+export function ClaimOfferSummary({ offer, day }: { offer: WaitlistOfferView; day: BakeDayView }) {
   return (
     <header className="flex flex-col gap-2">
       <PageTitle>Waitlist offer</PageTitle>

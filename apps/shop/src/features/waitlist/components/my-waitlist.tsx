@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import type { BakeDayView } from '@fryline/schemas';
-import { waitlistQueries, type WaitlistEntryView } from '../api/waitlist-queries';
+import type { BakeDayView, WaitlistEntryView } from '@fryline/schemas';
+import { waitlistQueries } from '../api/waitlist-queries';
 import { useLeaveWaitlist } from '../api/use-waitlist-actions';
-import { errorMessage } from '../../../lib/api-client';
-import { formatDate, formatDateTime, formatPieces } from '../../../lib/format';
+import { errorMessage } from '@fryline/ui/api-client';
+import { formatDate, formatDateTime, formatPieces } from '@fryline/ui/format';
 import { useToast } from '../../../components/toast';
 
 function describe(entry: WaitlistEntryView, day: BakeDayView | undefined) {

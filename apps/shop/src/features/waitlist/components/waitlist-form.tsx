@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import type { BakeDayView } from '@fryline/schemas';
 import { useJoinWaitlist } from '../api/use-waitlist-actions';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { goToSignIn } from '../../../lib/sign-in';
 
 const count = z

@@ -1,7 +1,7 @@
 import { PageFrame } from '../../../components/page-frame';
-import { Caution } from '../../../components/caution';
+import { Caution } from '@fryline/ui';
 import { NextBakeDay } from '../../../features/bake-days/components/next-bake-day';
-import { formatMoment } from '../../../lib/format';
+import { formatMoment } from '@fryline/ui/format';
 import { SectionLinks } from './section-links';
 
 export function BakerHome() {

@@ -1,5 +1,5 @@
 import { PageFrame } from '../../../components/page-frame';
-import { Caution } from '../../../components/caution';
+import { Caution } from '@fryline/ui';
 import { CapacityTable } from '../../../features/bake-days/components/capacity-table';
 import { SectionLinks } from './section-links';
 

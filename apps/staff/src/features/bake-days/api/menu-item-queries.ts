@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { MenuItemAdminView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 export const menuItemQueries = {
   /** Every menu item, retired ones included, in menu order (`GET /api/staff/menu-items`). */

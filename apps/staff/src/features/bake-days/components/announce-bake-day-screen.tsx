@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
 import { settingsQueries } from '../../../lib/queries/settings-queries';
 import { menuItemQueries } from '../api/menu-item-queries';

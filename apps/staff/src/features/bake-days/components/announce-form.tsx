@@ -3,7 +3,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { CreateBakeDayInput, MenuItemAdminView } from '@fryline/schemas';
-import { isApiError } from '../../../lib/api-client';
+import { isApiError } from '@fryline/ui/api-client';
 import { useCreateBakeDay } from '../api/use-create-bake-day';
 import { announcedFrom } from '../model/announced';
 import {
@@ -14,7 +14,7 @@ import {
 } from '../model/new-bake-day-form';
 import { zoneGroups, zoneName } from '../model/time-zones';
 import { BoxesFieldset } from './boxes-fieldset';
-import { Field } from './field';
+import { FieldShell } from '@fryline/ui';
 import { MenuFieldset } from './menu-fieldset';
 import { PickupWindowsFieldset } from './pickup-windows-fieldset';
 
@@ -106,10 +106,10 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
       <fieldset className="card flex flex-col gap-3">
         <legend className="float-left w-full text-xl font-extrabold">When and where</legend>
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2">
-          <Field id={id('date')} label="Date" error={errors.date?.message}>
+          <FieldShell id={id('date')} label="Date" error={errors.date?.message}>
             {(input) => <input {...input} type="date" min={today} {...register('date')} />}
-          </Field>
-          <Field id={id('zone')} label="Time zone" help="Pickup windows and the times below are in this zone." error={errors.timeZone?.message}>
+          </FieldShell>
+          <FieldShell id={id('zone')} label="Time zone" help="Pickup windows and the times below are in this zone." error={errors.timeZone?.message}>
             {(input) => (
               <select {...input} {...register('timeZone')}>
                 {zoneGroups(defaults.timeZone).map((group) => (
@@ -123,13 +123,13 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
                 ))}
               </select>
             )}
-          </Field>
-          <Field id={id('place')} label="Place" help="As customers will see it, like a market and stall number." error={errors.place?.message}>
+          </FieldShell>
+          <FieldShell id={id('place')} label="Place" help="As customers will see it, like a market and stall number." error={errors.place?.message}>
             {(input) => <input {...input} type="text" autoComplete="off" {...register('place')} />}
-          </Field>
-          <Field id={id('address')} label="Address" optional error={errors.address?.message}>
+          </FieldShell>
+          <FieldShell id={id('address')} label="Address" optional error={errors.address?.message}>
             {(input) => <input {...input} type="text" autoComplete="off" {...register('address')} />}
-          </Field>
+          </FieldShell>
         </div>
       </fieldset>
 
@@ -144,7 +144,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
           number as rings.
         </p>
         <div className="grid grid-cols-2 gap-x-4 gap-y-3 sm:max-w-md">
-          <Field id={id('rings')} label="Rings" error={errors.ringCapacity?.message}>
+          <FieldShell id={id('rings')} label="Rings" error={errors.ringCapacity?.message}>
             {(input) => (
               <input
                 {...input}
@@ -157,8 +157,8 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
                 })}
               />
             )}
-          </Field>
-          <Field id={id('holes')} label="Holes" error={errors.holeCapacity?.message}>
+          </FieldShell>
+          <FieldShell id={id('holes')} label="Holes" error={errors.holeCapacity?.message}>
             {(input) => (
               <input
                 {...input}
@@ -171,7 +171,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
                 })}
               />
             )}
-          </Field>
+          </FieldShell>
         </div>
         <p className="text-sm text-muted">
           {equipmentRings === undefined
@@ -184,7 +184,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
         <legend className="float-left w-full text-xl font-extrabold">Pre-orders</legend>
         <p className="text-muted">Times in {zoneName(timeZone)} time.</p>
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2">
-          <Field
+          <FieldShell
             id={id('opens')}
             label="Orders open"
             optional
@@ -192,8 +192,8 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
             error={errors.ordersOpenAt?.message}
           >
             {(input) => <input {...input} type="datetime-local" {...register('ordersOpenAt')} />}
-          </Field>
-          <Field
+          </FieldShell>
+          <FieldShell
             id={id('cutoff')}
             label="Orders close (cut-off)"
             optional
@@ -201,7 +201,7 @@ export function AnnounceForm({ defaults, menuItems, equipmentRings, today }: Ann
             error={errors.cutoffAt?.message}
           >
             {(input) => <input {...input} type="datetime-local" {...register('cutoffAt')} />}
-          </Field>
+          </FieldShell>
         </div>
       </fieldset>
 

@@ -1,6 +1,6 @@
 import { useEffect, useRef } from 'react';
 import { Link, useLocation, useNavigate } from 'react-router-dom';
-import { formatDate, formatDateTime } from '../../../lib/format';
+import { formatDate, formatDateTime } from '@fryline/ui/format';
 import { readAnnounced, type Announced } from '../model/announced';
 
 function sentence(day: Announced): string {

@@ -1,14 +1,16 @@
 import { useWatch } from 'react-hook-form';
-import type { BoxSize } from '@fryline/schemas';
+import { boxCatalogue, boxTakes, type BoxSize } from '@fryline/schemas';
 import { ListError } from '../../../components/row-controls';
-import { Field } from './field';
+import { FieldShell } from '@fryline/ui';
 import type { NewBakeDayForm } from './pickup-windows-fieldset';
 
-const boxWords: Record<BoxSize, { offer: string; price: string }> = {
-  dozen: { offer: 'Offer a dozen (12 rings)', price: 'Price of a dozen' },
-  'half-dozen': { offer: 'Offer a half dozen (6 rings)', price: 'Price of a half dozen' },
-  holes: { offer: 'Offer a bag of doughnut holes', price: 'Price of a bag of holes' },
-};
+/** "Offer a dozen (12 rings)", "Price of a dozen": the catalogue's names in the form's words. */
+function boxWords(size: BoxSize): { offer: string; price: string } {
+  const box = boxCatalogue[size];
+  const name = box.label.toLowerCase();
+  const fixed = box.takes === 'ring' ? ` (${box.pieces} rings)` : '';
+  return { offer: `Offer ${name}${fixed}`, price: `Price of ${name}` };
+}
 
 /** The boxes on sale that day, each with its price in dollars; the bag of holes also says how many it holds. */
 export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
@@ -25,7 +27,7 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
       </p>
       <ul className="flex flex-col gap-3">
         {boxes.map((box, index) => {
-          const words = boxWords[box.size];
+          const words = boxWords(box.size);
           const rowErrors = errors?.[index];
           const id = `box-${box.size}`;
           return (
@@ -36,7 +38,7 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
               </label>
               {box.offered && (
                 <div className="mt-2 grid grid-cols-2 gap-3 sm:max-w-md">
-                  <Field id={`${id}-price`} label={`${words.price} ($)`} error={rowErrors?.price?.message}>
+                  <FieldShell id={`${id}-price`} label={`${words.price} ($)`} error={rowErrors?.price?.message}>
                     {(input) => (
                       <div className="relative">
                         <span aria-hidden="true" className="absolute inset-y-0 left-3 flex items-center font-semibold text-muted">
@@ -52,13 +54,13 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
                         />
                       </div>
                     )}
-                  </Field>
-                  {box.size === 'holes' && (
-                    <Field id={`${id}-pieces`} label="Holes in a bag" error={rowErrors?.pieces?.message}>
+                  </FieldShell>
+                  {boxTakes(box.size) === 'hole' && (
+                    <FieldShell id={`${id}-pieces`} label="Holes in a bag" error={rowErrors?.pieces?.message}>
                       {(input) => (
                         <input {...input} type="number" inputMode="numeric" min={1} max={60} step={1} {...register(`boxes.${index}.pieces`, { valueAsNumber: true })} />
                       )}
-                    </Field>
+                    </FieldShell>
                   )}
                 </div>
               )}

@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
-import { formatDate, formatMoment } from '../../../lib/format';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { formatDate, formatMoment } from '@fryline/ui/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { BakeDayStatusBadge } from './status-badge';
 import { CapacityMeter } from './capacity-meter';
 

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
-import { formatDate } from '../../../lib/format';
+import { formatDate } from '@fryline/ui/format';
 import { usePublishBakeDay } from '../api/use-publish-bake-day';
 
 /** Drafts the owner saved, each with a button to show it to customers. */

@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeDayView } from '@fryline/schemas';
 import { bakeDayQueries, nextBakeDay } from '../../../lib/queries/bake-day-queries';
-import { formatClockRange, formatDate, formatMoment, formatPieces } from '../../../lib/format';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { formatClockRange, formatDate, formatMoment, formatPieces } from '@fryline/ui/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { BakeDayStatusBadge } from './status-badge';
 
 interface NextBakeDayProps {

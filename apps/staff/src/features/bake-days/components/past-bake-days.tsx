@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
-import { formatDate } from '../../../lib/format';
+import { formatDate } from '@fryline/ui/format';
 
 /** Recent bake days that are over, each linking to its orders (for no-shows and late refunds). */
 export function PastBakeDays() {

@@ -3,7 +3,7 @@ import { useFieldArray, type UseFormReturn } from 'react-hook-form';
 import type { CreateBakeDayInput } from '@fryline/schemas';
 import { ListError, RemoveRowButton } from '../../../components/row-controls';
 import { MAX_WINDOWS, nextWindow, type NewBakeDayValues } from '../model/new-bake-day-form';
-import { Field } from './field';
+import { FieldShell } from '@fryline/ui';
 
 export type NewBakeDayForm = UseFormReturn<NewBakeDayValues, unknown, CreateBakeDayInput>;
 
@@ -32,17 +32,17 @@ export function PickupWindowsFieldset({ form }: { form: NewBakeDayForm }) {
               <fieldset className="rounded-2xl border border-line p-3">
                 <legend className="px-1 text-sm font-extrabold text-muted">Pickup window {n}</legend>
                 <div className="grid grid-cols-2 items-start gap-3 sm:grid-cols-[1fr_1fr_1fr_auto]">
-                  <Field id={id('start')} label="Starts" error={rowErrors?.start?.message}>
+                  <FieldShell id={id('start')} label="Starts" error={rowErrors?.start?.message}>
                     {(input) => <input {...input} type="time" {...register(`windows.${index}.start`)} />}
-                  </Field>
-                  <Field id={id('end')} label="Ends" error={rowErrors?.end?.message}>
+                  </FieldShell>
+                  <FieldShell id={id('end')} label="Ends" error={rowErrors?.end?.message}>
                     {(input) => <input {...input} type="time" {...register(`windows.${index}.end`)} />}
-                  </Field>
-                  <Field id={id('cap')} label="Most orders" optional error={rowErrors?.maxOrders?.message}>
+                  </FieldShell>
+                  <FieldShell id={id('cap')} label="Most orders" optional error={rowErrors?.maxOrders?.message}>
                     {(input) => (
                       <input {...input} type="text" inputMode="numeric" autoComplete="off" {...register(`windows.${index}.maxOrders`)} />
                     )}
-                  </Field>
+                  </FieldShell>
                   <div className="self-end pb-1">
                     <RemoveRowButton
                       label={`Remove pickup window ${n}`}

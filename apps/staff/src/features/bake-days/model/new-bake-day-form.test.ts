@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { BakeDayView, MenuItemAdminView } from '@fryline/schemas';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError } from '@fryline/ui/api-client';
 import {
   clockIn,
   formPath,
@@ -78,7 +78,7 @@ const filled = (over: Partial<NewBakeDayValues> = {}): NewBakeDayValues => ({
   boxes: [
     { size: 'dozen', offered: true, pieces: 12, price: '30' },
     { size: 'half-dozen', offered: false, pieces: 6, price: '' },
-    { size: 'holes', offered: true, pieces: 12, price: '8.505' },
+    { size: 'holes', offered: true, pieces: 12, price: '$8.51' },
   ],
   ringCapacity: 110,
   holeCapacity: 110,
@@ -212,7 +212,7 @@ describe('the form’s values as the API body', () => {
         menuItemIds: [ids.vanilla, ids.holes],
         boxes: [
           { size: 'dozen', pieces: 12, priceCents: 3000 },
-          { size: 'holes', pieces: 12, priceCents: 851 }, // $8.505 rounds half up (common practice, no source)
+          { size: 'holes', pieces: 12, priceCents: 851 }, // '$8.51' is 851 cents (ISO 4217: USD has 2 decimal places)
         ],
         ringCapacity: 110,
         holeCapacity: 110,

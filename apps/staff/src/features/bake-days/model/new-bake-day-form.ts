@@ -6,15 +6,18 @@
 import { z } from 'zod';
 import { formatInstant, parseInstant } from '@fryline/production';
 import {
+  boxCatalogue,
   boxSizes,
+  boxTakes,
+  centsToInput,
   createBakeDaySchema,
+  parseCents,
   type BakeDayView,
   type BoxSize,
   type CreateBakeDayInput,
   type MenuItemAdminView,
 } from '@fryline/schemas';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
-import { centsToDollars, dollarsToCents, standardPieces } from './box-prices';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 
 /** One pickup window as typed: local clock times, and an order cap ('' for none). */
 export interface WindowRow {
@@ -125,12 +128,12 @@ export function newBakeDayDefaults({ latest, equipmentRings, menuItems, fallback
     : [{ start: '09:00', end: '11:00', maxOrders: '' }];
   const boxes = boxSizes.map((size): BoxRow => {
     const before = latest?.boxes.find((box) => box.size === size);
-    const fillable = hasKind(size === 'holes' ? 'hole' : 'ring');
+    const fillable = hasKind(boxTakes(size));
     return {
       size,
       offered: fillable && (latest === undefined || before !== undefined),
-      pieces: before?.pieces ?? standardPieces[size],
-      price: before ? centsToDollars(before.priceCents) : '',
+      pieces: before?.pieces ?? boxCatalogue[size].pieces,
+      price: before ? centsToInput(before.priceCents) : '',
     };
   });
   return {
@@ -221,7 +224,7 @@ export function toCreateBakeDay(values: NewBakeDayValues): Conversion {
   const offered = offeredRows(values.boxes);
   const boxes = offered.map((index) => {
     const row = values.boxes[index]!;
-    const cents = dollarsToCents(row.price);
+    const cents = parseCents(row.price);
     if (row.price.trim() === '') note(`boxes.${index}.price`, 'Give the price');
     else if (cents === null) note(`boxes.${index}.price`, 'Write the price in dollars, like 16.50');
     else if (cents > 100_000) note(`boxes.${index}.price`, 'At most $1,000.00');

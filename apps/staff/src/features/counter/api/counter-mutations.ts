@@ -1,6 +1,6 @@
 import { onlineManager, useMutation, useMutationState, useQueryClient, type Mutation, type QueryClient } from '@tanstack/react-query';
 import type { MarkRestNoShowResult, PaymentMethod, PickupRow, WalkUpSale } from '@fryline/schemas';
-import { api, ApiError } from '../../../lib/api-client';
+import { api, ApiError } from '@fryline/ui/api-client';
 import { addConflict } from '../model/conflicts';
 import type { CounterActionName, PendingChange } from '../model/pickups';
 import { counterQueries } from './counter-queries';

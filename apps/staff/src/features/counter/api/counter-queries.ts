@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { BakeDayView, CounterSettings, EndOfDay, OrderByCode, PickupRow, Surplus } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 // The counter's reads. Everything under the 'counter' root is kept on the
 // phone (IndexedDB) so a reload with no signal still shows the last list.

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CounterSettings } from '@fryline/schemas';
-import { api, errorMessage, isApiError } from '../../../lib/api-client';
+import { api, errorMessage, isApiError } from '@fryline/ui/api-client';
 import { counterQueries } from '../api/counter-queries';
 
 /** The owner's two counter settings: grace before a no-show, and how long a hand-over can be undone. */

@@ -1,14 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
 import { formatCents } from '@fryline/schemas';
-import { formatPieces, plural } from '../../../lib/format';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { formatPieces, plural } from '@fryline/ui/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { counterQueries } from '../api/counter-queries';
 import { restForNoShow, type ShownRow } from '../model/pickups';
 import { RestNoShowButton } from './rest-no-show';
 import { useOnline } from './use-online';
 import { CounterSettingsForm } from './counter-settings-form';
 import { hasRole } from '@fryline/schemas';
-import { useStaffMember } from '../../session/components/staff-member';
+import { useStaffMember } from '../../../app/session/staff-member';
 
 function Figure({ label, value, detail }: { label: string; value: string; detail?: string }) {
   return (

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { normalisePickupCode, PICKUP_CODE_LENGTH, type OrderByCode } from '@fryline/schemas';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { formatClockRange, formatDate } from '../../../lib/format';
+import { errorMessage, isApiError } from '@fryline/ui/api-client';
+import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { counterQueries } from '../api/counter-queries';
 import { boxText, type ShownRow } from '../model/pickups';
 import { PickupCard, type CardActions } from './pickup-card';

@@ -1,4 +1,4 @@
-import { formatClock } from '../../../lib/format';
+import { formatClock } from '@fryline/ui/format';
 import { boxText, rowState, undoSecondsLeft, type RowState, type ShownRow } from '../model/pickups';
 import { StatusIcon } from './status-icon';
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { BakeDayView } from '@fryline/schemas';
-import { formatClockRange, plural } from '../../../lib/format';
+import { formatClockRange, plural } from '@fryline/ui/format';
 import { groupByWindow, matchesSearch, restForNoShow, type ShownRow } from '../model/pickups';
 import { FoundOrder, isWholeCode, type Lookup } from './find-order';
 import { PickupCard, type CardActions } from './pickup-card';

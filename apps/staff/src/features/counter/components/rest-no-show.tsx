@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { plural } from '../../../lib/format';
+import { plural } from '@fryline/ui/format';
 import { useRestNoShow } from '../api/counter-mutations';
 import type { ShownRow } from '../model/pickups';
 import { Sheet } from './sheet';

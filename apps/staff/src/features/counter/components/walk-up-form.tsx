@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { formatCents, type PaymentMethod, type Surplus } from '@fryline/schemas';
-import { plural } from '../../../lib/format';
+import { plural } from '@fryline/ui/format';
 import { useWalkUpSale } from '../api/counter-mutations';
 import { useOnline } from './use-online';
 import { parseDollars } from '../model/money';

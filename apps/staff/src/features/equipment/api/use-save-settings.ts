@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ProductionSettingsInput } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import type { ProductionSettingsInput, ProductionSettingsView } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { productionRoot } from '../../../lib/queries/production-queries';
-import type { ProductionSettingsView } from '../../../lib/queries/settings-queries';
 
 /** Saves the kitchen's settings (owner only); capacity and every sheet are worked out again. */
 export function useSaveSettings() {

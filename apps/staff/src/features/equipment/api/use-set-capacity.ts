@@ -1,16 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Capacity } from '@fryline/production';
-import type { capacityOverrideSchema } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import type { CapacityResult, capacityOverrideSchema } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
-
-export interface CapacitySet {
-  rings: number;
-  holes: number;
-  remaining: { rings: number; holes: number };
-  derived: Capacity;
-}
 
 /**
  * Sets one bake day's capacity. Above what the equipment allows the server
@@ -21,7 +13,7 @@ export function useSetCapacity(bakeDayId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: z.output<typeof capacityOverrideSchema>) =>
-      api.post<CapacitySet>(`/api/bake-days/${encodeURIComponent(bakeDayId)}/capacity`, body),
+      api.post<CapacityResult>(`/api/bake-days/${encodeURIComponent(bakeDayId)}/capacity`, body),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: queryRoots.bakeDays }),
   });
 }

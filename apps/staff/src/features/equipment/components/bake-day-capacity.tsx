@@ -4,8 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import type { Capacity } from '@fryline/production';
 import { capacityOverrideSchema, type BakeDayView } from '@fryline/schemas';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
-import { formatDate } from '../../../lib/format';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
+import { formatDate } from '@fryline/ui/format';
 import { useSetCapacity } from '../api/use-set-capacity';
 
 type CapacityValues = z.input<typeof capacityOverrideSchema>;

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '../../../components/status';
+import { ErrorState, LoadingState } from '@fryline/ui';
 import { bakeDayQueries } from '../../../lib/queries/bake-day-queries';
 import { settingsQueries } from '../../../lib/queries/settings-queries';
 import { BakeDayCapacityList } from './bake-day-capacity';

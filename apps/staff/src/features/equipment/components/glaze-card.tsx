@@ -4,7 +4,8 @@ import { allergens } from '@fryline/schemas';
 import { formatPercent, trimmed } from '../../../lib/units';
 import { MAX_GLAZE_PARTS, partShares, type GlazeValues } from '../model/glazes';
 import type { SettingsPath } from '../model/settings-fields';
-import { fieldAria, fieldError, fieldId, SettingsField, TextSetting, type SettingsForm } from './settings-field';
+import { fieldAria } from '@fryline/ui';
+import { fieldError, fieldId, SettingsField, TextSetting, type SettingsForm } from './settings-field';
 import { ListError, RemoveRowButton } from '../../../components/row-controls';
 
 /** One glaze recipe: name, amounts, parts, allergens, and a guarded remove. */

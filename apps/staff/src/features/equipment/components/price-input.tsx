@@ -1,6 +1,6 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { centsPerKgFromText, priceText, type PriceUnit } from '../model/prices';
-import { FieldShell, fieldAria } from './settings-field';
+import { FieldShell, fieldAria } from '@fryline/ui';
 
 /**
  * A price typed in dollars a kg or a lb while the form keeps whole cents a

@@ -1,8 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useController, useWatch } from 'react-hook-form';
 import { formatCents } from '@fryline/schemas';
-import { Caution } from '../../../components/caution';
-import { ErrorState } from '../../../components/status';
+import { Caution, ErrorState } from '@fryline/ui';
 import { productionQueries } from '../../../lib/queries/production-queries';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';

@@ -3,7 +3,7 @@ import { get, useController, type UseFormReturn } from 'react-hook-form';
 import type { ProductionSettingsInput } from '@fryline/schemas';
 import { tempFromUnit, tempSymbol, tempToUnit, trimmed, type TempUnit } from '../../../lib/units';
 import type { SettingsField as FieldDef, SettingsPath } from '../model/settings-fields';
-import { FieldShell, fieldAria } from '../../../components/field-shell';
+import { FieldShell, fieldAria } from '@fryline/ui';
 
 export type SettingsForm = UseFormReturn<ProductionSettingsInput>;
 
@@ -15,8 +15,6 @@ export function fieldId(name: string): string {
 export function fieldError(form: SettingsForm, name: string): string | undefined {
   return (get(form.formState.errors, name) as { message?: string } | undefined)?.message;
 }
-
-export { FieldShell, fieldAria };
 
 /** One numeric setting with its label, unit, help line and error. */
 export function SettingsField({ form, field, tempUnit }: { form: SettingsForm; field: FieldDef; tempUnit: TempUnit }) {

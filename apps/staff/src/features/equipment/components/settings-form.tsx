@@ -1,12 +1,11 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { productionSettingsSchema, type ProductionSettingsInput } from '@fryline/schemas';
-import { formatDateTime } from '../../../lib/format';
+import { productionSettingsSchema, type ProductionSettingsInput, type ProductionSettingsView } from '@fryline/schemas';
+import { formatDateTime } from '@fryline/ui/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
 import type { Capacity } from '@fryline/production';
-import type { ProductionSettingsView } from '../../../lib/queries/settings-queries';
 import { useSaveSettings } from '../api/use-save-settings';
 import { settingsMessages } from '../model/glazes';
 import { limitNames, placeServerErrors, settingsGroups, toSettingsValues } from '../model/settings-fields';

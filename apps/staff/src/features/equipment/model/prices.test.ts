@@ -38,12 +38,9 @@ describe('a price typed a kilogram', () => {
     expect(priceText(5, 'kg')).toBe('0.05');
   });
 
-  it('rounds a half cent up and less than half down, exactly: $1.005 → 101 ¢ although 1.005 × 100 is 100.4999… in binary floating point', () => {
-    expect(1.005 * 100).toBeLessThan(100.5); // why the arithmetic is done on the digits as typed
-    expect(centsPerKgFromText('1.005', 'kg')).toBe(101);
-    expect(centsPerKgFromText('4.995', 'kg')).toBe(500);
-    expect(centsPerKgFromText('4.9949', 'kg')).toBe(499);
-    expect(centsPerKgFromText('0.005', 'kg')).toBe(1);
+  it('takes a price by the shared money rule: at most two decimals, thousands commas allowed (ISO 4217: USD has 2 decimal places)', () => {
+    expect(centsPerKgFromText('1,234.50', 'kg')).toBe(123450);
+    expect(centsPerKgFromText('1.005', 'kg')).toBeNaN();
   });
 
   it('refuses what is not a price, and says so in dollars', () => {

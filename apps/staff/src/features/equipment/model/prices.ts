@@ -1,11 +1,12 @@
 /**
  * Ingredient prices as the owner types them (dollars a kilogram, or a pound
  * for someone reading ounces) and as they are stored (whole cents a
- * kilogram). The arithmetic is done on exact fractions, so "1.005" a kilo
- * is 100.5 ¢ and rounds up to 101 ¢, and a pound is exactly 453.59237 g.
+ * kilogram). The typed amount is read by the shared money rule, so a price
+ * is accepted here exactly when it is on every other screen; the change of
+ * unit is done on integers (a pound is exactly 453.59237 g) and rounded half up.
  */
 import { GRAMS_PER_POUND } from '@fryline/production';
-import type { FormulaInput, ingredientKinds } from '@fryline/schemas';
+import { centsToInput, parseCents, roundHalfUp, type FormulaInput, type ingredientKinds } from '@fryline/schemas';
 import type { MassUnit } from '../../../lib/units';
 
 export type PriceUnit = 'kg' | 'lb';
@@ -18,49 +19,29 @@ export function priceUnitFor(mass: MassUnit): PriceUnit {
 /** The highest price the settings accept, in cents a kilogram. */
 export const MAX_CENTS_PER_KG = 1_000_000;
 
-interface Fraction {
-  num: bigint;
-  den: bigint;
-}
-
-/** A decimal written out ("453.59237") as an exact fraction. */
-function exactDecimal(whole: string, decimals: string): Fraction {
-  return { num: BigInt(`${whole || '0'}${decimals}`), den: 10n ** BigInt(decimals.length) };
-}
-
-/** A plain decimal constant ("453.59237", not "1e-7") as an exact fraction. */
-function exactConstant(value: number): Fraction {
+/** A plain decimal constant ("453.59237", not "1e-7") as an exact fraction of integers. */
+function exactConstant(value: number): { num: number; den: number } {
   const [whole = '0', decimals = ''] = String(value).split('.');
-  return exactDecimal(whole, decimals);
+  return { num: Number(`${whole}${decimals}`), den: 10 ** decimals.length };
 }
 
-/** Grams in one unit the price is typed for. */
-const gramsPer: Record<PriceUnit, Fraction> = {
-  kg: { num: 1000n, den: 1n },
+/** Grams in one unit the price is typed for, as num ÷ den. */
+const gramsPer: Record<PriceUnit, { num: number; den: number }> = {
+  kg: { num: 1000, den: 1 },
   lb: exactConstant(GRAMS_PER_POUND),
 };
 
-/** num ÷ den rounded to a whole number, halves up (num, den ≥ 0). */
-function roundHalfUp(num: bigint, den: bigint): bigint {
-  return (2n * num + den) / (2n * den);
-}
-
-/** "4.50", "$4.50", "4.5", "4", ".5": dollars, with or without the sign. */
-const PRICE_TEXT = /^\s*\$?\s*(\d*)(?:\.(\d*))?\s*$/;
-
 /**
  * A price typed in dollars a kg (or a lb) as whole cents a kilogram,
- * rounded half up to the cent. NaN when the text is not a price.
+ * rounded half up to the cent. NaN when the text is not an amount: the form
+ * holds the price as a number, and `priceProblem` words the NaN.
  */
 export function centsPerKgFromText(text: string, unit: PriceUnit): number {
-  const match = PRICE_TEXT.exec(text);
-  const whole = match?.[1] ?? '';
-  const decimals = match?.[2] ?? '';
-  if (!match || whole + decimals === '') return Number.NaN;
-  const dollars = exactDecimal(whole, decimals);
+  const cents = parseCents(text);
+  if (cents === null) return Number.NaN;
   const grams = gramsPer[unit];
-  // dollars/unit × 100 ¢/$ × 1000 g/kg ÷ (grams/unit)
-  return Number(roundHalfUp(dollars.num * 100_000n * grams.den, dollars.den * grams.num));
+  // ¢/unit × 1000 g/kg ÷ (grams/unit)
+  return roundHalfUp(cents * 1000 * grams.den, grams.num);
 }
 
 /** Stored cents a kilogram as the dollars to show in the input: "4.41". Blank for no price. */
@@ -68,8 +49,7 @@ export function priceText(centsPerKg: number | undefined, unit: PriceUnit): stri
   if (centsPerKg === undefined || !Number.isFinite(centsPerKg) || centsPerKg < 0) return '';
   const grams = gramsPer[unit];
   // Stored prices are whole cents; anything else is rounded first.
-  const cents = roundHalfUp(BigInt(Math.round(centsPerKg)) * grams.num, grams.den * 1000n);
-  return `${cents / 100n}.${String(cents % 100n).padStart(2, '0')}`;
+  return centsToInput(roundHalfUp(roundHalfUp(centsPerKg) * grams.num, grams.den * 1000));
 }
 
 /** What is wrong with a price as the form holds it, in the owner's words; undefined when it is fine or not set. */

@@ -3,7 +3,7 @@ import { get } from 'react-hook-form';
 import { z } from 'zod';
 import { DEFAULT_PLAN_SETTINGS, glazeAmounts, ProductionInputError, type GlazeRecipe } from '@fryline/production';
 import { productionSettingsSchema } from '@fryline/schemas';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError } from '@fryline/ui/api-client';
 import { tempFromUnit } from '../../../lib/units';
 import { storedSettings } from './test-settings';
 import {

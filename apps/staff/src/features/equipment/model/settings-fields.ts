@@ -6,7 +6,7 @@
 import type { Path } from 'react-hook-form';
 import { scheduleStepIds, type ProductionSettingsInput } from '@fryline/schemas';
 import type { CapacityLimit } from '@fryline/production';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 
 export type SettingsPath = Path<ProductionSettingsInput>;
 

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { saveFormulaSchema } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
-import { productionRoot, type FormulaVersionView } from '../../../lib/queries/production-queries';
+import type { saveFormulaSchema, FormulaVersionView } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
+import { productionRoot } from '../../../lib/queries/production-queries';
 
 /** Saves the formula as a new version. Sheets already planned keep their own version. */
 export function useSaveFormula() {

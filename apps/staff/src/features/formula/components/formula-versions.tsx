@@ -1,5 +1,5 @@
-import { formatDateTime } from '../../../lib/format';
-import type { FormulaList } from '../../../lib/queries/production-queries';
+import { formatDateTime } from '@fryline/ui/format';
+import type { FormulaList } from '@fryline/schemas';
 
 const browserZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
 

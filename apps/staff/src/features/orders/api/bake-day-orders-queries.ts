@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { BakeDayView, StaffOrderView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 
 const detailKey = (bakeDayId: string) => [...queryRoots.bakeDays, 'detail', bakeDayId] as const;

@@ -1,16 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { OrderStatus, RefundRequest, StaffOrderView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import type { RefundRequest, RefundView, StaffOrderView } from '@fryline/schemas';
+import { api } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
-
-export interface RefundMade {
-  id: string;
-  orderId: string;
-  amountCents: number;
-  reason: string;
-  createdAt: string;
-  order: { status: OrderStatus; totalCents: number; refundedCents: number };
-}
 
 export interface RefundVariables {
   orderId: string;
@@ -20,8 +11,8 @@ export interface RefundVariables {
 }
 
 /** `POST /api/staff/orders/:id/refunds`, with the dialog's Idempotency-Key. */
-function postRefund({ orderId, body, requestKey }: RefundVariables): Promise<RefundMade> {
-  return api.post<RefundMade>(`/api/staff/orders/${encodeURIComponent(orderId)}/refunds`, body, { headers: { 'Idempotency-Key': requestKey } });
+function postRefund({ orderId, body, requestKey }: RefundVariables): Promise<RefundView> {
+  return api.post<RefundView>(`/api/staff/orders/${encodeURIComponent(orderId)}/refunds`, body, { headers: { 'Idempotency-Key': requestKey } });
 }
 
 /** Refunds part or all of a paid order; the bake day's figures and order list are fetched afresh after. */

@@ -1,13 +1,12 @@
 import { useDeferredValue, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { formatCents, type StaffOrderView } from '@fryline/schemas';
+import { formatCents, type RefundView, type StaffOrderView } from '@fryline/schemas';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '../../../components/status';
-import { isApiError } from '../../../lib/api-client';
-import { formatClockRange, formatDate, plural } from '../../../lib/format';
+import { ErrorState, LoadingState } from '@fryline/ui';
+import { isApiError } from '@fryline/ui/api-client';
+import { formatClockRange, formatDate, plural } from '@fryline/ui/format';
 import { bakeDayOrdersQueries } from '../api/bake-day-orders-queries';
-import type { RefundMade } from '../api/use-refund-order';
 import { groupByWindow, matchesOrder } from '../model/order-list';
 import { OrderCard } from './order-card';
 import { OrdersSummary } from './orders-summary';
@@ -64,7 +63,7 @@ export function BakeDayOrdersPage({ bakeDayId, canRefund }: BakeDayOrdersPagePro
   }
 
   const { timeZone } = day.data;
-  const onRefunded = (order: StaffOrderView, made: RefundMade) => {
+  const onRefunded = (order: StaffOrderView, made: RefundView) => {
     setRefunding(null);
     const rest = made.order.totalCents - made.order.refundedCents;
     const after =

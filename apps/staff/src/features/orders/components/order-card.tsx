@@ -1,11 +1,8 @@
-import type { BoxSize, StaffOrderView } from '@fryline/schemas';
-import { formatCents } from '@fryline/schemas';
-import { formatPieces } from '../../../lib/format';
+import { boxLabel, formatCents, type StaffOrderView } from '@fryline/schemas';
+import { formatPieces } from '@fryline/ui/format';
 import { refundableCents } from '../model/refund-form';
 import { Fact } from './fact';
 import { OrderStatusBadge } from './order-status-badge';
-
-const boxNames: Record<BoxSize, string> = { dozen: 'Dozen', 'half-dozen': 'Half dozen', holes: 'Bag of holes' };
 
 interface OrderCardProps {
   order: StaffOrderView;
@@ -44,7 +41,7 @@ export function OrderCard({ order, onRefund }: OrderCardProps) {
         <ul aria-label="Boxes" className="flex flex-col gap-1 border-t border-line pt-2 text-sm">
           {order.boxes.map((box, index) => (
             <li key={index}>
-              <span className="font-extrabold">{boxNames[box.size]}:</span>{' '}
+              <span className="font-extrabold">{boxLabel(box.size)}:</span>{' '}
               {box.items.map((item) => `${item.quantity} × ${item.name}`).join(', ')}
             </li>
           ))}

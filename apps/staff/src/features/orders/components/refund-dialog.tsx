@@ -1,18 +1,17 @@
 import { useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { formatCents, type RefundRequest, type StaffOrderView } from '@fryline/schemas';
-import { isApiError, putFieldErrors } from '../../../lib/api-client';
-import { useRefundOrder, type RefundMade } from '../api/use-refund-order';
-import { parseDollars, dollarsText } from '../model/money';
+import { centsToInput, formatCents, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
+import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
+import { useRefundOrder } from '../api/use-refund-order';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '@fryline/ui';
 
 interface RefundDialogProps {
   /** The order as it was when the dialog opened. */
   order: StaffOrderView;
   onClose: () => void;
-  onRefunded: (made: RefundMade) => void;
+  onRefunded: (made: RefundView) => void;
 }
 
 function FieldError({ id, message }: { id: string; message: string | undefined }) {
@@ -38,7 +37,7 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
   const [problem, setProblem] = useState<string | null>(null);
   const { errors } = form.formState;
   const mode = form.watch('mode');
-  const typed = parseDollars(form.watch('amount'));
+  const typed = parseCents(form.watch('amount'));
   const id = useId();
   const amountRef = useRef<HTMLInputElement | null>(null);
   const amountField = form.register('amount');
@@ -46,7 +45,7 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
   const chooseMode = (next: RefundFormValues['mode']) => {
     form.setValue('mode', next);
     if (next === 'full') {
-      form.setValue('amount', dollarsText(left));
+      form.setValue('amount', centsToInput(left));
       form.clearErrors('amount');
     } else {
       amountRef.current?.select();

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { formatCents, refundRequestSchema, type OrderStatus, type StaffOrderView } from '@fryline/schemas';
-import { dollarsText, parseDollars } from './money';
+import { centsToInput, formatCents, parseCents, refundRequestSchema, type OrderStatus, type StaffOrderView } from '@fryline/schemas';
 
 /** Statuses an order can only reach after its payment went through. */
 const PAID_STATUSES: readonly OrderStatus[] = ['paid', 'collected', 'no_show', 'cancelled', 'refunded'];
@@ -22,7 +21,7 @@ export interface RefundFormValues {
 }
 
 export function refundFormDefaults(leftCents: number): RefundFormValues {
-  return { mode: 'full', amount: dollarsText(leftCents), reason: '' };
+  return { mode: 'full', amount: centsToInput(leftCents), reason: '' };
 }
 
 /**
@@ -35,7 +34,7 @@ export function refundFormSchema(leftCents: number) {
     .object({
       mode: z.enum(['full', 'part']),
       amount: z.string().transform((text, ctx) => {
-        const cents = parseDollars(text);
+        const cents = parseCents(text);
         const message =
           cents === null
             ? 'Write the amount in dollars, like 4.50'

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { productionQueries, type PlanResponse } from '../../../lib/queries/production-queries';
+import { api } from '@fryline/ui/api-client';
+import type { PlanResponse } from '@fryline/schemas';
+import { productionQueries } from '../../../lib/queries/production-queries';
 
 /** Moves a bake day's sheet to another formula version; the answer is the new sheet. */
 export function useSwitchFormula(bakeDayId: string) {

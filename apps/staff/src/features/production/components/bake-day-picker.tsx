@@ -1,5 +1,5 @@
 import type { BakeDayView } from '@fryline/schemas';
-import { formatDate } from '../../../lib/format';
+import { formatDate } from '@fryline/ui/format';
 
 /** Chooses which bake day a page is about. */
 export function BakeDayPicker({

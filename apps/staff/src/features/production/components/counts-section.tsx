@@ -1,5 +1,5 @@
 import type { BakePlan } from '@fryline/production';
-import type { PlanMeta } from '../../../lib/queries/production-queries';
+import type { PlanMeta } from '@fryline/schemas';
 import { countRows } from '../model/sheet';
 import { cell, num, SheetSection, TableHead } from './sheet-section';
 

@@ -1,5 +1,5 @@
 import type { CutsPlan } from '@fryline/production';
-import { formatPieces } from '../../../lib/format';
+import { formatPieces } from '@fryline/ui/format';
 import { formatMass, type Units } from '../../../lib/units';
 import { cell, Facts, num, SheetSection, TableHead } from './sheet-section';
 

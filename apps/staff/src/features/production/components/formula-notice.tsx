@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import { errorMessage } from '../../../lib/api-client';
-import { productionQueries, type PlanMeta } from '../../../lib/queries/production-queries';
+import { errorMessage } from '@fryline/ui/api-client';
+import type { PlanMeta } from '@fryline/schemas';
+import { productionQueries } from '../../../lib/queries/production-queries';
 import { useSwitchFormula } from '../api/use-switch-formula';
 import { formulaStatus } from '../model/sheet';
 

@@ -1,5 +1,5 @@
 import type { GlazeAmount } from '@fryline/production';
-import { formatPieces } from '../../../lib/format';
+import { formatPieces } from '@fryline/ui/format';
 import { formatMass, type Units } from '../../../lib/units';
 import { cell, num, SheetSection, TableHead } from './sheet-section';
 

@@ -1,4 +1,4 @@
-import { Caution } from '../../../components/caution';
+import { Caution } from '@fryline/ui';
 
 /** Planning notes worked out with the sheet: ranges, timing, capacity. */
 export function SheetWarnings({ warnings }: { warnings: readonly string[] }) {

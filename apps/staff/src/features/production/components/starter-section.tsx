@@ -1,5 +1,5 @@
 import type { StarterSheet } from '@fryline/production';
-import { formatMoment } from '../../../lib/format';
+import { formatMoment } from '@fryline/ui/format';
 import { formatMass, formatPercent, trimmed, type Units } from '../../../lib/units';
 import { Facts, SheetSection } from './sheet-section';
 

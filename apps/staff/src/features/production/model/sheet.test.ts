@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { scaleFormula, type BakePlan, type TimelineStep } from '@fryline/production';
-import type { PlanMeta } from '../../../lib/queries/production-queries';
+import type { PlanMeta } from '@fryline/schemas';
 import { countRows, cutoffWarning, dayInZone, formulaStatus, mixerLines, scheduleRows } from './sheet';
 
 const step = (startsAt: string, endsAt: string, minutes: number): TimelineStep => ({

@@ -4,8 +4,8 @@
  * without a browser. No bake maths here; that lives in @fryline/production.
  */
 import type { BakePlan, ScaledFormula, TimelineStep } from '@fryline/production';
-import { formatClock, formatMoment } from '../../../lib/format';
-import type { PlanMeta } from '../../../lib/queries/production-queries';
+import { formatClock, formatMoment } from '@fryline/ui/format';
+import type { PlanMeta } from '@fryline/schemas';
 
 /** The calendar day of an instant in a time zone, as "2026-12-04". */
 export function dayInZone(iso: string, timeZone: string): string {

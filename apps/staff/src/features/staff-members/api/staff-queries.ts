@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { StaffMemberView } from '@fryline/schemas';
-import { api } from '../../../lib/api-client';
+import { api } from '@fryline/ui/api-client';
 
 /** First element of every staff-list query key. */
 export const staffRoot = ['staff-members'] as const;

@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { staffMemberInputSchema, type StaffMemberInput } from '@fryline/schemas';
-import { putFieldErrors } from '../../../lib/api-client';
+import { putFieldErrors } from '@fryline/ui/api-client';
 import { useAddStaff } from '../api/use-add-staff';
 import { roleLabels, roleNowMessage, roleSummaries, staffRoles } from '../model/roles';
 

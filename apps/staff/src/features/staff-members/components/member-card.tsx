@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { StaffMemberView } from '@fryline/schemas';
-import { errorMessage } from '../../../lib/api-client';
+import { errorMessage } from '@fryline/ui/api-client';
 import { useChangeRole } from '../api/use-change-role';
 import { confirmationFor, displayName, roleChoices, roleLabels, roleNowMessage, type RoleChoice } from '../model/roles';
 

@@ -1,1 +1,0 @@
-export { api, ApiError, isApiError, errorMessage, fetchCurrentUser, putFieldErrors, shouldRetry } from '@fryline/ui/api-client';

@@ -1,9 +1,0 @@
-export {
-  formatDate,
-  formatClock,
-  formatClockRange,
-  formatDateTime,
-  formatMoment,
-  formatPieces,
-  plural,
-} from '@fryline/ui/format';

@@ -1,0 +1,81 @@
+import { z } from 'zod';
+
+/**
+ * Money: integer cents everywhere; text only where a person types or reads it.
+ * One rule for reading typed amounts, one formatter, one half-up rounding.
+ */
+
+/** The shop's locale and its default currency (ISO 4217); the shop setting may name another two-decimal currency. */
+export const SHOP_LOCALE = 'en-US';
+export const SHOP_CURRENCY = 'USD';
+
+/** The one half-up rounding lives with the maths (packages/production); money uses it from here. */
+export { roundHalfUp } from '@fryline/production';
+
+/**
+ * What an amount may look like when typed: an optional currency sign, whole
+ * units either plain ("1234") or with correct thousands commas ("1,234"),
+ * then at most two decimals ("1,234.56", "12.5", ".75", "12."). Nothing else:
+ * no minus sign, no third decimal, no misplaced comma, no letters.
+ */
+const TYPED_AMOUNT = /^\$?\s*(\d{1,3}(?:,\d{3})+|\d+)?(?:\.(\d{0,2}))?$/;
+
+/** The message for anything that is not an amount. */
+export const MONEY_FORMAT_MESSAGE = 'Enter an amount like 12.50 or $1,234.56 (at most two decimals)';
+
+export type MoneyParseResult = { ok: true; cents: number } | { ok: false; message: string };
+
+/**
+ * Reads a typed amount into integer cents, working on the digits (never a
+ * float), so "19.99" is exactly 1999. Refuses rather than guesses: a refusal
+ * carries a message a person can act on, and the result is never NaN.
+ */
+export function parseMoney(text: string): MoneyParseResult {
+  const match = TYPED_AMOUNT.exec(text.trim());
+  const whole = match?.[1];
+  const fraction = match?.[2] ?? '';
+  if (!match || (whole === undefined && fraction === '')) {
+    if (/\.\d{3,}\s*$/.test(text)) return { ok: false, message: 'At most two decimals (whole cents)' };
+    if (/^\s*[-−]/.test(text)) return { ok: false, message: 'The amount can’t be negative' };
+    return { ok: false, message: MONEY_FORMAT_MESSAGE };
+  }
+  const cents = Number((whole ?? '0').replace(/,/g, '')) * 100 + Number(fraction.padEnd(2, '0'));
+  if (!Number.isSafeInteger(cents)) return { ok: false, message: 'That amount is too large' };
+  return { ok: true, cents };
+}
+
+/** The cents in a typed amount, or null when it is not one (see parseMoney for the reason). */
+export function parseCents(text: string): number | null {
+  const result = parseMoney(text);
+  return result.ok ? result.cents : null;
+}
+
+/** A form field holding a typed amount: the string in, integer cents out, the refusal as the field's message. */
+export const moneyTextSchema = z.string().transform((text, ctx) => {
+  const result = parseMoney(text);
+  if (!result.ok) {
+    ctx.addIssue({ code: 'custom', message: result.message });
+    return z.NEVER;
+  }
+  return result.cents;
+});
+
+const formatters = new Map<string, Intl.NumberFormat>();
+
+/** Integer cents for reading, in the shop's currency: 1250 → "$12.50", 123456 → "$1,234.56". */
+export function formatCents(cents: number, currency: string = SHOP_CURRENCY): string {
+  if (!Number.isInteger(cents)) throw new RangeError(`formatCents: ${cents} is not a whole number of cents`);
+  const code = currency.toUpperCase();
+  let format = formatters.get(code);
+  if (!format) {
+    format = new Intl.NumberFormat(SHOP_LOCALE, { style: 'currency', currency: code });
+    formatters.set(code, format);
+  }
+  return format.format(cents / 100);
+}
+
+/** Cents as the text of an amount input (no sign, no separators): 1250 → "12.50", 7 → "0.07"; parseMoney reads it back. */
+export function centsToInput(cents: number): string {
+  if (!Number.isSafeInteger(cents) || cents < 0) throw new RangeError(`centsToInput: ${cents} is not a whole, non-negative number of cents`);
+  return `${Math.floor(cents / 100)}.${String(cents % 100).padStart(2, '0')}`;
+}
