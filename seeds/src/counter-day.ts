@@ -59,9 +59,10 @@ export async function seedCounterDay(nowDate: Date = new Date(), orders: Counter
     // over (grace too) · under way · to come
     const spans = [[-150, -90], [-30, 30], [30, 90]] as const;
     const windows: PickupWindow[] = [];
-    for (const [from, to] of spans) {
+    for (const [i, [from, to]] of spans.entries()) {
+      const maxOrders = Math.max(25, orders.filter((o) => o.window === i).length);
       windows.push(
-        await PickupWindow.create({ bakeDayId: day.id, startsAt: now.plus({ minutes: from }).toJSDate(), endsAt: now.plus({ minutes: to }).toJSDate(), maxOrders: 25, ordersRemaining: 25 }, { transaction }),
+        await PickupWindow.create({ bakeDayId: day.id, startsAt: now.plus({ minutes: from }).toJSDate(), endsAt: now.plus({ minutes: to }).toJSDate(), maxOrders, ordersRemaining: maxOrders }, { transaction }),
       );
     }
     await BakeDayBox.bulkCreate(demoBoxes.map((b) => ({ ...b, bakeDayId: day.id })), { transaction });
@@ -117,7 +118,10 @@ export async function seedCounterDay(nowDate: Date = new Date(), orders: Counter
       holesTaken += holes;
       seeded.push({ id: order.id, code: order.pickupCode!, name: spec.name, email, windowIndex: spec.window, rings, holes });
     }
-    await day.update({ ringsRemaining: 120 - ringsTaken, holesRemaining: 96 - holesTaken }, { transaction });
+    // a day busier than the demo's capacity (a benchmark) gets the capacity it sold
+    const ringCapacity = Math.max(120, ringsTaken);
+    const holeCapacity = Math.max(96, holesTaken);
+    await day.update({ ringCapacity, holeCapacity, ringsRemaining: ringCapacity - ringsTaken, holesRemaining: holeCapacity - holesTaken }, { transaction });
     return { day, windows, orders: seeded };
   });
 }

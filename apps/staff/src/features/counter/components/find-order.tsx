@@ -5,7 +5,7 @@ import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { counterQueries } from '../api/counter-queries';
 import { boxText, type ShownRow } from '../model/pickups';
 import { PickupCard, type CardActions } from './pickup-card';
-import { Sheet } from './sheet';
+import { ModalDialog } from '@fryline/ui';
 
 /** What was asked for: an order of this day's list, or a code to look up on the server. */
 export type Lookup = { kind: 'row'; orderId: string } | { kind: 'code'; code: string };
@@ -54,16 +54,19 @@ export function FoundOrder({
 
   if (row) {
     return (
-      <Sheet title={row.name} onClose={onClose}>
+      <ModalDialog title={row.name} onClose={onClose}>
+        <div className="mt-3 flex flex-col gap-3">
         <PickupCard row={row} now={now} timeZone={timeZone} actions={{ ...actions, handOver: close(actions.handOver), noShow: close(actions.noShow) }} />
         <button type="button" className="btn btn-quiet min-h-12" onClick={onClose}>
           Close
         </button>
-      </Sheet>
+        </div>
+      </ModalDialog>
     );
   }
   return (
-    <Sheet title={remote.data ? remote.data.name : `Code ${code}`} onClose={onClose}>
+    <ModalDialog title={remote.data ? remote.data.name : `Code ${code}`} onClose={onClose}>
+      <div className="mt-3 flex flex-col gap-3">
       {remote.isPending && <p role="status">Looking up {code}…</p>}
       {remote.isError && (
         <p role="alert" className="notice notice-bad">
@@ -74,6 +77,7 @@ export function FoundOrder({
       <button type="button" className="btn btn-quiet min-h-12" onClick={onClose}>
         Close
       </button>
-    </Sheet>
+      </div>
+    </ModalDialog>
   );
 }

@@ -1,8 +1,8 @@
 import { useState } from 'react';
+import { ConfirmDialog } from '@fryline/ui';
 import { plural } from '@fryline/ui/format';
 import { useRestNoShow } from '../api/counter-mutations';
 import type { ShownRow } from '../model/pickups';
-import { Sheet } from './sheet';
 
 /** "Mark the rest as no-show": every paid order whose window and grace are over, after one confirmation. */
 export function RestNoShowButton({ bakeDayId, rest }: { bakeDayId: string; rest: ShownRow[] }) {
@@ -14,30 +14,25 @@ export function RestNoShowButton({ bakeDayId, rest }: { bakeDayId: string; rest:
       <button type="button" className="btn btn-danger min-h-14 w-full" onClick={() => setAsking(true)}>
         Mark the rest as no-show ({rest.length})
       </button>
-      {asking && (
-        <Sheet title={`Mark ${plural(rest.length, 'order')} as no-show?`} onClose={() => setAsking(false)}>
-          <p>Their pickup windows and the grace time after them are over:</p>
-          <ul className="list-disc pl-5">
-            {rest.map((r) => (
-              <li key={r.orderId}>{r.name}</li>
-            ))}
-          </ul>
-          <p className="text-muted">If one of them turns up later, find the order and tap “Undo no-show”.</p>
-          <button
-            type="button"
-            className="btn btn-danger min-h-14"
-            onClick={() => {
-              markRest({ bakeDayId, count: rest.length });
-              setAsking(false);
-            }}
-          >
-            Yes, mark {plural(rest.length, 'no-show')}
-          </button>
-          <button type="button" className="btn btn-quiet min-h-12" onClick={() => setAsking(false)}>
-            Not now
-          </button>
-        </Sheet>
-      )}
+      <ConfirmDialog
+        open={asking}
+        title={`Mark ${plural(rest.length, 'order')} as no-show?`}
+        confirmLabel={`Yes, mark ${plural(rest.length, 'no-show')}`}
+        cancelLabel="Not now"
+        onClose={() => setAsking(false)}
+        onConfirm={() => {
+          markRest({ bakeDayId, count: rest.length });
+          setAsking(false);
+        }}
+      >
+        <p>Their pickup windows and the grace time after them are over:</p>
+        <ul className="list-disc pl-5">
+          {rest.map((r) => (
+            <li key={r.orderId}>{r.name}</li>
+          ))}
+        </ul>
+        <p className="text-muted">If one of them turns up later, find the order and tap “Undo no-show”.</p>
+      </ConfirmDialog>
     </>
   );
 }

@@ -1,9 +1,8 @@
 import { useState } from 'react';
-import { formatCents, type PaymentMethod, type Surplus } from '@fryline/schemas';
+import { formatCents, parseMoney, type PaymentMethod, type Surplus } from '@fryline/schemas';
 import { plural } from '@fryline/ui/format';
 import { useWalkUpSale } from '../api/counter-mutations';
 import { useOnline } from './use-online';
-import { parseDollars } from '../model/money';
 
 /** Sell what is left to someone without a pre-order: items, cash or card (on the card reader), and the amount taken. */
 export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus: Surplus }) {
@@ -27,9 +26,10 @@ export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus:
       onSubmit={(e) => {
         e.preventDefault();
         setMessage(null);
-        const cents = parseDollars(amount);
+        const money = parseMoney(amount);
         if (chosen.length === 0) return setProblem('Add at least one doughnut.');
-        if (cents === null) return setProblem('Type the amount taken, for example 3.50.');
+        if (!money.ok) return setProblem(money.message);
+        const cents = money.cents;
         setProblem(null);
         const what = `${formatCents(cents)} ${method}`;
         sell(

@@ -1,4 +1,4 @@
-import { normalisePickupCode, type PickupRow } from '@fryline/schemas';
+import { boxLabel, normalisePickupCode, type PickupRow } from '@fryline/schemas';
 
 // The pickup list as the counter sees it: server rows with this device's
 // waiting changes laid over them, grouped by window with the current one
@@ -126,8 +126,7 @@ export function restForNoShow(rows: readonly ShownRow[], now: number): ShownRow[
   return rows.filter((r) => r.status === 'paid' && now >= Date.parse(r.noShowFrom));
 }
 
-/** "Dozen: 6 Vanilla Bean Glaze, 6 Brown Butter Maple". */
+/** "A dozen: 6 Vanilla Bean Glaze, 6 Brown Butter Maple". */
 export function boxText(box: PickupRow['boxes'][number]): string {
-  const name = box.size === 'holes' ? 'Bag of holes' : box.size === 'dozen' ? 'Dozen' : 'Half dozen';
-  return `${name}: ${box.items.map((i) => `${i.quantity} ${i.name}`).join(', ')}`;
+  return `${boxLabel(box.size)}: ${box.items.map((i) => `${i.quantity} ${i.name}`).join(', ')}`;
 }
