@@ -36,7 +36,11 @@ describe('the counter keeps working through a dead connection', () => {
     const { page, context } = browser;
     await openCounter(page, 'counter@fryline.test');
     // the app shell is kept by the service worker before the signal goes
+    // (installed in the background on the first visit; a page opened before it was ready is looked after from its next load)
+    await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
+    if (!(await page.evaluate(() => navigator.serviceWorker.controller !== null))) await page.reload();
     await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 30_000 });
+    await card(page, 'Ada Quillfeather').waitFor();
     // the window under way is listed first, with its totals
     await expect.poll(async () => page.getByRole('heading', { level: 2 }).first().textContent()).toMatch(/Now/);
     await expect.poll(async () => page.getByTestId('window-totals').first().textContent()).toMatch(/^3 to hand over · 0 handed over/);
