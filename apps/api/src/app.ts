@@ -25,6 +25,9 @@ import { setContext } from './integrations/context.js';
 import { requestClock } from './middleware/request-clock.js';
 import { requestLog } from './middleware/request-log.js';
 import { checkResponsesAgainstContract } from './lib/route.js';
+import { bakeDayEditRouter } from './routes/bake-day-edit.js';
+import { announcementsRouter, unsubscribeRouter } from './routes/announcements.js';
+import { reportsRouter } from './routes/reports.js';
 import { counterRouter } from './routes/counter.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
@@ -84,6 +87,8 @@ export function createApp(config: Config) {
 
   // Webhooks read the raw body for signature checks: mounted before express.json().
   app.use(webhooksRouter);
+  // one-click unsubscribe comes from mail programs, without cookies: before sessions and CSRF
+  app.use(unsubscribeRouter);
 
   app.use(express.json({ limit: '100kb' }));
 
@@ -119,6 +124,9 @@ export function createApp(config: Config) {
   app.use(staffMembersRouter);
   app.use(menuItemsRouter);
   app.use(productionRouter);
+  app.use(bakeDayEditRouter);
+  app.use(announcementsRouter);
+  app.use(reportsRouter);
   app.use(counterRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);

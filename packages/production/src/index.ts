@@ -12,4 +12,5 @@ export * from './cautions.js';
 export * from './plan.js';
 export * from './defaults.js';
 export { formatInstant, parseInstant, requireTimeZone } from './time.js';
+export * from './sales.js';
 export * from './surplus.js';

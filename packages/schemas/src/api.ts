@@ -10,6 +10,10 @@ import {
 } from './production.js';
 import { meSchema } from './roles.js';
 import {
+  bakeDayEditResultSchema, bakeDayEditViewSchema, callOffSchema, callOffStartedSchema, confirmedSchema, editBakeDaySchema, jobViewSchema, subscribeSchema,
+  subscribedSchema, tokenSchema, unsubscribedSchema, weekQuerySchema, weeklyReportSchema,
+} from './owner-ops.js';
+import {
   counterActionSchema, counterSettingsSchema, endOfDaySchema, markRestNoShowResultSchema, markRestNoShowSchema, orderByCodeSchema, pickupRowSchema, surplusSchema,
   walkUpSaleSchema, walkUpSaleViewSchema,
 } from './counter.js';
@@ -34,7 +38,7 @@ export interface Endpoint {
   /** The body of a success; an endpoint that may answer 204 No Content makes it optional. */
   response: z.ZodType;
   /** Success status (200 unless said). */
-  status?: 200 | 201;
+  status?: 200 | 201 | 202;
 }
 
 const endpoint = <const E extends Endpoint>(e: E): E => e;
@@ -113,6 +117,23 @@ export const api = {
   listFormulas: endpoint({ method: 'get', path: '/api/production/formulas', response: formulaListSchema }),
   saveFormula: endpoint({ method: 'post', path: '/api/production/formulas', body: saveFormulaSchema, response: formulaVersionViewSchema, status: 201 }),
 
+  // the owner changes, calls off, opens, closes or finishes a bake day, and follows the call-off's job
+  getBakeDayForEdit: endpoint({ method: 'get', path: '/api/staff/bake-days/:id', params: bakeDayParams, response: bakeDayEditViewSchema }),
+  editBakeDay: endpoint({ method: 'patch', path: '/api/staff/bake-days/:id', params: bakeDayParams, body: editBakeDaySchema, response: bakeDayEditResultSchema }),
+  openBakeDayNow: endpoint({ method: 'post', path: '/api/staff/bake-days/:id/open-now', params: bakeDayParams, response: bakeDayEditResultSchema }),
+  closeBakeDayNow: endpoint({ method: 'post', path: '/api/staff/bake-days/:id/close-now', params: bakeDayParams, response: bakeDayEditResultSchema }),
+  markBakeDayDone: endpoint({ method: 'post', path: '/api/staff/bake-days/:id/mark-done', params: bakeDayParams, response: bakeDayEditResultSchema }),
+  callOffBakeDay: endpoint({ method: 'post', path: '/api/staff/bake-days/:id/call-off', params: bakeDayParams, body: callOffSchema, response: callOffStartedSchema, status: 202 }),
+  getJob: endpoint({ method: 'get', path: '/api/staff/jobs/:id', params: uuidParams('job'), response: jobViewSchema }),
+
+  // news of new bake days: double opt-in, and the RFC 8058 one-click unsubscribe address (token in the query)
+  subscribeToNews: endpoint({ method: 'post', path: '/api/announcements/subscribe', body: subscribeSchema, response: subscribedSchema, status: 202 }),
+  confirmNews: endpoint({ method: 'post', path: '/api/announcements/confirm', body: tokenSchema, response: confirmedSchema }),
+  unsubscribeFromNews: endpoint({ method: 'post', path: '/api/announcements/unsubscribe', query: tokenSchema, response: unsubscribedSchema }),
+
+  // the week's sales (owner); the CSV (RFC 4180) is text, not JSON
+  weeklySales: endpoint({ method: 'get', path: '/api/reports/weekly', query: weekQuerySchema, response: weeklyReportSchema }),
+  weeklySalesCsv: endpoint({ method: 'get', path: '/api/reports/weekly.csv', query: weekQuerySchema, response: z.string() }),
   // the counter on bake day (counter and up); changes take an optional Idempotency-Key
   listPickups: endpoint({ method: 'get', path: '/api/bake-days/:id/pickups', params: bakeDayParams, response: z.array(pickupRowSchema) }),
   getSurplus: endpoint({ method: 'get', path: '/api/bake-days/:id/surplus', params: bakeDayParams, response: surplusSchema }),

@@ -8,4 +8,5 @@ export * from './pricing.js';
 export * from './production.js';
 export * from './setup.js';
 export * from './api.js';
+export * from './owner-ops.js';
 export * from './counter.js';

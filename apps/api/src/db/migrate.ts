@@ -8,6 +8,7 @@ const migrations = {
   '0001-core': () => import('./migrations/0001-core.js'),
   '0002-production': () => import('./migrations/0002-production.js'),
   '0010-bake-day-counter': () => import('./migrations/0010-bake-day-counter.js'),
+  '0021-owner-ops': () => import('./migrations/0021-owner-ops.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

@@ -9,6 +9,7 @@ interface DueRow {
   text_body: string;
   html_body: string | null;
   attachments: Array<{ filename: string; contentType: string; content: string; cid?: string }>;
+  headers: Record<string, string> | null;
   attempts: number;
 }
 
@@ -28,7 +29,7 @@ export async function relayOutbox(sequelize: Sequelize, transport: Transporter, 
   let failed = 0;
   await sequelize.transaction(async (transaction) => {
     const rows = await sequelize.query<DueRow>(
-      `SELECT id, message_id, to_address, subject, text_body, html_body, attachments, attempts
+      `SELECT id, message_id, to_address, subject, text_body, html_body, attachments, headers, attempts
          FROM outbox
         WHERE status = 'pending' AND next_attempt_at <= now()
         ORDER BY created_at
@@ -45,6 +46,7 @@ export async function relayOutbox(sequelize: Sequelize, transport: Transporter, 
           text: row.text_body,
           html: row.html_body ?? undefined,
           messageId: row.message_id,
+          headers: row.headers ?? {},
           attachments: row.attachments.map((a) => ({
             filename: a.filename,
             contentType: a.contentType,

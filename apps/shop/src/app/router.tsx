@@ -9,6 +9,8 @@ import { SignInPage } from '../features/auth/components/sign-in-page';
 const BakeDayRoute = lazy(() => import('./routes/bake-day-route').then((m) => ({ default: m.BakeDayRoute })));
 const ClaimRoute = lazy(() => import('./routes/claim-route').then((m) => ({ default: m.ClaimRoute })));
 const OrderRoute = lazy(() => import('./routes/order-route').then((m) => ({ default: m.OrderRoute })));
+const ConfirmNewsPage = lazy(() => import('../features/announcements/components/confirm-news-page').then((m) => ({ default: m.ConfirmNewsPage })));
+const UnsubscribePage = lazy(() => import('../features/announcements/components/unsubscribe-page').then((m) => ({ default: m.UnsubscribePage })));
 const MyOrdersRoute = lazy(() => import('./routes/my-orders-route').then((m) => ({ default: m.MyOrdersRoute })));
 
 /**
@@ -24,6 +26,8 @@ export function AppRoutes() {
         <Route path="orders" element={<MyOrdersRoute />} />
         <Route path="orders/:id" element={<OrderRoute />} />
         <Route path="claim/:token" element={<ClaimRoute />} />
+        <Route path="news/confirm" element={<ConfirmNewsPage />} />
+        <Route path="news/unsubscribe" element={<UnsubscribePage />} />
         <Route path="signin" element={<SignInPage />} />
         <Route path="*" element={<NotFoundRoute />} />
       </Route>

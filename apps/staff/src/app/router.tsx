@@ -7,6 +7,7 @@ import { NotFoundRoute } from './routes/not-found-route';
 import { BakeDayOrdersRoute } from './routes/bake-day-orders-route';
 import { RoleGuard } from './session/role-guard';
 import { AnnounceBakeDayPage } from '../features/bake-days/components/announce-bake-day-page';
+import { EditBakeDayRoute } from './routes/edit-bake-day-route';
 
 /** Every section's route exists for every role; the guard explains when one is not theirs. */
 export function AppRoutes() {
@@ -26,6 +27,7 @@ export function AppRoutes() {
           }
         />
         <Route path="bake-days/:bakeDayId" element={<BakeDayOrdersRoute />} />
+        <Route path="bake-days/:bakeDayId/edit" element={<EditBakeDayRoute />} />
         <Route path="*" element={<NotFoundRoute />} />
       </Route>
     </Routes>

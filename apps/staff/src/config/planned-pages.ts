@@ -10,13 +10,6 @@ export interface PlannedPage {
 }
 
 export const plannedPages: Record<string, PlannedPage> = {
-  'bake-days': {
-    intro: 'Dates, places, pickup windows and capacity.',
-    arrivesWith: "the owner's setup work",
-    will: [
-      'Changing a bake day after it is announced: place, pickup windows, that day’s menu and prices',
-    ],
-  },
   menu: {
     intro: 'What customers can put in a box, and what it costs.',
     arrivesWith: "the owner's setup work",
@@ -24,17 +17,6 @@ export const plannedPages: Record<string, PlannedPage> = {
       'Flavour and glaze combinations, for rings and for holes',
       'The allergens of each item, shown to customers before they pay',
       'Box sizes, their prices and any extra charge per item',
-    ],
-  },
-  sales: {
-    intro: 'How each week went, in money and in doughnuts.',
-    arrivesWith: 'the sales report work',
-    will: [
-      'Gross sales, refunds, processing fees and net',
-      'Units sold by flavour, and what sold out',
-      'Sell-through against capacity, and no-shows',
-      'Cost per doughnut and margin',
-      'Charts, and a CSV download',
     ],
   },
 };

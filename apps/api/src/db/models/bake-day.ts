@@ -23,6 +23,10 @@ export class BakeDay extends Model<InferAttributes<BakeDay>, InferCreationAttrib
   declare notes: CreationOptional<string>;
   /** The formula version this day's sheet is planned with (set when first planned). */
   declare formulaVersionId: CreationOptional<string | null>;
+  /** When subscribers were told its orders are open. */
+  declare announcedAt: CreationOptional<Date | null>;
+  declare calledOffAt: CreationOptional<Date | null>;
+  declare calledOffReason: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -47,6 +51,9 @@ export class BakeDay extends Model<InferAttributes<BakeDay>, InferCreationAttrib
         holesRemaining: { type: DataTypes.INTEGER, allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         formulaVersionId: { type: DataTypes.UUID, allowNull: true },
+        announcedAt: { type: DataTypes.DATE, allowNull: true },
+        calledOffAt: { type: DataTypes.DATE, allowNull: true },
+        calledOffReason: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

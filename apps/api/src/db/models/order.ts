@@ -34,6 +34,8 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare noShowAt: CreationOptional<Date | null>;
   declare noShowBy: CreationOptional<string | null>;
   declare cancelledAt: CreationOptional<Date | null>;
+  /** After the owner changed this order's window or place: move or cancel with a full refund until then. */
+  declare changeGraceUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -69,6 +71,7 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         noShowAt: { type: DataTypes.DATE, allowNull: true },
         noShowBy: { type: DataTypes.UUID, allowNull: true },
         cancelledAt: { type: DataTypes.DATE, allowNull: true },
+        changeGraceUntil: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -18,6 +18,8 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare textBody: string;
   declare htmlBody: string | null;
   declare attachments: CreationOptional<StoredAttachment[]>;
+  /** Extra header lines, e.g. List-Unsubscribe. */
+  declare headers: CreationOptional<Record<string, string>>;
   declare status: CreationOptional<'pending' | 'sent' | 'failed'>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: CreationOptional<Date>;
@@ -37,6 +39,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         textBody: { type: DataTypes.TEXT, allowNull: false },
         htmlBody: { type: DataTypes.TEXT, allowNull: true },
         attachments: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+        headers: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'pending' },
         attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },

@@ -7,6 +7,8 @@ export class PickupWindow extends Model<InferAttributes<PickupWindow>, InferCrea
   declare endsAt: Date;
   declare maxOrders: number | null;
   declare ordersRemaining: number | null;
+  /** Set when the owner took the window off the day while orders were in it. */
+  declare removedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -19,6 +21,7 @@ export class PickupWindow extends Model<InferAttributes<PickupWindow>, InferCrea
         endsAt: { type: DataTypes.DATE, allowNull: false },
         maxOrders: { type: DataTypes.INTEGER, allowNull: true },
         ordersRemaining: { type: DataTypes.INTEGER, allowNull: true },
+        removedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -46,6 +46,7 @@ export async function takeWindowSlot(bakeDayId: string, windowId: string, transa
         SET orders_remaining = orders_remaining - 1, updated_at = now()
       WHERE id = :windowId AND bake_day_id = :bakeDayId
         AND (orders_remaining IS NULL OR orders_remaining >= 1)
+        AND removed_at IS NULL
       RETURNING id`,
     { replacements: { windowId, bakeDayId }, type: QueryTypes.SELECT, transaction },
   );
@@ -108,7 +109,7 @@ export async function releaseOrder(
  * in one statement that refuses to go below what is already sold or held.
  * False when the day is not there or the new capacity is too low.
  */
-export async function setDayCapacity(bakeDayId: string, rings: number, holes: number): Promise<boolean> {
+export async function setDayCapacity(bakeDayId: string, rings: number, holes: number, transaction?: Transaction): Promise<boolean> {
   const rows = await database().query(
     `UPDATE bake_days
         SET ring_capacity = :rings, rings_remaining = rings_remaining + (:rings - ring_capacity),
@@ -118,7 +119,7 @@ export async function setDayCapacity(bakeDayId: string, rings: number, holes: nu
         AND rings_remaining + (:rings - ring_capacity) >= 0
         AND holes_remaining + (:holes - hole_capacity) >= 0
       RETURNING id`,
-    { replacements: { id: bakeDayId, rings, holes }, type: QueryTypes.SELECT },
+    { replacements: { id: bakeDayId, rings, holes }, type: QueryTypes.SELECT, transaction },
   );
   return rows.length === 1;
 }

@@ -36,6 +36,7 @@ export async function toView(day: BakeDay, now: Date): Promise<BakeDayView> {
     remaining: { rings: day.ringsRemaining, holes: day.holesRemaining },
     capacity: { rings: day.ringCapacity, holes: day.holeCapacity },
     pickupWindows: [...(day.pickupWindows ?? [])]
+      .filter((w) => !w.removedAt)
       .sort((a, b) => a.startsAt.getTime() - b.startsAt.getTime())
       .map((w) => ({ id: w.id, startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(), ordersLeft: w.ordersRemaining })),
     boxes: [...(day.boxes ?? [])]

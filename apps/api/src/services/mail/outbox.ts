@@ -11,6 +11,10 @@ export interface MailInput {
   attachments?: StoredAttachment[];
   /** A key that makes the same mail be queued at most once (e.g. "confirmation:<order id>"). */
   dedupeKey?: string;
+  /** Extra header lines (e.g. List-Unsubscribe, RFC 8058). */
+  headers?: Record<string, string>;
+  /** Not sent before this time: spreads a large mailing out (throttling). */
+  notBefore?: Date;
 }
 
 /**
@@ -32,6 +36,8 @@ export async function enqueueMail(mail: MailInput, transaction: Transaction): Pr
       textBody: mail.text,
       htmlBody: mail.html ?? null,
       attachments: mail.attachments ?? [],
+      headers: mail.headers ?? {},
+      ...(mail.notBefore ? { nextAttemptAt: mail.notBefore } : {}),
     },
     transaction,
   });

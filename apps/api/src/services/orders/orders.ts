@@ -14,6 +14,11 @@ import { claimOffer, offerFreedCapacity } from '../waitlist/waitlist.js';
 import { expireCheckout, openCheckout, refundPayment } from '../../integrations/checkout.js';
 import { logger } from '../../lib/logger.js';
 
+/** Customers may move or cancel until the cut-off, or later when the owner changed their order's window or place. */
+export function changeDeadline(order: Pick<Order, 'changeGraceUntil'>, day: Pick<BakeDay, 'cutoffAt'>): Date {
+  return order.changeGraceUntil && order.changeGraceUntil > day.cutoffAt ? order.changeGraceUntil : day.cutoffAt;
+}
+
 const orderInclude = [
   { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
   { model: PickupWindow, as: 'pickupWindow' },
@@ -45,7 +50,7 @@ export async function toOrderView(order: Order, now: Date): Promise<OrderDetail>
         items: (box.lines ?? []).map((l) => ({ menuItemId: l.menuItemId, name: l.name, quantity: l.quantity, surchargeCents: l.surchargeCents, allergens: l.allergens })),
       })),
     createdAt: order.createdAt.toISOString(),
-    canCancel: ['held', 'paid'].includes(order.status) && now < day.cutoffAt,
+    canCancel: ['held', 'paid'].includes(order.status) && now < changeDeadline(order, day),
     qrDataUrl: paidLike ? await QRCode.toDataURL(order.pickupCode!, { errorCorrectionLevel: 'M', margin: 2, scale: 6 }) : null,
     calendarUrl: paidLike ? `/api/orders/${order.id}/calendar.ics` : null,
   };
@@ -160,7 +165,7 @@ export async function cancelOrder(user: Me, id: string, now: Date): Promise<Orde
   const order = await findOwnOrder(user, id);
   if (order.status === 'cancelled') return toOrderView(order, now);
   if (!['held', 'paid'].includes(order.status)) throw new AppError('not_cancellable', `This order is ${order.status.replace('_', ' ')} and can't be cancelled`, 409);
-  if (now >= order.bakeDay!.cutoffAt) {
+  if (now >= changeDeadline(order, order.bakeDay!)) {
     throw new AppError('too_late', 'Orders can only be cancelled before the cut-off. Please contact the shop.', 409);
   }
   const wasHeld = order.status === 'held';
@@ -189,7 +194,7 @@ export async function moveOrder(user: Me, id: string, pickupWindowId: string, no
     if (!fresh) throw notFound('Order');
     if (!['held', 'paid'].includes(fresh.status)) throw new AppError('not_movable', 'This order can no longer be changed', 409);
     const day = await BakeDay.findByPk(fresh.bakeDayId, { transaction });
-    if (now >= day!.cutoffAt) throw new AppError('too_late', 'Pickup windows can only be changed before the cut-off', 409);
+    if (now >= changeDeadline(fresh, day!)) throw new AppError('too_late', 'Pickup windows can only be changed before the cut-off', 409);
     if (fresh.pickupWindowId === pickupWindowId) return;
     if (!(await takeWindowSlot(fresh.bakeDayId, pickupWindowId, transaction))) {
       const exists = await PickupWindow.findOne({ where: { id: pickupWindowId, bakeDayId: fresh.bakeDayId }, transaction });

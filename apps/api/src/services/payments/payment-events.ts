@@ -11,6 +11,7 @@ import { refundPayment } from '../../integrations/checkout.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
 import { logger } from '../../lib/logger.js';
+import { recordProcessingFee } from './fees.js';
 
 /** Rolls back the savepoint when a late payment's pieces can't all be taken again. */
 class NotRetaken extends Error {}
@@ -68,6 +69,7 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
       await order.reload({ transaction });
     }
   }
+  await recordProcessingFee(order.id, paymentIntentId, transaction);
   await queueConfirmation(order.id, transaction);
   await audit({ actorId: null, action: 'order.paid', subjectType: 'order', subjectId: order.id }, transaction);
 }

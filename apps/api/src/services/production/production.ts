@@ -6,11 +6,11 @@ import {
 import { boxLabel, boxPieces, type FormulaInput, type PlanMeta, type PlanResponse, type ProductionSettingsInput } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { orderCountsByStatus, orderedLines } from '../../db/queries/plan.js';
-import { setDayCapacity } from '../../db/queries/capacity.js';
 import { BakeDay, FormulaVersion, ProductionSettings } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { audit } from '../audit/audit.js';
 import { findBakeDay } from '../bake-days/bake-days.js';
+import { setCapacityKeepingSold } from '../bake-day-edit/capacity.js';
 
 /** Fallback prices (cents per kg) when the owner has entered none: our own round figures. */
 const DEFAULT_PRICES: ProductionSettingsInput['prices'] = { centsPerKg: {}, fryingOilCentsPerKg: 300, oilBakesPerFill: 3 };
@@ -232,11 +232,8 @@ export async function setBakeDayCapacity(userId: string, bakeDayId: string, ring
       derived,
     });
   }
-  const changed = await setDayCapacity(bakeDayId, rings, holes);
-  if (!changed) {
-    if (!(await BakeDay.findByPk(bakeDayId))) throw notFound('Bake day');
-    throw new AppError('below_sold', 'More than that is already sold or held for this day', 409);
-  }
+  if (!(await BakeDay.findByPk(bakeDayId))) throw notFound('Bake day');
+  await setCapacityKeepingSold(bakeDayId, rings, holes);
   await audit({ actorId: userId, action: 'bake_day.capacity', subjectType: 'bake_day', subjectId: bakeDayId, details: { rings, holes } });
   const day = await BakeDay.findByPk(bakeDayId);
   return { rings: day!.ringCapacity, holes: day!.holeCapacity, remaining: { rings: day!.ringsRemaining, holes: day!.holesRemaining }, derived };

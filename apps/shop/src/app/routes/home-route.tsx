@@ -3,6 +3,9 @@ import { listWords } from '@fryline/ui/format';
 import { BakeDayList } from '../../features/bake-days/components/bake-day-list';
 import { AllergenCaution } from '../../components/allergen-caution';
 import { PageTitle } from '../../components/page-title';
+import { useQuery } from '@tanstack/react-query';
+import { NewsSignup } from '../../features/announcements/components/news-signup';
+import { meQueries } from '../../features/auth/api/me-queries';
 
 const steps = [
   { title: 'Pick a bake day', text: 'Choose a date and a pickup window that suits you.' },
@@ -16,6 +19,7 @@ function sentence(text: string): string {
 }
 
 export function HomeRoute() {
+  const me = useQuery(meQueries.current());
   return (
     <div className="flex flex-col gap-10">
       <PageTitle>Bake days</PageTitle>
@@ -57,6 +61,9 @@ export function HomeRoute() {
           ))}
         </ol>
       </section>
+
+      {/* keyed so a sign-in that arrives after the first paint fills the address in */}
+      <NewsSignup key={me.data?.email ?? ''} defaultEmail={me.data?.email ?? ''} />
 
       <AllergenCaution />
     </div>

@@ -9,6 +9,10 @@ import { EquipmentPage } from '../../features/equipment/components/equipment-pag
 import { FormulaPage } from '../../features/formula/components/formula-page';
 import { ProductionPage } from '../../features/production/components/production-page';
 import { StaffPage } from '../../features/staff-members/components/staff-page';
+import { lazyPage } from '../../lib/lazy-page';
+
+// The charting library loads only with this page.
+const SalesPage = lazyPage(() => import('../../features/sales/components/sales-page'), 'Loading the sales page…');
 import { CounterPage } from '../../features/counter/components/counter-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
@@ -19,6 +23,7 @@ const builtPages: Record<string, ReactNode> = {
   formula: <FormulaPage />,
   equipment: <EquipmentPage />,
   staff: <StaffPage />,
+  sales: <SalesPage />,
 };
 
 export function SectionRoute({ section }: { section: StaffSection }) {

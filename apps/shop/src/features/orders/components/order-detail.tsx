@@ -167,13 +167,21 @@ export function OrderDetail({ id, renderMove }: OrderDetailProps) {
         )}
       </div>
 
+      {data.status === 'paid' && params.get('changed') === '1' && (
+        <Notice>
+          <p className="font-extrabold">We changed your pickup.</p>
+          <p>The e-mail we sent says what changed. If it no longer suits you, move to another window or cancel for a full refund below.</p>
+        </Notice>
+      )}
+
       {data.status === 'paid' && <PickupPass order={data} />}
 
       <OrderBoxes order={data} />
 
       {data.status === 'paid' && (
         <div className="flex flex-col gap-4">
-          {Date.now() < Date.parse(data.bakeDay.cutoffAt) && renderMove?.(data)}
+          {/* canCancel: before the cut-off, or later when the shop changed this order's pickup */}
+          {data.canCancel && renderMove?.(data)}
           {data.canCancel && (
             <div className="card flex flex-col items-start gap-2">
               <h2 className="text-lg">Plans changed?</h2>

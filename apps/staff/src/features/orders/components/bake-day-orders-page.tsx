@@ -86,6 +86,13 @@ export function BakeDayOrdersPage({ bakeDayId, canRefund }: BakeDayOrdersPagePro
       intro={`Every pre-order for this bake day, by pickup window. Times are in ${timeZone.replace(/_/g, ' ')} time.`}
     >
       <BackLink />
+      {canRefund && (
+        <p>
+          <Link to={`/bake-days/${bakeDayId}/edit`} className="btn btn-quiet btn-small">
+            Change or call off this bake day
+          </Link>
+        </p>
+      )}
       {notice && (
         <p ref={noticeRef} tabIndex={-1} role="status" className="notice notice-ok flex items-start justify-between gap-3">
           <span>{notice}</span>

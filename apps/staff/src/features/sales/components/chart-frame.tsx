@@ -1,0 +1,44 @@
+import type { ReactNode } from 'react';
+
+/** The palette of the charts: the theme's plum, sugar, sage and brick (SVG fills can't read CSS variables). */
+export const chartColors = { now: '#56305f', before: '#e5a85e', sold: '#3b6642', capacity: '#e2d2b8', bad: '#a1352a' };
+
+/**
+ * A chart with the table that says the same beside it (below it on a
+ * phone): the picture for a quick look, the numbers for reading out.
+ */
+export function ChartFrame({ id, title, intro, chart, table }: { id: string; title: string; intro?: ReactNode; chart: ReactNode; table: ReactNode }) {
+  return (
+    <section className="card flex flex-col gap-3" aria-labelledby={id}>
+      <h2 id={id} className="text-xl">
+        {title}
+      </h2>
+      {intro && <p className="text-muted">{intro}</p>}
+      <div className="grid items-start gap-4 lg:grid-cols-2">
+        <div aria-hidden="true" className="h-64 min-w-0">
+          {chart}
+        </div>
+        <div className="overflow-x-auto">{table}</div>
+      </div>
+    </section>
+  );
+}
+
+export function Th({ children, num }: { children: ReactNode; num?: boolean }) {
+  return (
+    <th scope="col" className={`border-b border-line px-2 py-1 text-sm text-muted ${num ? 'text-right' : 'text-left'}`}>
+      {children}
+    </th>
+  );
+}
+
+export function Td({ children, num, head }: { children: ReactNode; num?: boolean; head?: boolean }) {
+  const className = `border-b border-line px-2 py-1 ${num ? 'text-right tabular-nums' : 'text-left'}`;
+  return head ? (
+    <th scope="row" className={`${className} font-semibold`}>
+      {children}
+    </th>
+  ) : (
+    <td className={className}>{children}</td>
+  );
+}
