@@ -87,7 +87,8 @@ module.exports = {
       comment: 'Every import resolves to a file (a missing file or a wrong package export fails here before it fails at run time).',
       severity: 'error',
       from: {},
-      to: { couldNotResolve: true },
+      // Vite plugins' virtual modules (virtual:pwa-register) exist only inside the build
+      to: { couldNotResolve: true, pathNot: '^virtual:' },
     },
   ],
   options: {

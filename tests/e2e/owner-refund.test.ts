@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, chooseAccount } from '../support/browser.js';
+import { openBrowser, chooseAccount, payWithTestCard } from '../support/browser.js';
 
 const { appUrl } = inject('stack');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -27,12 +27,7 @@ describe('the owner refunds part of an order, then the rest', () => {
         data: { bakeDayId: day.id, pickupWindowId: day.pickupWindows[2]!.id, boxes: [{ size: 'half-dozen', items: [{ menuItemId: ring.id, quantity: 6 }] }] },
       })
     ).json()) as { id: string; checkoutUrl: string; totalCents: number };
-    await page.goto(created.checkoutUrl);
-    await page.getByLabel(/card number/i).fill('4242 4242 4242 4242');
-    await page.getByLabel(/expiry/i).fill('12/34');
-    await page.getByLabel(/security code/i).fill('123');
-    await page.getByRole('button', { name: /^pay/i }).click();
-    await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+    await payWithTestCard(page, created.checkoutUrl);
     ({ page } = await browser.fresh()); // a new person: their own cookies
 
     // the owner finds it and refunds $5.00, then the rest

@@ -7,7 +7,7 @@ const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
  * new browser context (its own cookies), so one person's late responses can
  * never sign the next person in.
  */
-export async function openBrowser(viewport = { width: 390, height: 844 }): Promise<{
+export async function openBrowser(viewport = { width: 390, height: 844 }, extraArgs: string[] = []): Promise<{
   page: Page;
   context: BrowserContext;
   fresh(): Promise<{ page: Page; context: BrowserContext }>;
@@ -16,7 +16,7 @@ export async function openBrowser(viewport = { width: 390, height: 844 }): Promi
   const browser: Browser = await chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync', ...extraArgs],
   });
   const fresh = async () => {
     const context = await browser.newContext({ viewport });
@@ -42,3 +42,13 @@ export async function chooseAccount(page: Page, email: string) {
   }
 }
 
+
+/** Pays a checkout on the payments stand-in's page with the test card that succeeds (4242 4242 4242 4242, Stripe's testing docs) and waits for the order page. */
+export async function payWithTestCard(page: Page, checkoutUrl: string) {
+  await page.goto(checkoutUrl);
+  await page.getByLabel(/card number/i).fill('4242 4242 4242 4242');
+  await page.getByLabel(/expiry/i).fill('12/34');
+  await page.getByLabel(/security code/i).fill('123');
+  await page.getByRole('button', { name: /^pay/i }).click();
+  await page.getByText(/your pickup code/i).waitFor({ timeout: 30_000 });
+}

@@ -35,6 +35,7 @@ import { checkResponsesAgainstContract } from './lib/route.js';
 import { bakeDayEditRouter } from './routes/bake-day-edit.js';
 import { announcementsRouter, unsubscribeRouter } from './routes/announcements.js';
 import { reportsRouter } from './routes/reports.js';
+import { counterRouter } from './routes/counter.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
 
@@ -185,6 +186,7 @@ export function createApp(config: Config) {
   app.use(reportsRouter);
   app.use(shopSettingsRouter);
   app.use(auditLogRouter);
+  app.use(counterRouter);
 
   app.use(['/api', '/auth', '/webhooks'], notFoundHandler);
 

@@ -17,3 +17,4 @@ export * from './line.js';
 export * from './defaults.js';
 export { formatInstant, instantFormatter, parseInstant, readLocalTime, requireTimeZone, type LocalTimeReading } from './time.js';
 export * from './sales.js';
+export * from './surplus.js';

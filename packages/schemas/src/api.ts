@@ -13,6 +13,10 @@ import {
   bakeDayEditResultSchema, bakeDayEditViewSchema, callOffSchema, callOffStartedSchema, confirmedSchema, editBakeDaySchema, jobViewSchema, subscribeSchema,
   subscribedSchema, tokenSchema, unsubscribedSchema, weekQuerySchema, weeklyReportSchema,
 } from './owner-ops.js';
+import {
+  counterActionSchema, counterSettingsSchema, endOfDaySchema, markRestNoShowResultSchema, markRestNoShowSchema, orderByCodeSchema, pickupRowSchema, surplusSchema,
+  walkUpSaleSchema, walkUpSaleViewSchema,
+} from './counter.js';
 import { changeRoleSchema, createBakeDaySchema, menuItemAdminViewSchema, staffMemberInputSchema, staffMemberViewSchema } from './setup.js';
 import { menuItemInputSchema, menuItemPatchSchema, menuPhotoViewSchema } from './menu.js';
 import { publicShopViewSchema, shopSettingsInputSchema, shopSettingsViewSchema } from './shop-settings.js';
@@ -155,6 +159,19 @@ export const api = {
   // the week's sales (owner); the CSV (RFC 4180) is text, not JSON
   weeklySales: endpoint({ method: 'get', path: '/api/reports/weekly', query: weekQuerySchema, response: weeklyReportSchema }),
   weeklySalesCsv: endpoint({ method: 'get', path: '/api/reports/weekly.csv', query: weekQuerySchema, response: z.string() }),
+  // the counter on bake day (counter and up); changes take an optional Idempotency-Key
+  listPickups: endpoint({ method: 'get', path: '/api/bake-days/:id/pickups', params: bakeDayParams, response: z.array(pickupRowSchema) }),
+  getSurplus: endpoint({ method: 'get', path: '/api/bake-days/:id/surplus', params: bakeDayParams, response: surplusSchema }),
+  sellWalkUp: endpoint({ method: 'post', path: '/api/bake-days/:id/walk-ups', params: bakeDayParams, body: walkUpSaleSchema, response: walkUpSaleViewSchema, status: 201 }),
+  markRestNoShow: endpoint({ method: 'post', path: '/api/bake-days/:id/no-shows', params: bakeDayParams, body: markRestNoShowSchema, response: markRestNoShowResultSchema }),
+  getEndOfDay: endpoint({ method: 'get', path: '/api/bake-days/:id/end-of-day', params: bakeDayParams, response: endOfDaySchema }),
+  findOrderByCode: endpoint({ method: 'get', path: '/api/orders/by-code/:code', params: z.object({ code: z.string().trim().min(1).max(40) }), response: orderByCodeSchema }),
+  collectOrder: endpoint({ method: 'post', path: '/api/orders/:id/collect', params: orderParams, body: counterActionSchema, response: pickupRowSchema }),
+  uncollectOrder: endpoint({ method: 'post', path: '/api/orders/:id/uncollect', params: orderParams, body: counterActionSchema, response: pickupRowSchema }),
+  markNoShow: endpoint({ method: 'post', path: '/api/orders/:id/no-show', params: orderParams, body: counterActionSchema, response: pickupRowSchema }),
+  reverseNoShow: endpoint({ method: 'post', path: '/api/orders/:id/reverse-no-show', params: orderParams, body: counterActionSchema, response: pickupRowSchema }),
+  getCounterSettings: endpoint({ method: 'get', path: '/api/counter/settings', response: counterSettingsSchema }),
+  saveCounterSettings: endpoint({ method: 'put', path: '/api/counter/settings', body: counterSettingsSchema, response: counterSettingsSchema }),
 
   // the payments provider's webhook: a raw, signed body
   paymentsWebhook: endpoint({

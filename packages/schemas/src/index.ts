@@ -15,3 +15,4 @@ export * from './audit-log.js';
 export * from './api.js';
 export * from './shop-rules.js';
 export * from './owner-ops.js';
+export * from './counter.js';

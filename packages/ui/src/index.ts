@@ -6,7 +6,7 @@ export { Caution } from './caution';
 export { ConfirmDialog } from './confirm-dialog';
 export { FieldShell, fieldAria, type FieldInputProps } from './field-shell';
 export { ModalDialog } from './modal-dialog';
-export { mountApp, QueryProvider } from './mount';
+export { createQueryClient, mountApp, QueryProvider } from './mount';
 export { PageErrorBoundary } from './page-error-boundary';
 export { SignOutButton } from './sign-out-button';
 export { ErrorState, LoadingState, Notice } from './status';

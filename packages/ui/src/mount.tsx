@@ -11,13 +11,17 @@ export function mountApp(app: ReactNode): void {
 }
 
 /**
- * One TanStack Query client for the app's lifetime: queries count as fresh
- * for `staleTime` ms and are retried only for trouble on the way
- * (`shouldRetry`); mutations are never retried.
+ * The apps' TanStack Query client: queries count as fresh for `staleTime` ms
+ * and are retried only for trouble on the way (`shouldRetry`); mutations are
+ * never retried unless their own defaults say so. `gcTime` keeps unused
+ * answers in memory longer (an app that keeps its cache on the device).
  */
+export function createQueryClient(staleTime: number, gcTime?: number): QueryClient {
+  return new QueryClient({ defaultOptions: { queries: { staleTime, retry: shouldRetry, ...(gcTime ? { gcTime } : {}) }, mutations: { retry: false } } });
+}
+
+/** One query client for the app's lifetime (see createQueryClient). */
 export function QueryProvider({ staleTime, children }: { staleTime: number; children: ReactNode }) {
-  const [queryClient] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { staleTime, retry: shouldRetry }, mutations: { retry: false } } }),
-  );
+  const [queryClient] = useState(() => createQueryClient(staleTime));
   return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
 }

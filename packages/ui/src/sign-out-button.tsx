@@ -4,11 +4,17 @@ import { api } from './api-client';
 
 /**
  * Ends the session, then leaves for the shop's front page (a full page load,
- * so nothing cached for this person stays in memory). `children` adds to the
- * button's name, e.g. a screen-reader-only "(Sam)".
+ * so nothing cached for this person stays in memory; `forget` clears what an
+ * app keeps on the device before that). `children` adds to the button's
+ * name, e.g. a screen-reader-only "(Sam)".
  */
-export function SignOutButton({ onError, children }: { onError: (error: unknown) => void; children?: ReactNode }) {
-  const signOut = useMutation({ mutationFn: () => api.post<void>('/auth/logout') });
+export function SignOutButton({ onError, forget, children }: { onError: (error: unknown) => void; forget?: () => Promise<void>; children?: ReactNode }) {
+  const signOut = useMutation({
+    mutationFn: async () => {
+      await api.post<void>('/auth/logout');
+      await forget?.();
+    },
+  });
   return (
     <button
       type="button"

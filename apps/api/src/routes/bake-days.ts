@@ -5,8 +5,14 @@ import { route } from '../lib/route.js';
 import { getBakeDay, listUpcoming } from '../services/bake-days/bake-days.js';
 import { planForBakeDay, pinFormula, setBakeDayCapacity } from '../services/production/production.js';
 import { joinWaitlist } from '../services/waitlist/waitlist.js';
+import { listPickups } from '../services/counter/pickups.js';
+import { getSurplus } from '../services/counter/surplus.js';
+import { sellWalkUp } from '../services/counter/walk-ups.js';
+import { markRestNoShow } from '../services/counter/hand-over.js';
+import { endOfDay } from '../services/counter/end-of-day.js';
+import { idempotencyKey } from '../services/counter/idempotency.js';
 
-/** /api/bake-days: the days customers see, their waiting lists, and each day's production sheet and capacity. */
+/** /api/bake-days: the days customers see, their waiting lists, each day's production sheet and capacity, and the counter's bake day. */
 export const bakeDaysRouter = Router();
 
 route(bakeDaysRouter, api.listBakeDays, [], ({ now }) => listUpcoming(now));
@@ -25,3 +31,16 @@ route(bakeDaysRouter, api.pinFormula, [requireRole('baker')], async ({ req, para
 route(bakeDaysRouter, api.setCapacity, [requireRole('owner')], ({ req, params, body }) =>
   setBakeDayCapacity(currentUser(req).id, params.id, body.rings, body.holes, body.acceptAboveEquipment),
 );
+
+// the counter on bake day
+const counter = [requireRole('counter')];
+
+route(bakeDaysRouter, api.listPickups, counter, ({ params, now }) => listPickups(params.id, now), { noStore: true });
+
+route(bakeDaysRouter, api.getSurplus, counter, ({ params, now }) => getSurplus(params.id, now), { noStore: true });
+
+route(bakeDaysRouter, api.sellWalkUp, counter, ({ req, params, body, now }) => sellWalkUp(currentUser(req), params.id, body, idempotencyKey(req), now));
+
+route(bakeDaysRouter, api.markRestNoShow, counter, ({ req, params, body, now }) => markRestNoShow(currentUser(req), params.id, body.windowId ?? null, idempotencyKey(req), now));
+
+route(bakeDaysRouter, api.getEndOfDay, counter, ({ params, now }) => endOfDay(params.id, now), { noStore: true });

@@ -30,14 +30,15 @@ export function StaffGate({ children }: { children: ReactNode }) {
       </main>
     );
   }
-  if (me.isError) {
+  // a failed refresh with an answer already known (kept on the phone while offline) keeps the app open
+  if (me.isError && me.data === undefined) {
     return (
       <main className="mx-auto flex min-h-dvh max-w-md items-center px-4">
         <ErrorState error={me.error} title="Fryline could not be reached" onRetry={() => void me.refetch()} />
       </main>
     );
   }
-  if (me.data === null) return <SignInScreen />;
+  if (me.data === null || me.data === undefined) return <SignInScreen />;
   if (!isStaff(me.data)) return <p role="status">Taking you to the shop…</p>;
   return <StaffMemberProvider member={me.data}>{children}</StaffMemberProvider>;
 }

@@ -7,12 +7,14 @@ import type { QueryInterface } from 'sequelize';
 export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.sequelize.query(`
     ALTER TABLE shop_settings
-      ADD COLUMN no_show_grace_minutes integer NOT NULL DEFAULT 30 CHECK (no_show_grace_minutes BETWEEN 0 AND 1440);
+      ADD COLUMN no_show_grace_minutes integer NOT NULL DEFAULT 30 CHECK (no_show_grace_minutes BETWEEN 0 AND 1440),
+      ADD COLUMN hand_over_undo_seconds integer NOT NULL DEFAULT 15 CHECK (hand_over_undo_seconds BETWEEN 5 AND 600);
 
     ALTER TABLE orders
       ADD COLUMN collected_by uuid REFERENCES users(id) ON DELETE SET NULL,
       ADD COLUMN no_show_at timestamptz,
       ADD COLUMN no_show_by uuid REFERENCES users(id) ON DELETE SET NULL;
+    CREATE INDEX orders_day_window ON orders (bake_day_id, pickup_window_id) WHERE status IN ('paid', 'collected', 'no_show');
 
     -- what the plan made of each menu item for a bake day, minus walk-ups sold
     -- (paid pre-orders are subtracted when the row is first made)
@@ -61,6 +63,7 @@ export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.sequelize.query(`
     DROP TABLE IF EXISTS counter_requests, walk_up_sale_items, walk_up_sales, bake_day_surplus;
     ALTER TABLE orders DROP COLUMN IF EXISTS collected_by, DROP COLUMN IF EXISTS no_show_at, DROP COLUMN IF EXISTS no_show_by;
-    ALTER TABLE shop_settings DROP COLUMN IF EXISTS no_show_grace_minutes;
+    DROP INDEX IF EXISTS orders_day_window;
+    ALTER TABLE shop_settings DROP COLUMN IF EXISTS no_show_grace_minutes, DROP COLUMN IF EXISTS hand_over_undo_seconds;
   `);
 };

@@ -30,6 +30,9 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare source: CreationOptional<'online' | 'walk-up'>;
   declare paidAt: CreationOptional<Date | null>;
   declare collectedAt: CreationOptional<Date | null>;
+  declare collectedBy: CreationOptional<string | null>;
+  declare noShowAt: CreationOptional<Date | null>;
+  declare noShowBy: CreationOptional<string | null>;
   declare cancelledAt: CreationOptional<Date | null>;
   /** After the owner changed this order's window or place: move or cancel with a full refund until then. */
   declare changeGraceUntil: CreationOptional<Date | null>;
@@ -64,6 +67,9 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         source: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'online' },
         paidAt: { type: DataTypes.DATE, allowNull: true },
         collectedAt: { type: DataTypes.DATE, allowNull: true },
+        collectedBy: { type: DataTypes.UUID, allowNull: true },
+        noShowAt: { type: DataTypes.DATE, allowNull: true },
+        noShowBy: { type: DataTypes.UUID, allowNull: true },
         cancelledAt: { type: DataTypes.DATE, allowNull: true },
         changeGraceUntil: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,

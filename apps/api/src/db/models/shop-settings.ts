@@ -13,6 +13,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare noShowGraceMinutes: CreationOptional<number>;
   declare refundPolicy: CreationOptional<string>;
   declare updatedBy: CreationOptional<string | null>;
+  /** How long a hand-over can be undone. */
+  declare handOverUndoSeconds: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +32,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         noShowGraceMinutes: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 30 },
         refundPolicy: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         updatedBy: { type: DataTypes.UUID, allowNull: true },
+        handOverUndoSeconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 15 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -5,6 +5,7 @@ import { roleNames, sections } from '../../config/sections';
 import { useStaffMember } from '../session/staff-member';
 import { SignOutButton } from '../session/sign-out-button';
 import { isBuilt } from '../routes/section-route';
+import { WaitingToSend } from '../../features/counter/components/waiting-to-send';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `block whitespace-nowrap rounded-full px-2.5 py-1.5 text-[0.95rem] font-extrabold no-underline sm:px-3 sm:text-base ${
@@ -22,6 +23,7 @@ export function StaffHeader() {
           Fryline <span className="font-semibold text-muted">staff</span>
         </BrandLink>
         <div className="ml-auto flex min-w-0 items-center gap-2 sm:gap-3">
+          <WaitingToSend />
           <span className="max-w-[10rem] min-w-0 truncate text-right text-sm leading-tight font-semibold sm:max-w-[14rem] sm:text-base">
             {member.name}
           </span>

@@ -16,9 +16,11 @@ const SalesPage = lazyPage(() => import('../../features/sales/components/sales-p
 import { MenuPage } from '../../features/menu/components/menu-page';
 import { ShopSettingsPage } from '../../features/shop-settings/components/shop-settings-page';
 import { AuditLogPage } from '../../features/audit-log/components/audit-log-page';
+import { CounterPage } from '../../features/counter/components/counter-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
+  pickups: <CounterPage />,
   'bake-days': <BakeDaysPage />,
   production: <ProductionPage />,
   formula: <FormulaPage />,
