@@ -138,6 +138,9 @@ describe(`fuzz: ${RUNS} hostile requests per JSON route of the contract`, () => 
       );
       const before = await fingerprint();
       const wrong: string[] = [];
+      // A read whose query is all optional may drop keys the parser refuses
+      // (`__proto__`, empty names): then it must answer exactly as with no query at all.
+      const plain = endpoint.method === 'get' && paramNames.length === 0 ? await (await owner.fetch(endpoint.path)).text() : undefined;
       await pool(cases, 16, async ({ params, query, body }) => {
         let i = 0;
         const path = endpoint.path.replace(/:([A-Za-z]+)/g, () => encodeLoose(params[i++]!));
@@ -147,6 +150,7 @@ describe(`fuzz: ${RUNS} hostile requests per JSON route of the contract`, () => 
           body,
         });
         const text = await res.text();
+        if (res.status === 200 && plain !== undefined && text === plain) return;
         if (res.status < 400 || res.status >= 500) wrong.push(`${res.status} for ${path}?${query.slice(0, 200)} body ${String(body).slice(0, 300)} → ${text.slice(0, 300)}`);
       });
       expect(wrong.slice(0, 5), `${wrong.length} of ${cases.length} requests answered outside 4xx`).toEqual([]);

@@ -39,7 +39,7 @@ describe('shop settings', () => {
     expect(Object.keys(changes).sort()).toEqual(['holdMinutes', 'noShowGraceMinutes', 'refundPolicy', 'tax', 'timeZone']);
     expect(changes.noShowGraceMinutes).toEqual({ from: 30, to: 20 });
     const shop = (await (await fetch(`${stack.url}/api/shop`)).json()) as any;
-    expect(shop).toEqual({ shopName: settings.shopName, currency: 'usd', timeZone: 'America/Chicago', refundPolicy: settings.refundPolicy, holdMinutes: 15 });
+    expect(shop).toEqual({ name: settings.shopName, logoUrl: null, shopName: settings.shopName, currency: 'usd', timeZone: 'America/Chicago', refundPolicy: settings.refundPolicy, holdMinutes: 15 });
     // the bake days show customers the new tax
     const days = (await (await fetch(`${stack.url}/api/bake-days`)).json()) as any[];
     expect(days[0].tax).toEqual({ mode: 'added', rateBasisPoints: 825 });
