@@ -20,7 +20,7 @@ const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/
 const shotsDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../test-results/screens');
 const widths = { phone: { width: 390, height: 844 }, desktop: { width: 1280, height: 900 } } as const;
 
-type Who = 'customer' | 'baker' | 'owner';
+type Who = 'customer' | 'counter' | 'baker' | 'owner';
 interface Fixture {
   openDayId: string;
   soldOutDayId: string;
@@ -46,7 +46,24 @@ export const screens: Screen[] = [
   { name: 'waitlist', who: 'customer', path: (f) => `/days/${f.soldOutDayId}`, ready: /waitlist/i },
   { name: 'formula-editor', who: 'baker', path: () => '/staff/formula', ready: /formula/i },
   { name: 'staff-order-list', who: 'owner', path: (f) => `/staff/bake-days/${f.openDayId}`, ready: /^orders for /i },
+  { name: 'pickup-list', who: 'counter', path: (f) => `/staff/pickups?day=${f.openDayId}`, ready: /^pickups · /i, then: shown('window-totals') },
+  { name: 'walk-up-sale', who: 'counter', path: (f) => `/staff/pickups?day=${f.openDayId}&view=walk-up`, ready: /^paid by$/i },
+  { name: 'end-of-day', who: 'counter', path: (f) => `/staff/pickups?day=${f.openDayId}&view=end-of-day`, ready: /^cash to count in the box$/i },
+  { name: 'menu-list', who: 'owner', path: () => '/staff/menu', ready: /^rings$/i },
+  { name: 'menu-item-form', who: 'owner', path: () => '/staff/menu/new', ready: /^allergens$/i },
+  { name: 'shop-settings', who: 'owner', path: () => '/staff/settings', ready: /^money and tax$/i },
+  { name: 'audit-log', who: 'owner', path: () => '/staff/audit-log', ready: /^(no changes match|\d+ changes?)/i },
+  { name: 'weekly-sales', who: 'owner', path: () => '/staff/sales', ready: /^walk-up sales$/i },
+  { name: 'bake-day-edit', who: 'owner', path: (f) => `/staff/bake-days/${f.openDayId}/edit`, ready: /^change (?!a bake day)/i },
+  { name: 'production-sheet', who: 'baker', path: (f) => `/staff/production?day=${f.openDayId}`, ready: /^production sheet — /i },
 ];
+
+/** Waits for the first element with this test id (for screens whose heading shows before their data). */
+function shown(testId: string) {
+  return async (page: Page) => {
+    await page.getByTestId(testId).first().waitFor();
+  };
+}
 
 async function fillAndReview(page: Page) {
   // the half-built box is kept while the customer moves around: a second visit opens on the review
@@ -111,6 +128,8 @@ async function signedIn(who: Who): Promise<Page> {
   const signIn = who === 'customer' ? /^sign in$/i : /sign in/i;
   await page.getByRole('link', { name: signIn }).or(page.getByRole('button', { name: signIn })).first().click();
   await chooseAccount(page, who === 'customer' ? 'screens.customer@example.test' : `${who}@fryline.test`);
+  // the sign-in redirects can outlast a quiet network: wait until the staff app shows who is signed in
+  if (who !== 'customer') await page.getByRole('button', { name: /sign out/i }).waitFor();
   await page.waitForLoadState('networkidle');
   pages.set(who, page);
   return page;
@@ -177,6 +196,27 @@ describe('every screen: no serious or critical WCAG 2.1 AA violation (axe-core),
       }
     });
   }
+});
+
+describe('printed production sheet', () => {
+  it('prints without the page controls, saved as a PDF beside the screenshots', async () => {
+    const page = await signedIn('baker');
+    await page.setViewportSize(widths.desktop);
+    await page.goto(`${appUrl}/staff/production?day=${fixture.openDayId}`);
+    await page.getByRole('heading', { name: /^production sheet — /i }).waitFor();
+    await page.waitForLoadState('networkidle');
+    const print = page.getByRole('button', { name: /^print$/i });
+    await expect.poll(() => print.isVisible()).toBe(true);
+    await page.emulateMedia({ media: 'print' });
+    try {
+      await expect.poll(() => print.isVisible(), { message: 'the Print button is left off paper' }).toBe(false);
+      const pdf = await page.pdf({ path: path.join(shotsDir, 'production-sheet.pdf'), printBackground: true });
+      // every PDF file opens with the "%PDF-" header (ISO 32000-1, 7.5.2)
+      expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    } finally {
+      await page.emulateMedia({ media: null });
+    }
+  });
 });
 
 describe('keyboard only', () => {

@@ -80,7 +80,8 @@ export function AuditLogPage() {
             <span className="text-base font-semibold text-muted"> · times in {log.data.timeZone}</span>
           </h2>
           {log.data.entries.length > 0 && (
-            <div className="card overflow-x-auto p-0">
+            // scrolls sideways on a phone, so it takes the focus for the arrow keys
+            <div className="card overflow-x-auto p-0" tabIndex={0} role="region" aria-labelledby="log-heading">
               <table className="w-full text-left text-sm">
                 <thead className="border-b border-line bg-crumb">
                   <tr>

@@ -15,10 +15,14 @@ export function ChartFrame({ id, title, intro, chart, table }: { id: string; tit
       </h2>
       {intro && <p className="text-muted">{intro}</p>}
       <div className="grid items-start gap-4 lg:grid-cols-2">
+        {/* the charts are drawn with accessibilityLayer={false}, so nothing hidden here takes the focus */}
         <div aria-hidden="true" className="h-64 min-w-0">
           {chart}
         </div>
-        <div className="overflow-x-auto">{table}</div>
+        {/* a table wider than a phone scrolls sideways, so the keyboard can reach it too */}
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label={`${title}: the numbers`}>
+          {table}
+        </div>
       </div>
     </section>
   );

@@ -15,7 +15,7 @@ export function ItemsSection({ week }: { week: WeeklyFigures }) {
           <p className="text-muted">Nothing sold this week.</p>
         ) : (
           <ResponsiveContainer width="100%" height="100%">
-            <BarChart data={data} layout="vertical" margin={{ left: 8, right: 16 }}>
+            <BarChart accessibilityLayer={false} data={data} layout="vertical" margin={{ left: 8, right: 16 }}>
               <CartesianGrid strokeDasharray="3 3" horizontal={false} />
               <XAxis type="number" allowDecimals={false} />
               <YAxis type="category" dataKey="name" width={130} tick={{ fontSize: 12 }} />

@@ -27,7 +27,7 @@ export function MoneySection({ week, previous }: { week: WeeklyFigures; previous
       intro="Gross is pre-orders paid this week plus walk-up sales; refunds are those made this week; card fees are what the card processor kept. Net = gross − refunds − fees; margin = net − ingredients."
       chart={
         <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={data} margin={{ left: 8, right: 8 }}>
+          <BarChart accessibilityLayer={false} data={data} margin={{ left: 8, right: 8 }}>
             <CartesianGrid strokeDasharray="3 3" vertical={false} />
             <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} />
             <YAxis tickFormatter={(v: number) => `$${v}`} width={56} />

@@ -17,7 +17,7 @@ export function SellThroughSection({ week }: { week: WeeklyFigures }) {
           <p className="text-muted">No bake day this week.</p>
         ) : (
           <ResponsiveContainer width="100%" height="100%">
-            <BarChart data={data} margin={{ left: 8, right: 8 }}>
+            <BarChart accessibilityLayer={false} data={data} margin={{ left: 8, right: 8 }}>
               <CartesianGrid strokeDasharray="3 3" vertical={false} />
               <XAxis dataKey="day" />
               <YAxis allowDecimals={false} />
