@@ -43,6 +43,10 @@ export default async function setup(project: TestProject) {
     STRIPE_SECRET_KEY: 'sk_test_e2e',
     STRIPE_WEBHOOK_SECRET: 'whsec_e2e',
     SMTP_PORT: String(mail.smtpPort),
+    // Every journey signs in from 127.0.0.1, several times each: the per-address
+    // sign-in limit (tested on its own in apps/api) would answer 429 part-way
+    // through the run.
+    RATE_LIMIT_SIGNIN: '100000',
   });
   const app = createApp(config);
   server.on('request', app);
