@@ -169,18 +169,21 @@ export async function customerAndOwner(stack: Stack): Promise<{ customer: Browse
  * scenario loaded. Returns the stack through a proxy, usable once the
  * file's beforeAll has run.
  */
-export function useStack(opts: { demo?: boolean; env?: Record<string, string> } = {}): Stack {
+export function useStack(opts: { demo?: boolean; env?: Record<string, string>; fresh?: 'each' | 'once' } = {}): Stack {
   let current: Stack | null = null;
-  beforeAll(async () => {
-    current = await startStack(opts.env);
-  });
-  afterAll(async () => current?.close());
-  beforeEach(async () => {
+  const fresh = async () => {
     await resetData();
     current!.payments.reset();
     current!.mail.clear();
     if (opts.demo !== false) await seedDemo(new Date());
+  };
+  beforeAll(async () => {
+    current = await startStack(opts.env);
+    if (opts.fresh === 'once') await fresh();
   });
+  afterAll(async () => current?.close());
+  // 'once' is for files whose tests write nothing (and assert so)
+  if (opts.fresh !== 'once') beforeEach(fresh);
   return new Proxy({} as Stack, {
     get(_target, key) {
       if (!current) throw new Error('the stack starts in beforeAll');
