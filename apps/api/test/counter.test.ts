@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { seedCounterDay, type SeededCounterDay } from '@fryline/seeds';
 import { database } from '../src/db/sequelize.js';
 import { Browser, signIn, useStack } from './support.js';
-import { halfDozen, openDay, orderAndPay } from './order-helpers.js';
+import { CARD_OK, halfDozen, openDay, orderAndPay, sessionIdOf } from './order-helpers.js';
 
 const stack = useStack();
 
@@ -201,6 +201,51 @@ describe('walk-up sales of the surplus', () => {
     const audit = await sql<{ actor_id: string; created_at: Date }>("SELECT actor_id, created_at FROM audit_log WHERE action = 'walk_up.sold'");
     expect(audit).toHaveLength(1);
     expect(audit[0]!.actor_id).toBe(await userId('counter@fryline.test'));
+  });
+});
+
+describe('the surplus follows the paid orders after the counter first reads it', () => {
+  it('a fully refunded order gives its pieces back; an order held then and paid later takes its own; made − pre-ordered − sold = left throughout', async () => {
+    const day = await openDay(stack);
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'surplus.customer@example.test');
+    const owner = new Browser(stack.url);
+    await signIn(owner, 'owner@fryline.test');
+    const counter = new Browser(stack.url);
+    await signIn(counter, 'counter@fryline.test');
+    const { order: first } = await orderAndPay(stack, customer, halfDozen(day, 0));
+    // held when the counter first reads the surplus: the plan made its pieces, so they count as left until it is paid
+    const held = await customer.send('POST', '/api/orders', halfDozen(day, 0));
+    expect(held.status).toBe(201);
+    const surplus = async () => (await counter.getJson(`/api/bake-days/${day.id}/surplus`)).body;
+    const itemOf = (s: any) => s.items.find((i: any) => i.menuItemId === halfDozen(day, 0).boxes[0]!.items[0]!.menuItemId);
+    const balanced = (s: any) => {
+      for (const i of s.items) expect(i.left).toBe(i.made - i.preOrdered - i.sold);
+    };
+    const atStart = await surplus();
+    balanced(atStart);
+    expect(itemOf(atStart).preOrdered).toBe(6);
+
+    stack.payments.paySession(sessionIdOf(held.body.checkoutUrl), CARD_OK);
+    await stack.payments.webhooksIdle();
+    const second = held.body;
+    const afterSecond = await surplus();
+    balanced(afterSecond);
+    expect(itemOf(afterSecond).left).toBe(itemOf(atStart).left - 6);
+
+    const refunded = await owner.send('POST', `/api/staff/orders/${first.id}/refunds`, { amountCents: first.totalCents, reason: 'customer is ill' }, { 'idempotency-key': 'surplus-refund-0001' });
+    expect(refunded.status).toBe(201);
+    await stack.payments.webhooksIdle();
+    const afterRefund = await surplus();
+    balanced(afterRefund);
+    expect(itemOf(afterRefund).left).toBe(itemOf(afterSecond).left + 6);
+
+    // a handed-over order that is refunded afterwards gave its pieces away: nothing comes back
+    expect((await counter.send('POST', `/api/orders/${second.id}/collect`, { bakeDayId: day.id })).status).toBe(200);
+    const refundedLater = await owner.send('POST', `/api/staff/orders/${second.id}/refunds`, { amountCents: second.totalCents, reason: 'box was dropped' }, { 'idempotency-key': 'surplus-refund-0002' });
+    expect(refundedLater.status).toBe(201);
+    await stack.payments.webhooksIdle();
+    expect(itemOf(await surplus()).left).toBe(itemOf(afterRefund).left);
   });
 });
 

@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import { database } from '../sequelize.js';
+import { moveSurplusForOrder } from './surplus.js';
 
 // Capacity moves only through single conditional statements: the check and
 // the change happen in one UPDATE, backed by CHECK (remaining >= 0) in the
@@ -73,8 +74,9 @@ interface ReleasedOrder {
  * Moves an order out of `from` into `to` and, if it was counted against
  * capacity, gives its pieces and window slot back. The status change is the
  * guard: whichever of sweeper, webhook or cancellation gets here first does
- * the release; the others find nothing to change. Returns the order's row
- * when this call did the release.
+ * the release; the others find nothing to change. A paid order's pieces go
+ * back to the counter's surplus once it has one (they were made for it).
+ * Returns the order's row when this call did the release.
  */
 export async function releaseOrder(
   orderId: string,
@@ -83,16 +85,16 @@ export async function releaseOrder(
   transaction: Transaction,
   extra: { cancelledAt?: Date } = {},
 ): Promise<ReleasedOrder | null> {
-  const rows = await database().query<ReleasedOrder & { holds_capacity: boolean }>(
+  const rows = await database().query<ReleasedOrder & { holds_capacity: boolean; was: string }>(
     `WITH prev AS (
-       SELECT id, holds_capacity FROM orders WHERE id = :orderId AND status IN (:from) FOR UPDATE
+       SELECT id, holds_capacity, status FROM orders WHERE id = :orderId AND status IN (:from) FOR UPDATE
      )
      UPDATE orders o
         SET status = :to, holds_capacity = false, hold_expires_at = NULL, updated_at = now(),
             cancelled_at = COALESCE(CAST(:cancelledAt AS timestamptz), o.cancelled_at)
        FROM prev
       WHERE o.id = prev.id
-      RETURNING o.id, o.bake_day_id, o.pickup_window_id, o.rings, o.holes, prev.holds_capacity`,
+      RETURNING o.id, o.bake_day_id, o.pickup_window_id, o.rings, o.holes, prev.holds_capacity, prev.status AS was`,
     { replacements: { orderId, from, to, cancelledAt: extra.cancelledAt ?? null }, type: QueryTypes.SELECT, transaction },
   );
   const row = rows[0];
@@ -101,6 +103,7 @@ export async function releaseOrder(
     await giveBackCapacity(row.bake_day_id, row.rings, row.holes, transaction);
     await giveBackWindowSlot(row.pickup_window_id, transaction);
   }
+  if (row.was === 'paid') await moveSurplusForOrder(row.id, row.bake_day_id, 1, transaction);
   return row;
 }
 

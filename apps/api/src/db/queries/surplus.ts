@@ -26,6 +26,24 @@ export async function paidPreOrders(bakeDayId: string, transaction?: Transaction
   return new Map(rows.map((r) => [r.menu_item_id, r.quantity]));
 }
 
+/**
+ * Moves an order's pieces into (+1) or out of (-1) its bake day's surplus
+ * counters, if the counter has made them: a paid order released, or an order
+ * paid after the counters were written. Never below zero (what walk-ups
+ * already took stays sold).
+ */
+export async function moveSurplusForOrder(orderId: string, bakeDayId: string, sign: 1 | -1, transaction: Transaction): Promise<void> {
+  await database().query(
+    `UPDATE bake_day_surplus s
+        SET left_count = GREATEST(0, s.left_count + :sign * x.quantity), updated_at = now()
+       FROM (SELECT l.menu_item_id, SUM(l.quantity)::int AS quantity
+               FROM order_boxes b JOIN order_lines l ON l.order_box_id = b.id
+              WHERE b.order_id = :orderId GROUP BY l.menu_item_id) x
+      WHERE s.bake_day_id = :bakeDayId AND s.menu_item_id = x.menu_item_id`,
+    { replacements: { orderId, bakeDayId, sign }, transaction },
+  );
+}
+
 /** Pieces of no-show orders per menu item (the plan counts only held, paid and collected ones). */
 export async function noShowPieces(bakeDayId: string, transaction?: Transaction): Promise<Map<string, number>> {
   const rows = await database().query<{ menu_item_id: string; quantity: number }>(
