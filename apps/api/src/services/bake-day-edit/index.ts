@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import { DateTime } from 'luxon';
 import { Op, type Transaction } from 'sequelize';
 import type { BakeDayEditResult, EditBakeDayInput, Me } from '@fryline/schemas';
-import { database } from '../../db/sequelize.js';
+import { transactionWithRetry } from '../../db/retry.js';
 import { BakeDay, BakeDayBox, BakeDayMenuItem, MenuItem, PickupWindow } from '../../db/models/index.js';
 import { paidOrders, windowsWithBookings, type WindowRow } from '../../db/queries/bake-day-edit.js';
 import { AppError, notFound } from '../../lib/app-error.js';
@@ -145,8 +145,9 @@ async function applyMenu(day: BakeDay, input: EditBakeDayInput, changes: Changes
 export async function editBakeDay(owner: Me, bakeDayId: string, input: EditBakeDayInput, now: Date): Promise<BakeDayEditResult> {
   const changeId = crypto.randomUUID();
   let told = 0;
-  const changes: Changes = { words: [], orders: new Map() };
-  await database().transaction(async (transaction) => {
+  let changes: Changes = { words: [], orders: new Map() };
+  await transactionWithRetry(async (transaction) => {
+    changes = { words: [], orders: new Map() }; // afresh on a retried try
     const day = await lockDay(bakeDayId, transaction);
     const placeChanged = (input.place !== undefined && input.place !== day.place) || (input.address !== undefined && input.address !== day.address);
     if (placeChanged) {
@@ -198,7 +199,8 @@ type Action = 'open-now' | 'close-now' | 'mark-done';
 /** Open orders now, close them now, or mark the day done (over: no more orders or changes). */
 export async function bakeDayAction(owner: Me, bakeDayId: string, action: Action, now: Date): Promise<BakeDayEditResult> {
   const words: string[] = [];
-  await database().transaction(async (transaction) => {
+  await transactionWithRetry(async (transaction) => {
+    words.length = 0; // afresh on a retried try
     const day = await lockDay(bakeDayId, transaction);
     if (action === 'open-now') {
       if (day.status === 'draft') throw new AppError('draft', 'Publish this draft first', 409);

@@ -2,6 +2,7 @@ import QRCode from 'qrcode';
 import { UniqueConstraintError } from 'sequelize';
 import type { CreatedOrder, CreateOrderInput, Me, OrderDetail } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
+import { transactionWithRetry } from '../../db/retry.js';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { bakeDayForOrdering } from '../bake-days/bake-days.js';
@@ -220,7 +221,8 @@ export async function cancelOrder(user: Me, id: string, now: Date): Promise<Orde
 
 /** Moves a held or paid order to another pickup window of the same day that has room. */
 export async function moveOrder(user: Me, id: string, pickupWindowId: string, now: Date): Promise<OrderDetail> {
-  await database().transaction(async (transaction) => {
+  // an owner's edit of the day locks its windows and then their orders; this locks the order and then the windows
+  await transactionWithRetry(async (transaction) => {
     // the row lock makes a move wait for a cancellation or payment in flight
     const fresh = await Order.findOne({ where: { id, userId: user.id }, transaction, lock: transaction.LOCK.UPDATE });
     if (!fresh) throw notFound('Order');
