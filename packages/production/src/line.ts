@@ -126,7 +126,7 @@ export function stageLine(sheetsIn: LineSheetInput[], settings: LineSettings, fr
     const from = prev && s.roll > 1 && prev.roll !== s.roll ? cursor + rest : cursor;
     const until = from + roll;
     cursor = until;
-    sheets.push({ ...s, sheet: i + 1, from, until });
+    sheets.push({ dough: s.dough, mix: s.mix, roll: s.roll, doughGrams: s.doughGrams, rings: s.rings, holes: s.holes, sheet: i + 1, from, until });
     const fill = (kind: PieceKind, count: number, perTray: number) => {
       let left = count;
       const o = open[kind];

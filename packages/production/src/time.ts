@@ -37,6 +37,8 @@ function offsetText(minutes: number): string {
 }
 
 const DAY_MS = 24 * HOUR_MS;
+/** Minutes a formatter keeps in its own array: four days either side of the first instant it prints. */
+const NEAR_MINUTES = 2 * 4 * 24 * 60;
 const TWO_DIGITS = Array.from({ length: 60 }, (_, i) => (i < 10 ? `0${i}` : String(i)));
 
 interface ZoneCache {
@@ -86,16 +88,35 @@ function cachedOffset(c: ZoneCache, millis: number): number | null {
  * on a day when it changes (a zone changes its offset at most once in a day),
  * and kept between calls; the hour when it changes is formatted exactly.
  * Whole seconds, printed as formatInstant prints them; whole minutes are
- * remembered, since a bake day's sheet repeats them.
+ * remembered, since a bake day's sheet repeats them: each formatter keeps
+ * the minutes it has printed in a plain array indexed from the first one (a
+ * map lookup with a number key cost more than the rest of the formatting
+ * put together), in front of the zone's map shared between formatters.
  */
 export function instantFormatter(timeZone: string): (millis: number) => string {
   const c = zoneCache(requireTimeZone('timeZone', timeZone));
+  let near: Array<string | undefined> = [];
+  let nearFrom = Number.NaN;
   return (millis: number) => {
-    const minute = millis / 60_000; // a small integer for whole minutes: a fast map key
+    const minute = millis / 60_000;
     const wholeMinute = Number.isInteger(minute);
+    let slot = -1;
     if (wholeMinute) {
+      if (nearFrom !== nearFrom) {
+        nearFrom = minute - NEAR_MINUTES / 2;
+        near = new Array<string | undefined>(NEAR_MINUTES); // sized up front, so it keeps fast elements
+      }
+      const k = minute - nearFrom;
+      if (k >= 0 && k < NEAR_MINUTES) {
+        const hit = near[k];
+        if (hit !== undefined) return hit;
+        slot = k;
+      }
       const seen = c.minutes.get(minute);
-      if (seen !== undefined) return seen;
+      if (seen !== undefined) {
+        if (slot >= 0) near[slot] = seen;
+        return seen;
+      }
     }
     const offset = cachedOffset(c, millis);
     if (offset === null || millis % 1000 !== 0) return formatInstant(millis, timeZone);
@@ -114,6 +135,7 @@ export function instantFormatter(timeZone: string): (millis: number) => string {
     const inHour = local - localHour * HOUR_MS;
     const text = prefix + TWO_DIGITS[Math.floor(inHour / 60_000)]! + ':' + TWO_DIGITS[Math.floor((inHour % 60_000) / 1000)]! + suffix;
     if (wholeMinute) c.minutes.set(minute, text);
+    if (slot >= 0) near[slot] = text;
     return text;
   };
 }
