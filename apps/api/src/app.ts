@@ -4,12 +4,12 @@ import { fileURLToPath } from 'node:url';
 import express from 'express';
 import helmet from 'helmet';
 import session from 'express-session';
-import connectPgSimple from 'connect-pg-simple';
 import { isPlainText } from '@fryline/schemas';
 import { createPool } from './db/availability.js';
 import { logger } from './lib/logger.js';
 import type { Config } from './config/env.js';
 import { configurePassport } from './integrations/passport.js';
+import { FrylineSessionStore } from './integrations/session-store.js';
 import { csrfProtection } from './middleware/csrf.js';
 import { rateLimits } from './middleware/rate-limits.js';
 import { errorHandler, notFoundHandler } from './middleware/errors.js';
@@ -38,29 +38,6 @@ import { reportsRouter } from './routes/reports.js';
 import { counterRouter } from './routes/counter.js';
 
 export const SESSION_COOKIE = 'fryline.sid';
-
-const PgStore = connectPgSimple(session);
-const TOUCH_EVERY_MS = 60 * 60 * 1000;
-
-/**
- * The PostgreSQL session store, touching a session's expiry at most once an
- * hour per process instead of on every request (one UPDATE saved per
- * request; the 30-day expiry moves by at most an hour less).
- */
-class ThrottledTouchStore extends PgStore {
-  private touched = new Map<string, number>();
-
-  override touch(sid: string, sess: session.SessionData, fn?: (err?: unknown) => void) {
-    const now = Date.now();
-    if (now - (this.touched.get(sid) ?? 0) < TOUCH_EVERY_MS) {
-      fn?.();
-      return;
-    }
-    if (this.touched.size > 50_000) this.touched.clear();
-    this.touched.set(sid, now);
-    super.touch(sid, sess, fn as never);
-  }
-}
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 
@@ -141,7 +118,7 @@ export function createApp(config: Config) {
     session({
       name: SESSION_COOKIE,
       secret: config.SESSION_SECRET,
-      store: new ThrottledTouchStore({
+      store: new FrylineSessionStore({
         pool: sessionPool,
         tableName: 'session',
         createTableIfMissing: false,

@@ -17,10 +17,19 @@ interface FileContents {
  * Each save writes a temporary file beside the real one, flushes it to disk
  * and renames it over the old one: a crash leaves either the old state or
  * the new, never half a file. Saves are coalesced: changes made while one is
- * being written are saved right after it.
+ * being written are saved by the next one. Each save writes the whole state,
+ * so its cost grows with the state: the pause before the next save is at
+ * least SAVE_PAUSE_FACTOR times the last save's duration, which keeps saving
+ * to a bounded share of one core (about a fifth) however large the file
+ * grows, instead of snapshotting back to back through a busy minute. A crash
+ * may forget the changes of that last pause; a clean stop writes them.
  */
+/** The pause after a save is at least this many times as long as the save took. */
+export const SAVE_PAUSE_FACTOR = 4;
+
 export class StateFile {
   private dirty = false;
+  private lastSaveMs = 0;
   private writing: Promise<void> | null = null;
   private timer: NodeJS.Timeout | null = null;
   private closed = false;
@@ -56,34 +65,44 @@ export class StateFile {
   changed(): void {
     if (this.closed) return;
     this.dirty = true;
-    if (this.timer || this.writing) return;
-    this.timer = setTimeout(() => {
-      this.timer = null;
-      void this.save();
-    }, this.delayMs);
+    this.schedule();
+  }
+
+  private schedule(): void {
+    if (this.timer || this.writing || this.closed || !this.dirty) return;
+    this.timer = setTimeout(
+      () => {
+        this.timer = null;
+        void this.save();
+      },
+      Math.max(this.delayMs, SAVE_PAUSE_FACTOR * this.lastSaveMs),
+    );
     this.timer.unref();
   }
 
   private async save(): Promise<void> {
     if (this.writing) return this.writing;
     this.writing = (async () => {
-      while (this.dirty) {
-        this.dirty = false;
-        try {
-          await writeAtomically(this.file, this.contents());
-        } catch (error) {
-          console.error(`[payments fake] could not save state to ${this.file}:`, (error as Error).message);
-          break;
-        }
+      this.dirty = false;
+      const started = performance.now();
+      try {
+        await writeAtomically(this.file, this.contents());
+      } catch (error) {
+        console.error(`[payments fake] could not save state to ${this.file}:`, (error as Error).message);
       }
+      this.lastSaveMs = performance.now() - started;
     })().finally(() => {
       this.writing = null;
+      // changes made while writing: saved after the pause
+      this.schedule();
     });
     return this.writing;
   }
 
   /** Writes what is pending and stops saving. */
   async close(): Promise<void> {
+    // closed first, so a save finishing now schedules nothing more
+    this.closed = true;
     if (this.timer) clearTimeout(this.timer);
     this.timer = null;
     await this.writing;
@@ -91,7 +110,6 @@ export class StateFile {
       this.dirty = false;
       await writeAtomically(this.file, this.contents());
     }
-    this.closed = true;
   }
 }
 

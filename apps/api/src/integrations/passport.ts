@@ -1,7 +1,9 @@
 import passport from 'passport';
 import { Strategy as GoogleStrategy, type Profile } from 'passport-google-oauth20';
 import type { Config } from '../config/env.js';
+import type { Request } from 'express';
 import { findMe, signIn } from '../services/users/users.js';
+import { userLoadedWithSession } from './session-store.js';
 
 /** Google sign-in through passport, pointed by configuration at the provider (or its local stand-in). */
 export function configurePassport(config: Config) {
@@ -38,7 +40,10 @@ export function configurePassport(config: Config) {
     ),
   );
   passport.serializeUser((user, done) => done(null, user.id));
-  passport.deserializeUser((id: string, done) => {
+  // the session store has usually read the user with the session (one statement for both)
+  passport.deserializeUser((req: Request, id: string, done: (err: unknown, user?: Express.User | false) => void) => {
+    const loaded = userLoadedWithSession(req, id);
+    if (loaded) return done(null, loaded);
     findMe(id).then(
       (user) => done(null, user ?? false),
       (err) => done(err),

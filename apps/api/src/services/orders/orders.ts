@@ -1,5 +1,5 @@
 import QRCode from 'qrcode';
-import { UniqueConstraintError } from 'sequelize';
+import { DatabaseError, UniqueConstraintError } from 'sequelize';
 import type { CreatedOrder, CreateOrderInput, Me, OrderDetail } from '@fryline/schemas';
 import { database } from '../../db/sequelize.js';
 import { transactionWithRetry } from '../../db/retry.js';
@@ -8,7 +8,7 @@ import { AppError, notFound } from '../../lib/app-error.js';
 import { bakeDayForOrdering } from '../bake-days/bake-days.js';
 import { checkOrder } from './order-rules.js';
 import { releaseOrder, takeWindowSlot, giveBackWindowSlot } from '../../db/queries/capacity.js';
-import { insertHeldOrder, saveCheckoutSession, takeOrderCapacity } from '../../db/queries/orders.js';
+import { holdOrder, saveCheckoutSession, WINDOW_FULL_CONSTRAINT, type HoldResult } from '../../db/queries/orders.js';
 import { context } from '../../integrations/context.js';
 import { shopSettings } from '../shop/settings.js';
 import { audit } from '../audit/audit.js';
@@ -78,13 +78,12 @@ export async function listOrders(user: Me, now: Date): Promise<OrderDetail[]> {
 }
 
 /**
- * Reserves the pieces as a hold, then opens hosted checkout for it. One
- * transaction: the order with its boxes, lines and audit entry (refused past
- * the customer's share of the day), then the capacity and window slot in one
- * conditional statement, then commit. If checkout can't be opened, the hold
- * is released at once. The session's id is saved without waiting for the
- * disk: were it lost in a crash, the payment is still recognised as the
- * order's (the session names the order as its client reference).
+ * Reserves the pieces as a hold, then opens hosted checkout for it. The hold
+ * is one conditional statement (db/queries/orders.ts `holdOrder`): the
+ * customer's share, the day's pieces, the window's slot, the order with its
+ * boxes, lines and audit entry, all or nothing. If checkout can't be opened,
+ * the hold is released at once. The session's id is saved without waiting
+ * for the disk (see saveCheckoutSession).
  */
 export async function createOrder(user: Me, input: CreateOrderInput & { claimToken?: string }, now: Date): Promise<CreatedOrder> {
   const day = await bakeDayForOrdering(input.bakeDayId, now);
@@ -96,40 +95,33 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
   if (checked.rings + checked.holes > maxPiecesPerCustomer) throw overLimit(maxPiecesPerCustomer, 0);
   const holdExpiresAt = new Date(now.getTime() + holdMinutes * 60_000);
 
+  const hold = {
+    userId: user.id,
+    bakeDayId: day.id,
+    pickupWindowId: input.pickupWindowId,
+    rings: checked.rings,
+    holes: checked.holes,
+    subtotalCents: checked.price.subtotalCents,
+    taxCents: checked.price.taxCents,
+    totalCents: checked.price.totalCents,
+    holdExpiresAt,
+    boxes: checked.boxes,
+    maxPieces: maxPiecesPerCustomer,
+    now,
+  };
   let orderId: string;
   try {
-    orderId = await database().transaction(async (transaction) => {
-      const inserted = await insertHeldOrder(
-        {
-          userId: user.id,
-          bakeDayId: day.id,
-          pickupWindowId: input.pickupWindowId,
-          rings: checked.rings,
-          holes: checked.holes,
-          subtotalCents: checked.price.subtotalCents,
-          taxCents: checked.price.taxCents,
-          totalCents: checked.price.totalCents,
-          holdExpiresAt,
-          boxes: checked.boxes,
-          maxPieces: maxPiecesPerCustomer,
-        },
-        transaction,
-      );
-      if (!inserted.id) throw overLimit(maxPiecesPerCustomer, inserted.alreadyPieces);
-      if (input.claimToken) await claimOffer(user, day.id, input.claimToken, transaction, now);
-      const taken = await takeOrderCapacity({ bakeDayId: day.id, pickupWindowId: input.pickupWindowId, rings: checked.rings, holes: checked.holes, now }, transaction);
-      if (!taken.pieces) {
-        const fresh = await BakeDay.findByPk(day.id, { transaction, attributes: ['ringsRemaining', 'holesRemaining'] });
-        throw new AppError('sold_out', 'Sorry — there are not enough doughnuts left for this order', 409, {
-          remaining: { rings: fresh?.ringsRemaining ?? 0, holes: fresh?.holesRemaining ?? 0 },
-        });
-      }
-      if (!taken.window) {
-        throw new AppError('window_full', 'That pickup window is full; please choose another', 409, { fields: { pickupWindowId: 'This window is full' } });
-      }
-      return inserted.id;
-    });
+    // the usual order is one statement; a claimed waitlist offer first gives its set-aside pieces back, in the same transaction
+    orderId = input.claimToken
+      ? await database().transaction(async (transaction) => {
+          await claimOffer(user, day.id, input.claimToken!, transaction, now);
+          return heldOrRefused(await holdOrder(hold, transaction), maxPiecesPerCustomer);
+        })
+      : heldOrRefused(await holdOrder(hold), maxPiecesPerCustomer);
   } catch (err) {
+    if (err instanceof DatabaseError && (err.parent as { constraint?: string }).constraint === WINDOW_FULL_CONSTRAINT) {
+      throw new AppError('window_full', 'That pickup window is full; please choose another', 409, { fields: { pickupWindowId: 'This window is full' } });
+    }
     if (err instanceof UniqueConstraintError) {
       const existing = await Order.findOne({ where: { userId: user.id, bakeDayId: day.id, status: 'held' }, attributes: ['id'] });
       throw new AppError('hold_exists', 'You already have a box on hold for this bake day. Finish paying for it or cancel it first.', 409, existing ? { orderId: existing.id } : undefined);
@@ -148,6 +140,16 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     logger.error({ orderId, payments: describePaymentsError(err) }, 'checkout could not be opened');
     throw new AppError('payments_error', 'Card payments are not available right now. Nothing was charged; please try again shortly.', 502);
   }
+}
+
+/** The new order's id, or the refusal as the customer should hear it (nothing was written). */
+function heldOrRefused(result: HoldResult, maxPieces: number): string {
+  if (result.id !== null) return result.id;
+  if (result.refused === 'limit') throw overLimit(maxPieces, result.alreadyPieces);
+  if (result.refused === 'window') {
+    throw new AppError('invalid', 'pickupWindowId: This pickup window is not on this bake day', 400, { fields: { pickupWindowId: 'This pickup window is not on this bake day' } });
+  }
+  throw new AppError('sold_out', 'Sorry — there are not enough doughnuts left for this order', 409, { remaining: result.remaining });
 }
 
 function overLimit(limit: number, already: number): AppError {
