@@ -108,7 +108,7 @@ describe('the shop’s logo', () => {
 });
 
 describe('the shop’s currency', () => {
-  it('shows euros in GET /api/shop and in the confirmation e-mail's bill and text part, as Intl.NumberFormat writes them (ECMA-402)', async () => {
+  it('shows euros in GET /api/shop and in the confirmation e-mail (bill and text part), as Intl.NumberFormat writes them (ECMA-402)', async () => {
     await ShopSettings.update({ currency: 'eur' }, { where: { id: 1 } });
     expect((await shop()).currency).toBe('eur');
     const { mail, doc } = await confirmationMail();
