@@ -33,8 +33,8 @@ export function LogoPanel({ shopName }: { shopName: string }) {
         Logo
       </h2>
       <p className="text-muted">Shown beside the shop's name in its header and at the top of every e-mail. Without one, the name stands alone.</p>
-      <div className="flex flex-wrap items-start gap-4">
-        <figure className="flex min-h-20 min-w-48 items-center gap-3 rounded-xl border border-line bg-paper px-3 py-2">
+      <div className="flex flex-col items-start gap-4 sm:flex-row">
+        <figure className="flex min-h-20 w-full min-w-0 flex-wrap items-center gap-3 rounded-xl border border-line bg-paper px-3 py-2 sm:w-auto sm:max-w-sm">
           {preview ? (
             <img src={preview} alt={`The new logo for ${shopName}`} className="h-10 w-auto max-w-48 object-contain" />
           ) : current ? (
@@ -44,7 +44,7 @@ export function LogoPanel({ shopName }: { shopName: string }) {
           )}
           <figcaption className="text-lg font-extrabold text-plum-800">{shopName}</figcaption>
         </figure>
-        <div className="flex min-w-0 flex-1 flex-col gap-2">
+        <div className="flex w-full min-w-0 flex-1 flex-col gap-2">
           <ImageFileInput
             ref={input}
             id={id}
