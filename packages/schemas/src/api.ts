@@ -19,7 +19,7 @@ import {
 } from './counter.js';
 import { changeRoleSchema, createBakeDaySchema, menuItemAdminViewSchema, staffMemberInputSchema, staffMemberViewSchema } from './setup.js';
 import { menuItemInputSchema, menuItemPatchSchema, menuPhotoViewSchema } from './menu.js';
-import { publicShopViewSchema, shopSettingsInputSchema, shopSettingsViewSchema } from './shop-settings.js';
+import { publicShopViewSchema, shopLogoViewSchema, shopSettingsInputSchema, shopSettingsViewSchema } from './shop-settings.js';
 import { auditPageSchema, auditQuerySchema } from './audit-log.js';
 
 /**
@@ -64,7 +64,6 @@ export const api = {
   health: endpoint({ method: 'get', path: '/api/health', response: z.object({ ok: z.boolean(), db: z.enum(['up', 'down']) }) }),
   csrf: endpoint({ method: 'get', path: '/api/csrf', response: z.object({ token: z.string() }) }),
   me: endpoint({ method: 'get', path: '/api/me', response: meSchema }),
-  /** The business the shop belongs to: its name and logo, for the storefront's header, titles and footer. */
 
   // bake days as customers see them
   listBakeDays: endpoint({ method: 'get', path: '/api/bake-days', response: z.array(bakeDayViewSchema) }),
@@ -128,9 +127,13 @@ export const api = {
   removeMenuPhoto: endpoint({ method: 'delete', path: '/api/staff/menu-items/:id/photo', params: uuidParams('menu item'), response: z.void() }),
 
   // the shop's settings
+  /** The business the shop belongs to: its name and logo, for the storefront's header, titles and footer, and the terms shown before paying. */
   getShop: endpoint({ method: 'get', path: '/api/shop', response: publicShopViewSchema }),
   getShopSettings: endpoint({ method: 'get', path: '/api/staff/shop-settings', response: shopSettingsViewSchema }),
   saveShopSettings: endpoint({ method: 'put', path: '/api/staff/shop-settings', body: shopSettingsInputSchema, response: shopSettingsViewSchema }),
+  /** multipart/form-data with the image in field "logo" (not JSON): JPEG, PNG or WebP by content, at most 8 MB; 415, 413 or 400 otherwise. Replaces any logo. */
+  uploadShopLogo: endpoint({ method: 'post', path: '/api/staff/shop-settings/logo', response: shopLogoViewSchema, status: 201 }),
+  removeShopLogo: endpoint({ method: 'delete', path: '/api/staff/shop-settings/logo', response: z.void() }),
 
   // who changed what
   listAuditLog: endpoint({ method: 'get', path: '/api/staff/audit-log', query: auditQuerySchema, response: auditPageSchema }),

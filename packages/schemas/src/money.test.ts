@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { centsToInput, formatCents, moneyTextSchema, parseCents, parseMoney, roundHalfUp } from './money.js';
+import { centsToInput, currencySymbol, formatCents, moneyTextSchema, parseCents, parseMoney, roundHalfUp } from './money.js';
 
 // ISO 4217 gives USD two minor-unit digits: one dollar is 100 cents.
 describe('parseMoney: typed amounts into integer cents (ISO 4217: USD has 2 decimal places)', () => {
@@ -69,6 +69,15 @@ describe('formatCents: integer cents through Intl.NumberFormat (en-US, ECMA-402)
   it('takes the shop setting’s lower-case code as well (ISO 4217 codes are case-insensitive in ECMA-402)', () => {
     expect(formatCents(1250, 'usd')).toBe('$12.50');
     expect(formatCents(1250, 'CAD')).toBe('CA$12.50');
+  });
+
+  // the expected text is Intl.NumberFormat's own (ECMA-402 with the runtime's CLDR data), not typed-in signs
+  it.each(['eur', 'gbp', 'cad', 'aud', 'nzd'])('writes %s amounts as Intl.NumberFormat does, and names its sign for input labels', (code) => {
+    const intl = new Intl.NumberFormat('en-US', { style: 'currency', currency: code.toUpperCase() });
+    expect(formatCents(123456, code)).toBe(intl.format(1234.56));
+    expect(formatCents(123456, code)).not.toBe(formatCents(123456, 'usd'));
+    expect(currencySymbol(code)).toBe(intl.formatToParts(1).find((p) => p.type === 'currency')!.value);
+    expect(formatCents(500, code).startsWith(currencySymbol(code))).toBe(true);
   });
 
   it('refuses a fraction of a cent rather than show it', () => {

@@ -62,16 +62,25 @@ export const moneyTextSchema = z.string().transform((text, ctx) => {
 
 const formatters = new Map<string, Intl.NumberFormat>();
 
-/** Integer cents for reading, in the shop's currency: 1250 → "$12.50", 123456 → "$1,234.56". */
-export function formatCents(cents: number, currency: string = SHOP_CURRENCY): string {
-  if (!Number.isInteger(cents)) throw new RangeError(`formatCents: ${cents} is not a whole number of cents`);
+function moneyFormat(currency: string): Intl.NumberFormat {
   const code = currency.toUpperCase();
   let format = formatters.get(code);
   if (!format) {
     format = new Intl.NumberFormat(SHOP_LOCALE, { style: 'currency', currency: code });
     formatters.set(code, format);
   }
-  return format.format(cents / 100);
+  return format;
+}
+
+/** Integer cents for reading, in the shop's currency: 1250 → "$12.50", 123456 → "$1,234.56" (in euros "€12.50"). */
+export function formatCents(cents: number, currency: string = SHOP_CURRENCY): string {
+  if (!Number.isInteger(cents)) throw new RangeError(`formatCents: ${cents} is not a whole number of cents`);
+  return moneyFormat(currency).format(cents / 100);
+}
+
+/** The currency's sign as formatCents writes it ("$", "€", "£", "CA$"), to label an amount input. */
+export function currencySymbol(currency: string = SHOP_CURRENCY): string {
+  return moneyFormat(currency).formatToParts(0).find((p) => p.type === 'currency')?.value ?? currency.toUpperCase();
 }
 
 /** Cents as the text of an amount input (no sign, no separators): 1250 → "12.50", 7 → "0.07"; parseMoney reads it back. */

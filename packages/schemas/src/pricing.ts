@@ -67,15 +67,15 @@ export interface OrderBill {
  * flavour surcharge (quantity × surcharge), then the tax as its own line when
  * it is added on top. The lines always sum to the total; an order whose
  * stored figures would not (never written by priceOrder) is an error, not a
- * silently wrong bill.
+ * silently wrong bill. Amounts in labels are in `currency` (the shop's).
  */
-export function orderBill(order: PricedOrder): OrderBill {
+export function orderBill(order: PricedOrder, currency?: string): OrderBill {
   const lines: PriceLine[] = [];
   order.boxes.forEach((box, index) => {
     lines.push({ kind: 'box', label: boxLabel(box.size), cents: box.priceCents, box: index });
     for (const item of box.items) {
       if (item.surchargeCents === 0) continue;
-      const each = formatCents(item.surchargeCents);
+      const each = formatCents(item.surchargeCents, currency);
       lines.push({ kind: 'surcharge', label: `${item.quantity} × ${item.name} (+${each} each)`, cents: item.surchargeCents * item.quantity, box: index });
     }
   });

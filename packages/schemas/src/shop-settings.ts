@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { taxSettingSchema } from './bake-days.js';
+import { menuPhotoViewSchema } from './menu-photos.js';
 import { shopInfoSchema } from './shop.js';
 
 // What the owner sets for the whole shop.
@@ -38,8 +39,19 @@ export type ShopSettingsInput = z.infer<typeof shopSettingsInputSchema>;
 export const shopSettingsViewSchema = shopSettingsInputSchema.extend({ updatedAt: z.string().nullable() });
 export type ShopSettingsView = z.infer<typeof shopSettingsViewSchema>;
 
+/** The multipart field that carries the logo. */
+export const SHOP_LOGO_FIELD = 'logo';
+/** The widths the logo is stored at, in pixels: the shop's header shows it about 40 px high, e-mails 120 px wide, each at up to twice that for sharp screens. */
+export const SHOP_LOGO_WIDTHS = [120, 240, 480] as const;
+
+/** The logo as an <img> needs it: its sizes for srcset, and its shape so the header keeps its place. */
+export const shopLogoViewSchema = menuPhotoViewSchema;
+export type ShopLogoView = z.infer<typeof shopLogoViewSchema>;
+
 /** What the shop shows every customer (GET /api/shop). */
 export const publicShopViewSchema = shopInfoSchema.extend({
+  /** The logo's sizes (logoUrl is one of them, on this site); left out when the shop has none. */
+  logo: shopLogoViewSchema.optional(),
   shopName: z.string(),
   currency: z.string(),
   timeZone: z.string(),

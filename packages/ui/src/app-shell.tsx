@@ -3,6 +3,7 @@ import { Link, Outlet, useLocation } from 'react-router-dom';
 import { onPageChange } from './page-change';
 import { PageErrorBoundary } from './page-error-boundary';
 import { LoadingState } from './status';
+import type { PhotoSource } from './menu-photo';
 
 const mainWidth = {
   /** The shop: a reading width. */
@@ -46,12 +47,51 @@ export function AppShell({ appName, header, footer, width = 'regular' }: AppShel
   );
 }
 
-/** The header's home link: the business's logo (or a plain mark) and its name. */
-export function BrandLink({ className = '', logoUrl = null, children }: { className?: string; logoUrl?: string | null; children: ReactNode }) {
+/** How tall the business's logo stands in a header, in CSS pixels. */
+const LOGO_HEIGHT = 40;
+
+/**
+ * The header's home link: the business's logo (or a plain mark) and its
+ * name, or `children` in place of the name. The logo's width and height are
+ * set from its stored shape, so the header doesn't move when it loads; with
+ * a logo the link is named by the logo's alt text (the name), and the
+ * written name beside it isn't read out a second time.
+ */
+export function BrandLink({
+  className = '',
+  logo = null,
+  name = null,
+  children,
+}: {
+  className?: string;
+  logo?: PhotoSource | null;
+  name?: string | null;
+  children?: ReactNode;
+}) {
+  const width = logo ? Math.round((LOGO_HEIGHT * logo.width) / logo.height) : 0;
+  const label = children ?? name ?? <span className="sr-only">Home</span>;
   return (
-    <Link to="/" className={`flex items-center gap-2 font-extrabold text-plum-800 no-underline ${className}`}>
-      {logoUrl ? <img src={logoUrl} alt="" className="h-9 w-auto" /> : <span className="brand-mark" aria-hidden="true" />}
-      {children}
+    <Link to="/" className={`flex min-w-0 items-center gap-2 font-extrabold text-plum-800 no-underline ${className}`}>
+      {logo && name ? (
+        <>
+          <img
+            src={logo.src}
+            srcSet={logo.srcset}
+            sizes={`${width}px`}
+            width={width}
+            height={LOGO_HEIGHT}
+            alt={name}
+            className="h-10 w-auto max-w-[50vw] shrink-0 object-contain"
+            data-shop-logo=""
+          />
+          <span aria-hidden="true">{label}</span>
+        </>
+      ) : (
+        <>
+          <span className="brand-mark" aria-hidden="true" />
+          {label}
+        </>
+      )}
     </Link>
   );
 }

@@ -12,6 +12,7 @@ const migrations = {
   '0021-owner-ops': () => import('./migrations/0021-owner-ops.js'),
   '0030-hardening': () => import('./migrations/0030-hardening.js'),
   '0040-production-line': () => import('./migrations/0040-production-line.js'),
+  '0050-shop-logo': () => import('./migrations/0050-shop-logo.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

@@ -1,4 +1,4 @@
-import { useShop } from '../lib/shop-info';
+import { useShop } from '@fryline/ui';
 
 /** Sets the browser tab's title, with the business's name (React hoists <title> into the document head). */
 export function PageTitle({ children }: { children: string }) {

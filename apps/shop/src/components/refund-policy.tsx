@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import { shopQueries } from '../lib/shop-queries';
+import { shopQuery } from '@fryline/ui';
 
 /** The owner's refund policy, as customers read it before they pay. */
 export function RefundPolicy() {
-  const shop = useQuery(shopQueries.info());
+  const shop = useQuery(shopQuery());
   return (
     <section aria-labelledby="refund-policy-heading" className="rounded-2xl border-2 border-line bg-white p-3">
       <h4 id="refund-policy-heading" className="font-extrabold">

@@ -15,6 +15,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare updatedBy: CreationOptional<string | null>;
   /** How long a hand-over can be undone. */
   declare handOverUndoSeconds: CreationOptional<number>;
+  /** The business's logo, stored as a menu photo is; null for none. */
+  declare logoPhotoId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -33,6 +35,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         refundPolicy: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         updatedBy: { type: DataTypes.UUID, allowNull: true },
         handOverUndoSeconds: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 15 },
+        logoPhotoId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -6,7 +6,7 @@ import { database } from '../../db/sequelize.js';
 import { BakeDay, PickupWindow } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { paragraphMail } from '../mail/templates.js';
+import { mailShopOf, paragraphMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
@@ -34,15 +34,15 @@ interface SubscriberRow {
 export const unsubscribeUrl = (unsubscribeToken: string) => `${context().config.publicUrl}/api/announcements/unsubscribe?token=${encodeURIComponent(unsubscribeToken)}`;
 
 async function queueConfirmation(row: SubscriberRow, now: Date, transaction: Transaction) {
-  const { shopName } = await shopSettings(transaction);
+  const settings = await shopSettings(transaction);
+  const { shopName } = settings;
   const link = `${context().config.publicUrl}/news/confirm?token=${encodeURIComponent(row.confirm_token)}`;
   const mail = await paragraphMail(`Please confirm: news of bake days from ${shopName}`, [
     'Hello,',
     `Someone (we hope you) asked to hear from ${shopName} when a new bake day opens for pre-orders.`,
     `To say yes, open this link: ${link}`,
     `If it wasn't you, ignore this e-mail: you won't hear from us again.`,
-    `— ${shopName}`,
-  ]);
+  ], mailShopOf(settings));
   const bucket = Math.floor(now.getTime() / (RESEND_MINUTES * 60_000));
   await enqueueMail({ kind: 'announcement-confirm', to: row.email, ...mail, dedupeKey: `announcement-confirm:${row.id}:${bucket}` }, transaction);
   await database().query(`UPDATE announcement_subscribers SET confirm_sent_at = :now, updated_at = now() WHERE id = :id`, { replacements: { id: row.id, now }, transaction });
@@ -122,7 +122,8 @@ async function announceDay(dayId: string, now: Date, perMinute: number): Promise
       `SELECT id, email, unsubscribe_token FROM announcement_subscribers WHERE status = 'confirmed' ORDER BY confirmed_at, id`,
       { type: QueryTypes.SELECT, transaction },
     );
-    const { shopName } = await shopSettings(transaction);
+    const settings = await shopSettings(transaction);
+    const { shopName } = settings;
     const zone = day.timeZone;
     const date = DateTime.fromISO(day.date, { zone }).toFormat('cccc d LLLL');
     const windows = (day.pickupWindows ?? [])
@@ -139,8 +140,7 @@ async function announceDay(dayId: string, now: Date, perMinute: number): Promise
         `Pickup windows: ${windows.join(', ')}. Orders close ${closes}, or sooner if we sell out.`,
         `Order here: ${link}`,
         `You get this because you asked to hear about new bake days. To stop, open ${leave}`,
-        `— ${shopName}`,
-      ]);
+      ], mailShopOf(settings));
       await enqueueMail(
         {
           kind: 'announcement',

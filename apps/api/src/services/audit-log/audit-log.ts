@@ -6,7 +6,7 @@ import { summarize } from './summaries.js';
 
 /** A page of the audit log; the dates are whole days in the shop's time zone. */
 export async function listAuditLog(query: AuditQuery): Promise<AuditPage> {
-  const { timeZone } = await shopSettings();
+  const { timeZone, currency } = await shopSettings();
   const dayStart = (date: string) => DateTime.fromISO(date, { zone: timeZone }).startOf('day');
   const { rows, total } = await findAuditPage(
     {
@@ -23,7 +23,7 @@ export async function listAuditLog(query: AuditQuery): Promise<AuditPage> {
     at: new Date(r.created_at).toISOString(),
     kind: r.kind as AuditKind,
     action: r.action,
-    summary: summarize({ action: r.action, details: r.details ?? {}, subject: r.subject_label }),
+    summary: summarize({ action: r.action, details: r.details ?? {}, subject: r.subject_label, currency }),
     actor: r.actor_id ? { id: r.actor_id, name: r.actor_name ?? '', email: r.actor_email ?? '' } : null,
     subjectType: r.subject_type,
     subjectId: r.subject_id,

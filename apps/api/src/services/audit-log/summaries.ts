@@ -7,10 +7,12 @@ interface Entry {
   action: string;
   details: Record<string, unknown>;
   subject: string | null;
+  /** The shop's currency, for the amounts in the entry. */
+  currency?: string;
 }
 
 const str = (v: unknown) => (typeof v === 'string' ? v : v === undefined || v === null ? '' : JSON.stringify(v));
-const cents = (v: unknown) => (typeof v === 'number' ? formatCents(v) : str(v));
+const cents = (v: unknown, e: Entry) => (typeof v === 'number' ? formatCents(v, e.currency) : str(v));
 
 const settingNames: Record<string, string> = {
   shopName: 'shop name',
@@ -20,6 +22,7 @@ const settingNames: Record<string, string> = {
   holdMinutes: 'hold length',
   noShowGraceMinutes: 'no-show grace period',
   refundPolicy: 'refund policy',
+  maxPiecesPerCustomer: 'pieces per customer',
 };
 
 const fieldNames: Record<string, string> = {
@@ -42,7 +45,7 @@ const summaries: Record<string, (e: Entry) => string> = {
   'menu.updated': (e) => `Changed ${str(e.details.name) || e.subject}: ${changedKeys(e.details, fieldNames)}`,
   'menu.price_changed': (e) => {
     const change = (e.details.surchargeCents ?? {}) as { from?: unknown; to?: unknown };
-    return `Changed the extra charge for ${str(e.details.name) || e.subject} from ${cents(change.from)} to ${cents(change.to)}`;
+    return `Changed the extra charge for ${str(e.details.name) || e.subject} from ${cents(change.from, e)} to ${cents(change.to, e)}`;
   },
   'menu.archived': (e) => `Archived ${str(e.details.name) || e.subject}`,
   'menu.restored': (e) => `Put ${str(e.details.name) || e.subject} back on the menu`,
@@ -51,11 +54,13 @@ const summaries: Record<string, (e: Entry) => string> = {
   'staff.role': (e) =>
     e.details.role === 'customer' ? `Removed staff access for ${e.subject ?? 'someone'}` : `Gave ${e.subject ?? 'someone'} the ${str(e.details.role)} role`,
   'staff.invited': (e) => `Invited ${str(e.details.email) || e.subject} as ${str(e.details.role)}`,
+  'shop.logo': () => 'Put up a new logo for the shop',
+  'shop.logo_removed': () => 'Took down the shop\'s logo',
   'shop.settings': (e) => `Changed the shop settings: ${changedKeys(e.details, settingNames)}`,
   'bake_day.capacity': (e) => `Set the capacity of ${e.subject ?? 'a bake day'} to ${str(e.details.rings)} rings and ${str(e.details.holes)} holes`,
   'bake_day.created': (e) => `Announced the bake day ${e.subject ?? str(e.details.date)}${e.details.publish === false ? ' (draft)' : ''}`,
   'bake_day.published': (e) => `Opened ${e.subject ?? 'a bake day'} to customers`,
-  'order.refunded': (e) => `Refunded ${cents(e.details.amountCents)} on order ${e.subject ?? ''}${e.details.reason ? ` (${str(e.details.reason)})` : ''}`.trim(),
+  'order.refunded': (e) => `Refunded ${cents(e.details.amountCents, e)} on order ${e.subject ?? ''}${e.details.reason ? ` (${str(e.details.reason)})` : ''}`.trim(),
 };
 
 export function summarize(entry: Entry): string {

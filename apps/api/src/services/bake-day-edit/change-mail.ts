@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { BakeDay, Order, PickupWindow, User } from '../../db/models/index.js';
 import { extendChangeGrace } from '../../db/queries/bake-day-edit.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { paragraphMail } from '../mail/templates.js';
+import { mailShopOf, paragraphMail } from '../mail/templates.js';
 import { windowText } from '../mail/order-mails.js';
 import { shopSettings } from '../shop/settings.js';
 import { context } from '../../integrations/context.js';
@@ -21,7 +21,8 @@ export interface OrderChange {
  */
 export async function queueChangeNotices(changeId: string, orders: Map<string, OrderChange>, transaction: Transaction): Promise<number> {
   if (orders.size === 0) return 0;
-  const { shopName } = await shopSettings(transaction);
+  const settings = await shopSettings(transaction);
+  const { shopName } = settings;
   const { publicUrl } = context().config;
   let queued = 0;
   for (const [orderId, change] of orders) {
@@ -42,8 +43,8 @@ export async function queueChangeNotices(changeId: string, orders: Map<string, O
         ? `Your order is still safe. Pick a new window here: ${url}`
         : `Your pickup now: ${day.place}${day.address ? `, ${day.address}` : ''}\n${windowText(day, window)}\nYour pickup code stays ${order.pickupCode}.`,
       `If this no longer suits you, move to another pickup window or cancel for a full refund (no questions asked) here: ${url}`,
-      `Sorry for the trouble. — ${shopName}`,
-    ]);
+      'Sorry for the trouble.',
+    ], mailShopOf(settings));
     await enqueueMail({ kind: 'bake-day-change', to: order.user!.email, ...mail, dedupeKey: `bake-day-change:${changeId}:${order.id}` }, transaction);
     queued += 1;
   }

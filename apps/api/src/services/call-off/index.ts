@@ -9,7 +9,7 @@ import { releaseOrder } from '../../db/queries/capacity.js';
 import { expireCheckout } from '../../integrations/checkout.js';
 import { context } from '../../integrations/context.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { paragraphMail } from '../mail/templates.js';
+import { mailShopOf, paragraphMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { audit } from '../audit/audit.js';
 
@@ -133,7 +133,7 @@ async function tellPerson(job: JobRow, userId: string, transaction: Transaction)
   const reason = String((job.payload as { reason?: string }).reason ?? '');
   const what =
     money && money.refunded > 0
-      ? `We have refunded ${formatCents(money.refunded)} to your card in full. Refunds usually take a few days to show.`
+      ? `We have refunded ${formatCents(money.refunded, settings.currency)} to your card in full. Refunds usually take a few days to show.`
       : money && money.orders > 0
         ? 'Your order was already settled, so nothing more is due.'
         : 'You were on the waitlist or had a box on hold: nothing was charged, and there is nothing you need to do.';
@@ -142,8 +142,8 @@ async function tellPerson(job: JobRow, userId: string, transaction: Transaction)
     `We're sorry: we have had to call off the bake day on ${date} at ${day.place}.`,
     ...(reason ? [`Why: ${reason}`] : []),
     what,
-    `We hope to see you at the next one. — ${settings.shopName}`,
-  ]);
+    'We hope to see you at the next one.',
+  ], mailShopOf(settings));
   await enqueueMail({ kind: 'call-off', to: user.email, ...mail, dedupeKey: `call-off:${day.id}:${user.id}` }, transaction);
 }
 

@@ -4,7 +4,7 @@ import type { Transaction } from 'sequelize';
 import { boxLabel, formatCents, orderBill } from '@fryline/schemas';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User, type StoredAttachment } from '../../db/models/index.js';
 import { enqueueMail } from './outbox.js';
-import { renderMail, type MailBlock, type MailShop } from './templates.js';
+import { mailShopOf, renderMail, type MailBlock, type MailShop } from './templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { pickupCalendar, pickupSequence, type PickupEvent } from '../orders/calendar.js';
 import { billOf } from '../orders/staff-orders.js';
@@ -39,7 +39,7 @@ async function load(orderId: string, transaction: Transaction): Promise<Loaded> 
     day: order.bakeDay!,
     window: order.pickupWindow!,
     boxes,
-    shop: { name: settings.shopName, logoUrl: settings.logoUrl },
+    shop: mailShopOf(settings),
     url: `${context().config.publicUrl}/orders/${order.id}`,
   };
 }
@@ -69,7 +69,7 @@ const contents = (l: Loaded): MailBlock => ({
   rows: l.boxes.map((box) => [boxLabel(box.size), (box.lines ?? []).map((x) => `${x.quantity} × ${x.name}`).join('\n')]),
 });
 
-const bill = (l: Loaded): MailBlock => ({ type: 'bill', bill: orderBill(billOf(l.order)), refundedCents: l.order.refundedCents });
+const bill = (l: Loaded): MailBlock => ({ type: 'bill', bill: orderBill(billOf(l.order), l.shop.currency), refundedCents: l.order.refundedCents });
 
 function allergens(l: Loaded): MailBlock {
   const set = new Set(l.boxes.flatMap((b) => (b.lines ?? []).flatMap((x) => x.allergens)));
@@ -187,7 +187,7 @@ export async function queueLateRefundApology(orderId: string, transaction: Trans
     blocks: [
       greeting(l),
       { type: 'paragraph', text: 'Your payment arrived after your reserved box had been released, and by then that bake day had sold out. Your order is cancelled.' },
-      { type: 'paragraph', text: `We have refunded the full ${formatCents(l.order.totalCents)} to your card. Refunds usually take a few days to show.` },
+      { type: 'paragraph', text: `We have refunded the full ${formatCents(l.order.totalCents, l.shop.currency)} to your card. Refunds usually take a few days to show.` },
       { type: 'paragraph', text: "We're sorry. You can join the waitlist for that day, or look at our next bake days." },
     ],
   });
@@ -199,11 +199,11 @@ export async function queueCancellation(orderId: string, refundCents: number, tr
   const mail = await renderMail({
     subject: `Your order is cancelled — ${l.shop.name}`,
     shop: l.shop,
-    preview: refundCents > 0 ? `Refunded ${formatCents(refundCents)}.` : 'Nothing was charged.',
+    preview: refundCents > 0 ? `Refunded ${formatCents(refundCents, l.shop.currency)}.` : 'Nothing was charged.',
     blocks: [
       greeting(l),
       { type: 'paragraph', text: `Your order for ${windowText(l.day, l.window)} is cancelled.` },
-      { type: 'paragraph', text: refundCents > 0 ? `We have refunded ${formatCents(refundCents)} to your card. Refunds usually take a few days to show.` : 'Nothing was charged.' },
+      { type: 'paragraph', text: refundCents > 0 ? `We have refunded ${formatCents(refundCents, l.shop.currency)} to your card. Refunds usually take a few days to show.` : 'Nothing was charged.' },
       contents(l),
       ...(refundCents > 0 ? [{ type: 'paragraph', text: 'The attached calendar update takes the pickup out of your calendar.' } as MailBlock] : []),
     ],
@@ -239,14 +239,14 @@ export async function queueRefundNotice(orderId: string, refundId: string, amoun
   // releaseOrder turned a paid order refunded in full into 'refunded': it will not be collected
   const full = l.order.status === 'refunded';
   const mail = await renderMail({
-    subject: full ? `Your order is cancelled and refunded — ${l.shop.name}` : `A refund of ${formatCents(amountCents)} — ${l.shop.name}`,
+    subject: full ? `Your order is cancelled and refunded — ${l.shop.name}` : `A refund of ${formatCents(amountCents, l.shop.currency)} — ${l.shop.name}`,
     shop: l.shop,
-    preview: full ? `Refunded in full: ${formatCents(l.order.totalCents)}.` : `Refunded ${formatCents(amountCents)}.`,
+    preview: full ? `Refunded in full: ${formatCents(l.order.totalCents, l.shop.currency)}.` : `Refunded ${formatCents(amountCents, l.shop.currency)}.`,
     blocks: [
       greeting(l),
       full
-        ? { type: 'paragraph', text: `Your order for ${windowText(l.day, l.window)} is cancelled, and we have refunded it in full (${formatCents(l.order.totalCents)}). There is nothing to collect.` }
-        : { type: 'paragraph', text: l.order.status === 'paid' ? `We have refunded ${formatCents(amountCents)} for your order. Your order still stands: collect it as planned.` : `We have refunded ${formatCents(amountCents)} for your order.` },
+        ? { type: 'paragraph', text: `Your order for ${windowText(l.day, l.window)} is cancelled, and we have refunded it in full (${formatCents(l.order.totalCents, l.shop.currency)}). There is nothing to collect.` }
+        : { type: 'paragraph', text: l.order.status === 'paid' ? `We have refunded ${formatCents(amountCents, l.shop.currency)} for your order. Your order still stands: collect it as planned.` : `We have refunded ${formatCents(amountCents, l.shop.currency)} for your order.` },
       { type: 'paragraph', text: 'Refunds usually take a few days to show on your card.' },
       ...(l.order.status === 'paid' ? [pickupFacts(l)] : []),
       contents(l),

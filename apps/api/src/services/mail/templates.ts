@@ -17,7 +17,16 @@ export interface MailShop {
   name: string;
   /** An absolute URL of the shop's logo, when it has one. */
   logoUrl?: string | null;
+  /** The shop's currency (ISO 4217) for every amount in the mail; US dollars when not given. */
+  currency?: string;
 }
+
+/** The mail frame's view of the shop settings: name, logo and currency. */
+export const mailShopOf = (settings: { shopName: string; logoUrl: string | null; currency: string }): MailShop => ({
+  name: settings.shopName,
+  logoUrl: settings.logoUrl,
+  currency: settings.currency,
+});
 
 export type MailBlock =
   | { type: 'paragraph'; text: string }
@@ -54,7 +63,8 @@ const escape = (s: string) =>
   s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const html = (s: string) => escape(s).replace(/\n/g, '<br>');
 
-function blockMjml(block: MailBlock): string {
+function blockMjml(block: MailBlock, currency?: string): string {
+  const money = (cents: number) => formatCents(cents, currency);
   switch (block.type) {
     case 'paragraph':
       return `<mj-text>${html(block.text)}</mj-text>`;
@@ -78,16 +88,16 @@ function blockMjml(block: MailBlock): string {
     case 'bill': {
       const rows = block.bill.lines.map(
         (l) =>
-          `<tr data-mail="bill-line" data-cents="${l.cents}"><td style="padding:4px 12px 4px ${l.kind === 'box' ? '0' : '14px'};${l.kind === 'box' ? 'font-weight:700' : `color:${muted}`}">${html(l.label)}</td><td align="right" style="padding:4px 0;white-space:nowrap">${formatCents(l.cents)}</td></tr>`,
+          `<tr data-mail="bill-line" data-cents="${l.cents}"><td style="padding:4px 12px 4px ${l.kind === 'box' ? '0' : '14px'};${l.kind === 'box' ? 'font-weight:700' : `color:${muted}`}">${html(l.label)}</td><td align="right" style="padding:4px 0;white-space:nowrap">${money(l.cents)}</td></tr>`,
       );
       rows.push(
-        `<tr data-mail="bill-total" data-cents="${block.bill.totalCents}"><td style="padding:8px 12px 4px 0;border-top:1px solid ${line};font-weight:800;font-size:17px">Total</td><td align="right" style="padding:8px 0 4px;border-top:1px solid ${line};font-weight:800;font-size:17px">${formatCents(block.bill.totalCents)}</td></tr>`,
+        `<tr data-mail="bill-total" data-cents="${block.bill.totalCents}"><td style="padding:8px 12px 4px 0;border-top:1px solid ${line};font-weight:800;font-size:17px">Total</td><td align="right" style="padding:8px 0 4px;border-top:1px solid ${line};font-weight:800;font-size:17px">${money(block.bill.totalCents)}</td></tr>`,
       );
       if (block.bill.includedTaxCents !== null) {
-        rows.push(`<tr><td style="padding:2px 12px 2px 0;color:${muted};font-size:14px">Tax included in the prices</td><td align="right" style="color:${muted};font-size:14px">${formatCents(block.bill.includedTaxCents)}</td></tr>`);
+        rows.push(`<tr><td style="padding:2px 12px 2px 0;color:${muted};font-size:14px">Tax included in the prices</td><td align="right" style="color:${muted};font-size:14px">${money(block.bill.includedTaxCents)}</td></tr>`);
       }
       if (block.refundedCents) {
-        rows.push(`<tr><td style="padding:2px 12px 2px 0">Refunded to your card</td><td align="right">−${formatCents(block.refundedCents)}</td></tr>`);
+        rows.push(`<tr><td style="padding:2px 12px 2px 0">Refunded to your card</td><td align="right">−${money(block.refundedCents)}</td></tr>`);
       }
       return `<mj-table css-class="mail-bill" padding-top="8px">${rows.join('')}</mj-table>`;
     }
@@ -100,7 +110,8 @@ function blockMjml(block: MailBlock): string {
   }
 }
 
-function blockText(block: MailBlock): string {
+function blockText(block: MailBlock, currency?: string): string {
+  const money = (cents: number) => formatCents(cents, currency);
   switch (block.type) {
     case 'paragraph':
       return block.text;
@@ -113,10 +124,10 @@ function blockText(block: MailBlock): string {
     case 'bill': {
       const width = 40;
       const row = (label: string, cents: string) => `${label}${' '.repeat(Math.max(1, width - label.length - cents.length))}${cents}`;
-      const rows = block.bill.lines.map((l) => row(l.kind === 'box' ? l.label : `  ${l.label}`, formatCents(l.cents)));
-      rows.push('-'.repeat(width), row('Total', formatCents(block.bill.totalCents)));
-      if (block.bill.includedTaxCents !== null) rows.push(row('Tax included in the prices', formatCents(block.bill.includedTaxCents)));
-      if (block.refundedCents) rows.push(row('Refunded to your card', `−${formatCents(block.refundedCents)}`));
+      const rows = block.bill.lines.map((l) => row(l.kind === 'box' ? l.label : `  ${l.label}`, money(l.cents)));
+      rows.push('-'.repeat(width), row('Total', money(block.bill.totalCents)));
+      if (block.bill.includedTaxCents !== null) rows.push(row('Tax included in the prices', money(block.bill.includedTaxCents)));
+      if (block.refundedCents) rows.push(row('Refunded to your card', `−${money(block.refundedCents)}`));
       return rows.join('\n');
     }
     case 'allergens':
@@ -131,21 +142,21 @@ function blockText(block: MailBlock): string {
 /** The mail's text part: the same blocks, in the same order, as plain text. */
 export function mailText(content: MailContent): string {
   const name = content.shop.name;
-  return `${name ? `${name}\n\n` : ''}${content.blocks.map(blockText).join('\n\n')}\n\n${name ? `— ${name}\n` : ''}Sent with Fryline, the shop's ordering software.\n`;
+  return `${name ? `${name}\n\n` : ''}${content.blocks.map((b) => blockText(b, content.shop.currency)).join('\n\n')}\n\n${name ? `— ${name}\n` : ''}Sent with Fryline, the shop's ordering software.\n`;
 }
 
 /**
- * A mail of plain paragraphs that sign themselves off, in the same MJML frame
- * (no shop header: the caller's words carry the shop's name).
+ * A mail of plain paragraphs in the same MJML frame, under the shop's name
+ * and logo and signed with its name (the paragraphs need no sign-off).
  */
-export function paragraphMail(subject: string, paragraphs: string[]): Promise<RenderedMail> {
-  return renderMail({ subject, shop: { name: '' }, preview: paragraphs[1] ?? paragraphs[0] ?? subject, blocks: paragraphs.map((text) => ({ type: 'paragraph', text })) });
+export function paragraphMail(subject: string, paragraphs: string[], shop: MailShop): Promise<RenderedMail> {
+  return renderMail({ subject, shop, preview: paragraphs[1] ?? paragraphs[0] ?? subject, blocks: paragraphs.map((text) => ({ type: 'paragraph', text })) });
 }
 
 export async function renderMail(content: MailContent): Promise<RenderedMail> {
   const { shop } = content;
   const header = shop.logoUrl
-    ? `<mj-image src="${escape(shop.logoUrl)}" alt="${escape(shop.name)}" width="120px" align="left" padding="0" />`
+    ? `<mj-image src="${escape(shop.logoUrl)}" alt="${escape(shop.name)}" width="120px" align="left" padding="0 24px 4px" css-class="shop-logo" />`
     : '';
   const source = `<mjml lang="en">
   <mj-head>
@@ -168,7 +179,7 @@ export async function renderMail(content: MailContent): Promise<RenderedMail> {
     </mj-section>` : '<mj-section padding="12px 0 0"><mj-column><mj-spacer height="4px" /></mj-column></mj-section>'}
     <mj-section background-color="#ffffff" border-radius="16px" padding="12px 0 20px">
       <mj-column>
-        ${content.blocks.map(blockMjml).join('\n        ')}
+        ${content.blocks.map((b) => blockMjml(b, shop.currency)).join('\n        ')}
       </mj-column>
     </mj-section>
     <mj-section padding="12px 0 24px">

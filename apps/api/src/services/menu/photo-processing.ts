@@ -33,9 +33,10 @@ export interface ProcessedPhoto {
 /**
  * Turns an upload into the files we keep: turned upright as the camera
  * recorded, every piece of metadata (EXIF, GPS location, ICC, XMP) left
- * behind, and written as WebP at each width up to the photo's own.
+ * behind, and written as WebP at each width up to the photo's own (a
+ * menu photo's widths unless others are given, as for the shop's logo).
  */
-export async function processPhoto(bytes: Buffer): Promise<ProcessedPhoto> {
+export async function processPhoto(bytes: Buffer, storedWidths: readonly number[] = MENU_PHOTO_WIDTHS): Promise<ProcessedPhoto> {
   const sniffed = sniffImageType(bytes);
   if (!sniffed) throw unsupported();
   let meta: Metadata;
@@ -48,7 +49,7 @@ export async function processPhoto(bytes: Buffer): Promise<ProcessedPhoto> {
   // EXIF orientations 5–8 turn the picture a quarter turn
   const turned = (meta.orientation ?? 1) >= 5;
   const width = turned ? meta.height : meta.width;
-  const widths = [...new Set(MENU_PHOTO_WIDTHS.map((w) => Math.min(w, width)))];
+  const widths = [...new Set(storedWidths.map((w) => Math.min(w, width)))];
   const files: PhotoFileInput[] = [];
   try {
     for (const target of widths) {

@@ -2,6 +2,7 @@ import { Op } from 'sequelize';
 import { orderBill, type PricedOrder, type StaffOrderView } from '@fryline/schemas';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
+import { shopSettings } from '../shop/settings.js';
 
 /** An order row with its boxes and lines, as orderBill reads it. */
 export function billOf(order: Order): PricedOrder {
@@ -26,6 +27,7 @@ export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderVi
       { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
     ],
   });
+  const { currency } = await shopSettings();
   return orders
     .map((o) => ({
       id: o.id,
@@ -41,7 +43,7 @@ export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderVi
       boxes: [...(o.boxes ?? [])]
         .sort((a, b) => a.position - b.position)
         .map((b) => ({ size: b.size, items: (b.lines ?? []).map((l) => ({ name: l.name, quantity: l.quantity })) })),
-      priceLines: orderBill(billOf(o)).lines,
+      priceLines: orderBill(billOf(o), currency).lines,
     }))
     .sort((a, b) => a.pickupWindow.startsAt.localeCompare(b.pickupWindow.startsAt) || a.customer.name.localeCompare(b.customer.name));
 }

@@ -18,11 +18,13 @@ const SUMMARY: Array<[keyof WeeklyFigures, string]> = [
 /**
  * The week as CSV (RFC 4180: CRLF line ends, quotes where needed, a header
  * row), one figure per row with the week before beside it. Money in whole
- * cents, so a spreadsheet adds it up exactly.
+ * cents, so a spreadsheet adds it up exactly; the currency they are cents of
+ * (ISO 4217) is the row after the week's.
  */
-export function weeklyCsv(report: WeeklyReport): string {
+export function weeklyCsv(report: WeeklyReport, currency: string): string {
   const prev = report.previous;
-  const rows: Row[] = [['week', 'start', 'date', report.week.start, prev.week.start]];
+  const code = currency.toUpperCase();
+  const rows: Row[] = [['week', 'start', 'date', report.week.start, prev.week.start], ['week', 'currency', 'code', code, code]];
   for (const [key, name] of SUMMARY) rows.push(['summary', name, name.endsWith('_cents') ? 'cents' : 'count', report[key] as number, prev[key] as number]);
   rows.push(['walk_ups', 'all', 'sales', report.walkUps.sales, prev.walkUps.sales]);
   rows.push(['walk_ups', 'all', 'cents', report.walkUps.cents, prev.walkUps.cents]);

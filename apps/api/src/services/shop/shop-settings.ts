@@ -11,8 +11,9 @@ export async function getShopSettings(): Promise<ShopSettingsView> {
 
 /** What every customer sees: the business's name and logo, and the terms shown before paying. */
 export async function publicShop(): Promise<PublicShopView> {
-  const { shopName, logoUrl, currency, timeZone, refundPolicy, holdMinutes } = await shopSettings();
-  return { name: shopName, logoUrl, shopName, currency, timeZone, refundPolicy, holdMinutes };
+  const { shopName, logo, currency, timeZone, refundPolicy, holdMinutes } = await shopSettings();
+  // the storefront loads images from its own origin only, so the logo's URL here is this site's path
+  return { name: shopName, logoUrl: logo?.src ?? null, ...(logo ? { logo } : {}), shopName, currency, timeZone, refundPolicy, holdMinutes };
 }
 
 /** Saves the whole form; the audit entry lists each setting that changed, from and to. */

@@ -5,7 +5,7 @@ import { database } from '../../db/sequelize.js';
 import { User } from '../../db/models/index.js';
 import { AppError, notFound } from '../../lib/app-error.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { renderMail } from '../mail/templates.js';
+import { mailShopOf, renderMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
@@ -29,12 +29,12 @@ export async function queueStaffInvitation(
   role: Exclude<Role, 'customer'>,
   transaction: Transaction,
 ): Promise<void> {
-  const { shopName } = await shopSettings(transaction);
+  const settings = await shopSettings(transaction);
+  const { shopName } = settings;
   const article = role === 'owner' ? 'an' : 'a';
-  const { logoUrl } = await shopSettings(transaction);
   const mail = await renderMail({
     subject: `You're invited to the ${shopName} staff pages`,
-    shop: { name: shopName, logoUrl },
+    shop: mailShopOf(settings),
     preview: `${owner.name || owner.email} has added you to the ${shopName} staff as ${article} ${role}.`,
     blocks: [
       { type: 'paragraph', text: `Hello ${user.name || 'there'},` },

@@ -8,7 +8,7 @@ import { AppError, notFound } from '../../lib/app-error.js';
 import { giveBackCapacity, takeCapacity } from '../../db/queries/capacity.js';
 import { lapseDueOffers, lockNextWaiting, markOfferClaimed } from '../../db/queries/waitlist.js';
 import { enqueueMail } from '../mail/outbox.js';
-import { renderMail } from '../mail/templates.js';
+import { mailShopOf, renderMail } from '../mail/templates.js';
 import { shopSettings } from '../shop/settings.js';
 import { piecesOrderedBy } from '../../db/queries/orders.js';
 import { context } from '../../integrations/context.js';
@@ -68,7 +68,7 @@ export async function joinWaitlist(user: Me, bakeDayId: string, rings: number, h
       const what = piecesText(entry.rings, entry.holes);
       const mail = await renderMail({
         subject: `${existing ? 'Your waitlist place is updated' : "You're on the waitlist"} for ${date} — ${settings.shopName}`,
-        shop: { name: settings.shopName, logoUrl: settings.logoUrl },
+        shop: mailShopOf(settings),
         preview: `Number ${position} on the list, for ${what}.`,
         blocks: [
           { type: 'paragraph', text: `Hello ${user.name || 'there'},` },
@@ -158,7 +158,7 @@ export async function offerFreedCapacity(bakeDayId: string, transaction: Transac
     const what = piecesText(entry.rings, entry.holes);
     const mail = await renderMail({
       subject: `Doughnuts freed up for ${date} — ${settings.shopName}`,
-      shop: { name: settings.shopName, logoUrl: settings.logoUrl },
+      shop: mailShopOf(settings),
       preview: `${what} are held for you for ${OFFER_MINUTES} minutes.`,
       blocks: [
         { type: 'paragraph', text: `Hello ${user!.name || 'there'},` },

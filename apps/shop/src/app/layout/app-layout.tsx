@@ -1,7 +1,6 @@
-import { AppShell } from '@fryline/ui';
+import { AppShell, useShop } from '@fryline/ui';
 import { SiteHeader } from './site-header';
 import { SiteFooter } from './site-footer';
-import { useShop } from '../../lib/shop-info';
 
 export function AppLayout() {
   const shop = useShop();

@@ -1,6 +1,6 @@
+import { useShop } from '@fryline/ui';
 import { listWords } from '@fryline/ui/format';
 import { baseAllergens } from '../../config/site';
-import { useShop } from '../../lib/shop-info';
 
 export function SiteFooter() {
   const shop = useShop();

@@ -1,7 +1,6 @@
 import { NavLink } from 'react-router-dom';
-import { BrandLink } from '@fryline/ui';
+import { BrandLink, useShop } from '@fryline/ui';
 import { AccountMenu } from '../../features/auth/components/account-menu';
-import { useShop } from '../../lib/shop-info';
 
 const navLink = ({ isActive }: { isActive: boolean }) =>
   `rounded-full px-3 py-1.5 font-extrabold no-underline ${isActive ? 'bg-plum-100 text-plum-800' : 'text-ink hover:bg-crumb'}`;
@@ -11,9 +10,7 @@ export function SiteHeader() {
   return (
     <header className="border-b border-line bg-paper">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3">
-        <BrandLink className="min-h-9 text-2xl" logoUrl={shop?.logoUrl ?? null}>
-          {shop?.name ?? <span className="sr-only">Home</span>}
-        </BrandLink>
+        <BrandLink className="min-h-10 text-2xl" logo={shop?.logo ?? null} name={shop?.name ?? null} />
         <nav aria-label="Main" className="order-last w-full sm:order-none sm:w-auto">
           <ul className="flex gap-1">
             <li>

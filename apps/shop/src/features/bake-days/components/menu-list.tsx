@@ -1,9 +1,10 @@
-import { formatCents, type BakeDayView } from '@fryline/schemas';
+import type { BakeDayView } from '@fryline/schemas';
 import { MenuItemInfo } from '../../../components/menu-item-info';
-import { MenuPhoto } from '@fryline/ui';
+import { MenuPhoto, useMoney } from '@fryline/ui';
 
 /** The bake day's boxes and menu, to read (when orders are not open). */
 export function MenuList({ day }: { day: BakeDayView }) {
+  const money = useMoney();
   if (day.menu.length === 0) return null;
   return (
     <section aria-labelledby="menu-heading" className="flex flex-col gap-4">
@@ -14,7 +15,7 @@ export function MenuList({ day }: { day: BakeDayView }) {
         <ul className="flex flex-wrap gap-2" aria-label="Boxes and prices">
           {day.boxes.map((box) => (
             <li key={box.size} className="badge badge-plum text-sm">
-              {box.label} ({box.pieces}) · {formatCents(box.priceCents)}
+              {box.label} ({box.pieces}) · {money(box.priceCents)}
             </li>
           ))}
         </ul>

@@ -1,5 +1,6 @@
 import { useEffect, useReducer, useRef, useState, type ReactNode } from 'react';
-import { boxTakes, formatCents, type BakeDayView } from '@fryline/schemas';
+import { useMoney } from '@fryline/ui';
+import { boxTakes, type BakeDayView } from '@fryline/schemas';
 import {
   boxTitle,
   canAddBox,
@@ -41,6 +42,7 @@ function unavailableReason(kind: 'ring' | 'hole', limits: PieceLimits, used: Pie
 }
 
 export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, signedIn, renderHoldExists }: BoxBuilderProps) {
+  const money = useMoney();
   const [draft, dispatch] = useReducer(
     (state: Draft, action: DraftAction) => reduceDraft(day, state, action),
     undefined,
@@ -148,7 +150,7 @@ export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, sig
                 >
                   <span>{box.label}</span>
                   <span className="text-sm font-semibold">
-                    {fits ? `${plural(box.pieces, kind)} · from ${formatCents(box.priceCents)}` : unavailableReason(kind, limits, used, Boolean(claimToken))}
+                    {fits ? `${plural(box.pieces, kind)} · from ${money(box.priceCents)}` : unavailableReason(kind, limits, used, Boolean(claimToken))}
                   </span>
                 </button>
               );
@@ -164,7 +166,7 @@ export function BoxBuilder({ day, scope, limits = day.remaining, claimToken, sig
       <div className="sticky bottom-0 z-10 -mx-4 border-t border-line bg-paper px-4 py-3 shadow-[0_-6px_16px_-12px_rgb(43_24_48/0.35)] sm:mx-0 sm:rounded-2xl sm:border">
         <div className="flex items-center justify-between gap-3">
           <p aria-live="polite">
-            <span className="block text-xl font-extrabold">{formatCents(price.totalCents)}</span>
+            <span className="block text-xl font-extrabold">{money(price.totalCents)}</span>
             <span className="text-sm text-muted">
               {plural(draft.boxes.length, 'box', 'boxes')}
               {price.taxCents > 0 && day.tax.mode === 'added' && ' · tax included'}

@@ -1,8 +1,8 @@
 import { useId, useState, type Dispatch } from 'react';
-import { formatCents, type BakeDayView } from '@fryline/schemas';
+import type { BakeDayView } from '@fryline/schemas';
 import { boxOf, filledCount, itemsForBox, type DraftAction, type DraftBox } from '../model/draft';
 import { MenuItemInfo } from '../../../components/menu-item-info';
-import { MenuPhoto } from '@fryline/ui';
+import { MenuPhoto, useMoney } from '@fryline/ui';
 import { QuantityStepper } from './quantity-stepper';
 
 interface BoxEditorProps {
@@ -15,6 +15,7 @@ interface BoxEditorProps {
 
 /** One box: a counter of how full it is, a stepper per menu item, and a "fill the rest" helper. */
 export function BoxEditor({ day, box, title, priceCents, dispatch }: BoxEditorProps) {
+  const money = useMoney();
   const pieces = boxOf(day, box.size)?.pieces ?? 0;
   const items = itemsForBox(day, box.size);
   const filled = filledCount(box);
@@ -29,7 +30,7 @@ export function BoxEditor({ day, box, title, priceCents, dispatch }: BoxEditorPr
           {title}
         </h3>
         <div className="flex items-center gap-3">
-          <span className="font-extrabold">{formatCents(priceCents)}</span>
+          <span className="font-extrabold">{money(priceCents)}</span>
           <button
             type="button"
             className="btn btn-quiet btn-small"

@@ -1,9 +1,10 @@
 import { useState, type ReactNode } from 'react';
+import { shopQuery, useCurrency, useMoney } from '@fryline/ui';
 import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { createOrderSchema, type BakeDayView, formatCents } from '@fryline/schemas';
+import { createOrderSchema, type BakeDayView } from '@fryline/schemas';
 import { useCreateOrder } from '../api/use-create-order';
 import { boxOf, boxTitle, previewBill, toBoxInputs, type Draft } from '../model/draft';
 import { PriceLines } from '../../../components/price-lines';
@@ -14,7 +15,6 @@ import { goToSignIn, signInUrl, currentPath } from '../../../lib/sign-in';
 import { AllergenCaution } from '../../../components/allergen-caution';
 import { allergensOf } from '../../../components/allergen-list';
 import { RefundPolicy } from '../../../components/refund-policy';
-import { shopQueries } from '../../../lib/shop-queries';
 
 const consentSchema = z.object({
   allergensRead: z.boolean().refine((ticked) => ticked, 'Please tick the box to say you have read the allergens.'),
@@ -39,14 +39,16 @@ interface OrderReviewProps {
 
 /** The last step: everything in the order, its price and allergens, a required tick, then payment. */
 export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, renderHoldExists }: OrderReviewProps) {
+  const money = useMoney();
+  const currency = useCurrency();
   const createOrder = useCreateOrder();
-  const holdMinutes = useQuery(shopQueries.info()).data?.holdMinutes;
+  const holdMinutes = useQuery(shopQuery()).data?.holdMinutes;
   const [messages, setMessages] = useState<string[]>([]);
   const [holdOrderId, setHoldOrderId] = useState<string | null>(null);
   const form = useForm<Consent>({ resolver: zodResolver(consentSchema), defaultValues: { allergensRead: false } });
   const consentError = form.formState.errors.allergensRead?.message;
 
-  const bill = previewBill(day, draft);
+  const bill = previewBill(day, draft, currency);
   const pickupWindow = day.pickupWindows.find((w) => w.id === draft.pickupWindowId);
   const menu = new Map(day.menu.map((item) => [item.id, item]));
   const chosenItems = draft.boxes.flatMap((box) => Object.keys(box.items).flatMap((id) => menu.get(id) ?? []));
@@ -183,7 +185,7 @@ export function OrderReview({ day, draft, scope, claimToken, signedIn, onBack, r
             ) : (
               <button type="submit" className="btn btn-primary" aria-disabled={busy}>
                 {busy && <span className="spinner" aria-hidden="true" />}
-                {leaving ? 'Taking you to payment…' : `Pay ${formatCents(bill.totalCents)}`}
+                {leaving ? 'Taking you to payment…' : `Pay ${money(bill.totalCents)}`}
               </button>
             )}
           </div>

@@ -98,9 +98,9 @@ export function previewPrice(day: BakeDayView, draft: Draft): OrderPrice {
 }
 
 /** The preview as bill lines that add up to its total. */
-export function previewBill(day: BakeDayView, draft: Draft): OrderBill {
+export function previewBill(day: BakeDayView, draft: Draft, currency?: string): OrderBill {
   const boxes = pricedBoxes(day, draft);
-  return orderBill({ boxes, ...previewPrice(day, draft) });
+  return orderBill({ boxes, ...previewPrice(day, draft) }, currency);
 }
 
 export function boxTitle(day: BakeDayView, draft: Draft, box: DraftBox): string {

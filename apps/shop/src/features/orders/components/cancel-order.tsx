@@ -1,13 +1,14 @@
 import { useState } from 'react';
-import { formatCents, type OrderView } from '@fryline/schemas';
+import type { OrderView } from '@fryline/schemas';
 import { useCancelOrder } from '../api/use-order-actions';
-import { ConfirmDialog } from '@fryline/ui';
+import { ConfirmDialog, useMoney } from '@fryline/ui';
 import { useToast } from '../../../components/toast';
 import { errorMessage, isApiError } from '@fryline/ui/api-client';
 import { formatMoment } from '@fryline/ui/format';
 
 /** "Cancel order" with a confirmation; for a paid order that means a refund. */
 export function CancelOrder({ order, onCancelled }: { order: OrderView; onCancelled?: () => void }) {
+  const money = useMoney();
   const [open, setOpen] = useState(false);
   const cancel = useCancelOrder();
   const toast = useToast();
@@ -49,7 +50,7 @@ export function CancelOrder({ order, onCancelled }: { order: OrderView; onCancel
         ) : (
           <>
             <p>
-              We refund {formatCents(order.totalCents)} to the card you paid with, and the doughnuts go back on sale.
+              We refund {money(order.totalCents)} to the card you paid with, and the doughnuts go back on sale.
               This cannot be undone.
             </p>
             <p className="text-sm text-muted">

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
+import { useMoney } from '@fryline/ui';
 import { orderQueries } from '../api/order-queries';
-import { formatCents } from '@fryline/schemas';
 import { formatDate } from '@fryline/ui/format';
 import { CancelOrder } from './cancel-order';
 import { ResumePayment } from './resume-payment';
@@ -13,9 +13,10 @@ interface ExistingHoldProps {
 
 /** Shown when a new order is refused because an unpaid one is still on hold. */
 export function ExistingHold({ orderId, onResolved }: ExistingHoldProps) {
+  const money = useMoney();
   const order = useQuery(orderQueries.detail(orderId));
   const summary = order.data
-    ? ` (${formatDate(order.data.bakeDay.date, order.data.bakeDay.timeZone)}, ${formatCents(order.data.totalCents)})`
+    ? ` (${formatDate(order.data.bakeDay.date, order.data.bakeDay.timeZone)}, ${money(order.data.totalCents)})`
     : '';
   return (
     <div role="alert" className="notice notice-warn flex flex-col gap-3">

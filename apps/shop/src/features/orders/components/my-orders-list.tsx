@@ -2,14 +2,15 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { orderQueries } from '../api/order-queries';
 import { isApiError } from '@fryline/ui/api-client';
-import { boxLabel, formatCents } from '@fryline/schemas';
+import { boxLabel } from '@fryline/schemas';
 import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '@fryline/ui';
+import { ErrorState, LoadingState, Notice, useMoney } from '@fryline/ui';
 import { OrderStatusBadge } from './order-status';
 
 /** The signed-in customer's orders, newest first. */
 export function MyOrdersList() {
+  const money = useMoney();
   const orders = useQuery(orderQueries.list());
 
   if (orders.isPending) return <LoadingState label="Loading your orders…" />;
@@ -56,7 +57,7 @@ export function MyOrdersList() {
                 {order.bakeDay.place} · {formatClockRange(order.pickupWindow.startsAt, order.pickupWindow.endsAt, tz)}
               </span>
               <span className="text-sm text-muted">
-                {boxes} · {formatCents(order.totalCents)}
+                {boxes} · {money(order.totalCents)}
                 {order.pickupCode && order.status === 'paid' && <> · code {order.pickupCode}</>}
               </span>
             </Link>

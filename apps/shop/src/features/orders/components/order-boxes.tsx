@@ -1,12 +1,14 @@
 import { boxLabel, orderBill, type OrderView } from '@fryline/schemas';
 import { PriceLines } from '../../../components/price-lines';
 import { listWords } from '@fryline/ui/format';
+import { useCurrency } from '@fryline/ui';
 import { allergensOf, AllergenList } from '../../../components/allergen-list';
 
 /** What is in the order, what it cost, and its allergens. */
 export function OrderBoxes({ order }: { order: OrderView }) {
   const allergens = allergensOf(order.boxes.flatMap((box) => box.items));
-  const bill = orderBill(order);
+  const currency = useCurrency();
+  const bill = orderBill(order, currency);
   return (
     <section className="card" aria-labelledby="boxes-heading">
       <h2 id="boxes-heading" className="text-lg">

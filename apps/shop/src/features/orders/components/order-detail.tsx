@@ -1,13 +1,13 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useSearchParams } from 'react-router-dom';
-import { formatCents, type OrderDetail } from '@fryline/schemas';
+import type { OrderDetail } from '@fryline/schemas';
 import { orderQueries } from '../api/order-queries';
 import { site } from '../../../config/site';
 import { isApiError } from '@fryline/ui/api-client';
 import { formatClock, formatCutoff, formatDate } from '@fryline/ui/format';
 import { signInUrl, currentPath } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice } from '@fryline/ui';
+import { ErrorState, LoadingState, Notice, useMoney } from '@fryline/ui';
 import { PageTitle } from '../../../components/page-title';
 import { OrderStatusBadge } from './order-status';
 import { OrderBoxes } from './order-boxes';
@@ -27,6 +27,7 @@ interface OrderDetailProps {
  * the redirect alone proves nothing.
  */
 export function OrderDetail({ id, renderMove }: OrderDetailProps) {
+  const money = useMoney();
   const [params, setParams] = useSearchParams();
   const returnedFromPayment = params.get('paid') === '1';
   const paymentCancelled = params.get('payment') === 'cancelled';
@@ -144,14 +145,14 @@ export function OrderDetail({ id, renderMove }: OrderDetailProps) {
         {data.status === 'cancelled' && (
           <Notice>
             <p className="font-extrabold">This order was cancelled.</p>
-            {data.refundedCents > 0 && <p>{formatCents(data.refundedCents)} goes back to the card you paid with.</p>}
+            {data.refundedCents > 0 && <p>{money(data.refundedCents)} goes back to the card you paid with.</p>}
           </Notice>
         )}
         {data.status === 'refunded' && (
           <Notice>
             <p className="font-extrabold">This order was refunded.</p>
             <p>
-              {formatCents(data.refundedCents)} goes back to the card you paid with. Banks can take a few days to show
+              {money(data.refundedCents)} goes back to the card you paid with. Banks can take a few days to show
               it.
             </p>
           </Notice>

@@ -1,7 +1,7 @@
 import { useWatch } from 'react-hook-form';
 import { boxCatalogue, boxTakes, type BoxSize } from '@fryline/schemas';
 import { ListError } from '../../../components/row-controls';
-import { FieldShell } from '@fryline/ui';
+import { FieldShell, useCurrencySign } from '@fryline/ui';
 import type { NewBakeDayForm } from './pickup-windows-fieldset';
 
 /** "Offer a dozen (12 rings)", "Price of a dozen": the catalogue's names in the form's words. */
@@ -12,8 +12,9 @@ function boxWords(size: BoxSize): { offer: string; price: string } {
   return { offer: `Offer ${name}${fixed}`, price: `Price of ${name}` };
 }
 
-/** The boxes on sale that day, each with its price in dollars; the bag of holes also says how many it holds. */
+/** The boxes on sale that day, each with its price in the shop's currency; the bag of holes also says how many it holds. */
 export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
+  const sign = useCurrencySign();
   const { register, control, formState } = form;
   const boxes = useWatch({ control, name: 'boxes' });
   const errors = formState.errors.boxes;
@@ -38,7 +39,7 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
               </label>
               {box.offered && (
                 <div className="mt-2 grid grid-cols-2 gap-3 sm:max-w-md">
-                  <FieldShell id={`${id}-price`} label={`${words.price} ($)`} error={rowErrors?.price?.message}>
+                  <FieldShell id={`${id}-price`} label={`${words.price} (${sign})`} error={rowErrors?.price?.message}>
                     {(input) => (
                       <div className="relative">
                         <span aria-hidden="true" className="absolute inset-y-0 left-3 flex items-center font-semibold text-muted">

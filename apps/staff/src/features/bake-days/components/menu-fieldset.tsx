@@ -1,4 +1,5 @@
-import { formatCents, type MenuItemAdminView } from '@fryline/schemas';
+import type { MenuItemAdminView } from '@fryline/schemas';
+import { useMoney } from '@fryline/ui';
 import type { NewBakeDayForm } from './pickup-windows-fieldset';
 
 const kinds = [
@@ -8,6 +9,7 @@ const kinds = [
 
 /** What is on sale that day: every active menu item as a checkbox, rings and holes apart. */
 export function MenuFieldset({ form, items }: { form: NewBakeDayForm; items: readonly MenuItemAdminView[] }) {
+  const money = useMoney();
   const active = items.filter((item) => item.active);
   const error = form.formState.errors.menuItemIds;
   const message = error?.root?.message ?? error?.message;
@@ -37,7 +39,7 @@ export function MenuFieldset({ form, items }: { form: NewBakeDayForm; items: rea
                       <span>
                         <span className="font-semibold">{item.name}</span>
                         {item.surchargeCents > 0 && (
-                          <span className="text-muted"> · {formatCents(item.surchargeCents)} extra</span>
+                          <span className="text-muted"> · {money(item.surchargeCents)} extra</span>
                         )}
                         {item.allergens.length > 0 && (
                           <span className="block text-sm text-muted">Contains {item.allergens.join(', ')}</span>

@@ -259,7 +259,7 @@ describe('the form’s values as the API body', () => {
       'windows.1.maxOrders': 'At least 1',
       menuItemIds: 'Put at least one item on the menu',
       'boxes.1.price': 'Give the price',
-      'boxes.2.price': 'Write the price in dollars, like 16.50',
+      'boxes.2.price': 'Write the price as a number, like 16.50',
       'boxes.2.pieces': 'Between 1 and 60',
       ringCapacity: 'Write a whole number of rings',
       cutoffAt: 'Pick a date and a time',

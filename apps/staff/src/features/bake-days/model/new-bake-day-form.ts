@@ -26,7 +26,7 @@ export interface WindowRow {
   maxOrders: string;
 }
 
-/** One box size: offered or not, how many it holds and its price in dollars as typed. */
+/** One box size: offered or not, how many it holds and its price as typed (in the shop's currency). */
 export interface BoxRow {
   size: BoxSize;
   offered: boolean;
@@ -226,8 +226,8 @@ export function toCreateBakeDay(values: NewBakeDayValues): Conversion {
     const row = values.boxes[index]!;
     const cents = parseCents(row.price);
     if (row.price.trim() === '') note(`boxes.${index}.price`, 'Give the price');
-    else if (cents === null) note(`boxes.${index}.price`, 'Write the price in dollars, like 16.50');
-    else if (cents > 100_000) note(`boxes.${index}.price`, 'At most $1,000.00');
+    else if (cents === null) note(`boxes.${index}.price`, 'Write the price as a number, like 16.50');
+    else if (cents > 100_000) note(`boxes.${index}.price`, 'At most 1,000.00');
     if (!Number.isInteger(row.pieces) || row.pieces < 1 || row.pieces > 60) note(`boxes.${index}.pieces`, 'Between 1 and 60');
     return { size: row.size, pieces: row.pieces, priceCents: cents ?? Number.NaN };
   });

@@ -1,5 +1,6 @@
 import { onlineManager, useMutation, useMutationState, useQueryClient, type Mutation, type QueryClient } from '@tanstack/react-query';
-import type { MarkRestNoShowResult, PaymentMethod, PickupRow, WalkUpSale } from '@fryline/schemas';
+import { formatCents, type MarkRestNoShowResult, type PaymentMethod, type PickupRow, type WalkUpSale } from '@fryline/schemas';
+import { shopQuery } from '@fryline/ui';
 import { api, ApiError } from '@fryline/ui/api-client';
 import { addConflict } from '../model/conflicts';
 import type { CounterActionName, PendingChange } from '../model/pickups';
@@ -90,7 +91,7 @@ export function registerCounterMutations(queryClient: QueryClient) {
         headers(v.key),
       ),
     onError: (error: unknown, v: WalkUpChange) => {
-      const what = `Walk-up sale: ${v.items.map((i) => `${i.quantity} ${i.name}`).join(', ')} (${v.method}, $${(v.amountCents / 100).toFixed(2)})`;
+      const what = `Walk-up sale: ${v.items.map((i) => `${i.quantity} ${i.name}`).join(', ')} (${v.method}, ${formatCents(v.amountCents, queryClient.getQueryData(shopQuery().queryKey)?.currency)})`;
       addConflict({ what, reason: error instanceof ApiError ? error.message : String(error), code: error instanceof ApiError ? error.code : 'error' });
     },
     onSettled: (_d: unknown, _e: unknown, v: WalkUpChange) => afterChange(queryClient, v.bakeDayId),

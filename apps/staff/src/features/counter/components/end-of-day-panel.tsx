@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import { formatCents } from '@fryline/schemas';
+
 import { formatPieces, plural } from '@fryline/ui/format';
-import { ErrorState, LoadingState } from '@fryline/ui';
+import { ErrorState, LoadingState, useMoney } from '@fryline/ui';
 import { counterQueries } from '../api/counter-queries';
 import { restForNoShow, type ShownRow } from '../model/pickups';
 import { RestNoShowButton } from './rest-no-show';
@@ -24,6 +24,7 @@ function Figure({ label, value, detail }: { label: string; value: string; detail
 
 /** The day's close: what was handed over, no-shows, walk-ups by how they were paid, the cash to count, what is left. */
 export function EndOfDayPanel({ bakeDayId, rows, now }: { bakeDayId: string; rows: ShownRow[]; now: number }) {
+  const money = useMoney();
   const eod = useQuery({ ...counterQueries.endOfDay(bakeDayId), refetchInterval: 10_000 });
   const online = useOnline();
   const member = useStaffMember();
@@ -39,7 +40,7 @@ export function EndOfDayPanel({ bakeDayId, rows, now }: { bakeDayId: string; row
           Cash to count in the box
         </h2>
         <p className="text-4xl font-extrabold" data-testid="cash-to-count">
-          {formatCents(d.cashToCountCents)}
+          {money(d.cashToCountCents)}
         </p>
         <p className="text-muted">From {plural(d.walkUps.byMethod.cash.sales, 'cash walk-up sale')}, on top of the float you started with.</p>
       </section>
@@ -47,9 +48,9 @@ export function EndOfDayPanel({ bakeDayId, rows, now }: { bakeDayId: string; row
         <Figure label="Handed over" value={plural(d.orders.handedOver, 'order')} detail={formatPieces(d.pieces.handedOver.rings, d.pieces.handedOver.holes)} />
         <Figure label="Still to hand over" value={plural(d.orders.toHandOver, 'order')} detail={formatPieces(d.pieces.toHandOver.rings, d.pieces.toHandOver.holes)} />
         <Figure label="No-shows" value={plural(d.orders.noShows, 'order')} detail={formatPieces(d.pieces.noShows.rings, d.pieces.noShows.holes)} />
-        <Figure label="Walk-up sales" value={formatCents(d.walkUps.totalCents)} detail={`${plural(d.walkUps.sales, 'sale')}: ${formatPieces(d.walkUps.rings, d.walkUps.holes)}`} />
-        <Figure label="Paid by cash" value={formatCents(d.walkUps.byMethod.cash.amountCents)} detail={plural(d.walkUps.byMethod.cash.sales, 'sale')} />
-        <Figure label="Paid by card" value={formatCents(d.walkUps.byMethod.card.amountCents)} detail={`${plural(d.walkUps.byMethod.card.sales, 'sale')}, on the card reader`} />
+        <Figure label="Walk-up sales" value={money(d.walkUps.totalCents)} detail={`${plural(d.walkUps.sales, 'sale')}: ${formatPieces(d.walkUps.rings, d.walkUps.holes)}`} />
+        <Figure label="Paid by cash" value={money(d.walkUps.byMethod.cash.amountCents)} detail={plural(d.walkUps.byMethod.cash.sales, 'sale')} />
+        <Figure label="Paid by card" value={money(d.walkUps.byMethod.card.amountCents)} detail={`${plural(d.walkUps.byMethod.card.sales, 'sale')}, on the card reader`} />
       </dl>
       <section aria-labelledby="left-heading" className="card">
         <h2 id="left-heading" className="text-lg">

@@ -1,11 +1,14 @@
 import { useState } from 'react';
-import { formatCents, parseMoney, type PaymentMethod, type Surplus } from '@fryline/schemas';
+import { useCurrency, useMoney } from '@fryline/ui';
+import { currencySymbol, parseMoney, type PaymentMethod, type Surplus } from '@fryline/schemas';
 import { plural } from '@fryline/ui/format';
 import { useWalkUpSale } from '../api/counter-mutations';
 import { useOnline } from './use-online';
 
 /** Sell what is left to someone without a pre-order: items, cash or card (on the card reader), and the amount taken. */
 export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus: Surplus }) {
+  const money = useMoney();
+  const currency = useCurrency();
   const [counts, setCounts] = useState<Record<string, number>>({});
   const [method, setMethod] = useState<PaymentMethod>('cash');
   const [amount, setAmount] = useState('');
@@ -26,12 +29,12 @@ export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus:
       onSubmit={(e) => {
         e.preventDefault();
         setMessage(null);
-        const money = parseMoney(amount);
+        const typed = parseMoney(amount);
         if (chosen.length === 0) return setProblem('Add at least one doughnut.');
-        if (!money.ok) return setProblem(money.message);
-        const cents = money.cents;
+        if (!typed.ok) return setProblem(typed.message);
+        const cents = typed.cents;
         setProblem(null);
-        const what = `${formatCents(cents)} ${method}`;
+        const what = `${money(cents)} ${method}`;
         sell(
           { bakeDayId, method, amountCents: cents, items: chosen.map((i) => ({ menuItemId: i.menuItemId, name: i.name, quantity: counts[i.menuItemId]! })) },
           { onSuccess: () => setMessage(`Sale recorded: ${what}.`), onError: () => setMessage(null) },
@@ -76,7 +79,7 @@ export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus:
         </div>
       </fieldset>
       <label className="flex flex-col gap-1">
-        <span className="font-extrabold">Amount taken ($)</span>
+        <span className="font-extrabold">Amount taken ({currencySymbol(currency)})</span>
         <input className="field-input min-h-14 text-lg" inputMode="decimal" autoComplete="off" value={amount} onChange={(e) => setAmount(e.target.value)} placeholder="0.00" />
       </label>
       {problem && (

@@ -1,9 +1,9 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { centsPerKgFromText, priceText, type PriceUnit } from '../model/prices';
-import { FieldShell, fieldAria } from '@fryline/ui';
+import { FieldShell, fieldAria, useCurrencySign } from '@fryline/ui';
 
 /**
- * A price typed in dollars a kg or a lb while the form keeps whole cents a
+ * A price typed in the shop's currency a kg or a lb while the form keeps whole cents a
  * kg. The typed text stays as typed, and is shown afresh only when the
  * price changes from outside (a reset, the other weight unit).
  */
@@ -25,6 +25,7 @@ export function PriceInput({
   help?: ReactNode;
   error?: string;
 }) {
+  const sign = useCurrencySign();
   const [text, setText] = useState(() => priceText(cents, unit));
   const read = (typed: string) => (typed.trim() === '' ? undefined : centsPerKgFromText(typed, unit));
 
@@ -39,7 +40,7 @@ export function PriceInput({
     <FieldShell id={id} label={label} help={help} error={error}>
       <div className="relative">
         <span aria-hidden="true" className="pointer-events-none absolute top-1/2 left-3 -translate-y-1/2 font-semibold text-muted">
-          $
+          {sign}
         </span>
         <input
           id={id}

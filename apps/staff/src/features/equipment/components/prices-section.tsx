@@ -1,7 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useController, useWatch } from 'react-hook-form';
-import { formatCents } from '@fryline/schemas';
-import { Caution, ErrorState } from '@fryline/ui';
+import { Caution, ErrorState, useMoney } from '@fryline/ui';
 import { productionQueries } from '../../../lib/queries/production-queries';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
@@ -22,8 +21,8 @@ function priceLabel(name: string, unit: PriceUnit, missing = false) {
 }
 
 /** "stored as $4.41/kg", shown when prices are typed a pound. */
-function storedAs(cents: number | undefined, unit: PriceUnit): string | undefined {
-  return unit === 'lb' && cents !== undefined && Number.isFinite(cents) ? `Kept as ${formatCents(cents)}/kg` : undefined;
+function storedAs(cents: number | undefined, unit: PriceUnit, money: (cents: number) => string): string | undefined {
+  return unit === 'lb' && cents !== undefined && Number.isFinite(cents) ? `Kept as ${money(cents)}/kg` : undefined;
 }
 
 function joinNames(names: string[]): string {
@@ -35,6 +34,7 @@ function joinNames(names: string[]): string {
  * formula's lines and the glazes' parts), and of the frying oil.
  */
 export function PricesSection({ form }: { form: SettingsForm }) {
+  const money = useMoney();
   const [{ mass }] = useUnits();
   const unit = priceUnitFor(mass);
   const formulas = useQuery(productionQueries.formulas());
@@ -96,7 +96,7 @@ export function PricesSection({ form }: { form: SettingsForm }) {
               unit={unit}
               cents={cents}
               onCents={(next) => setPrice(name, next)}
-              help={[usedIn.join(', '), storedAs(cents, unit)].filter(Boolean).join(' · ')}
+              help={[usedIn.join(', '), storedAs(cents, unit, money)].filter(Boolean).join(' · ')}
               error={problem(path, cents)}
             />
           );
@@ -111,7 +111,7 @@ export function PricesSection({ form }: { form: SettingsForm }) {
             {unused.map((name) => (
               <li key={name} className="flex items-center gap-2 rounded-full bg-crumb py-1 pr-1 pl-3 text-sm">
                 <span>
-                  {name} · {formatCents(record[name] ?? 0)}/kg
+                  {name} · {money(record[name] ?? 0)}/kg
                 </span>
                 <button type="button" className="btn btn-quiet btn-small" onClick={() => setPrice(name, undefined)}>
                   Forget<span className="sr-only"> the price of {name}</span>
@@ -129,7 +129,7 @@ export function PricesSection({ form }: { form: SettingsForm }) {
           unit={unit}
           cents={oil.value}
           onCents={setOil}
-          help={storedAs(oil.value, unit)}
+          help={storedAs(oil.value, unit, money)}
           error={problem('prices.fryingOilCentsPerKg', oil.value)}
         />
         <SettingsField

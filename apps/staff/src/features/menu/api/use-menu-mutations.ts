@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { MenuItemAdminView, MenuItemInput, MenuItemPatch } from '@fryline/schemas';
+import { MENU_PHOTO_FIELD, type MenuItemAdminView, type MenuItemInput, type MenuItemPatch } from '@fryline/schemas';
 import { api, errorMessage } from '@fryline/ui/api-client';
 import { queryRoots } from '../../../lib/query-keys';
 import { menuRoot } from './menu-queries';
-import { uploadMenuPhoto } from './upload-photo';
+import { uploadImage } from '../../../lib/upload-image';
 
 const itemPath = (id: string) => `/api/staff/menu-items/${encodeURIComponent(id)}`;
 
@@ -43,7 +43,7 @@ export function useSaveMenuItem() {
         : await api.post<MenuItemAdminView>('/api/staff/menu-items', body);
       if (photo) {
         try {
-          return { item: { ...saved, photo: await uploadMenuPhoto(saved.id, photo) } };
+          return { item: { ...saved, photo: await uploadImage(`${itemPath(saved.id)}/photo`, MENU_PHOTO_FIELD, photo) } };
         } catch (error) {
           return { item: saved, photoError: errorMessage(error) };
         }

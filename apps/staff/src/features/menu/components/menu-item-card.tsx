@@ -1,12 +1,13 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { formatCents, type MenuItemAdminView } from '@fryline/schemas';
-import { ConfirmDialog, MenuPhoto } from '@fryline/ui';
+import type { MenuItemAdminView } from '@fryline/schemas';
+import { ConfirmDialog, MenuPhoto, useMoney } from '@fryline/ui';
 import { errorMessage } from '@fryline/ui/api-client';
 import { useArchiveMenuItem } from '../api/use-menu-mutations';
 
 /** One item on the owner's menu page: photo, what it is, its allergens, and what can be done with it. */
 export function MenuItemCard({ item }: { item: MenuItemAdminView }) {
+  const money = useMoney();
   const archive = useArchiveMenuItem();
   const [asking, setAsking] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -33,7 +34,7 @@ export function MenuItemCard({ item }: { item: MenuItemAdminView }) {
         <h3 className="text-lg leading-tight">{item.name}</h3>
         {detail && <p className="text-sm text-muted">{detail}</p>}
         <p className="text-sm">
-          {item.surchargeCents > 0 ? <span className="font-semibold text-sugar-700">+{formatCents(item.surchargeCents)} each</span> : 'No extra charge'}
+          {item.surchargeCents > 0 ? <span className="font-semibold text-sugar-700">+{money(item.surchargeCents)} each</span> : 'No extra charge'}
         </p>
         <p className="text-sm">
           <span className="font-extrabold">Allergens:</span> {item.allergens.length > 0 ? item.allergens.join(', ') : <span className="text-brick-700">none ticked</span>}

@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router-dom';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { MenuItemAdminView, MenuItemInput, ProductionSettingsInput } from '@fryline/schemas';
-import { FieldShell, fieldAria } from '@fryline/ui';
+import { FieldShell, fieldAria, useCurrencySign } from '@fryline/ui';
 import { putFieldErrors } from '@fryline/ui/api-client';
 import { useSaveMenuItem } from '../api/use-menu-mutations';
 import { allergenChoices, blankMenuForm, formFromItem, menuFormSchema, patchFrom, type MenuFormValues } from '../model/menu-form';
@@ -15,6 +15,7 @@ const fields = ['name', 'kind', 'flavour', 'glaze', 'glazeRecipeId', 'allergens'
 
 /** Adds an item, or edits one, with its photo. */
 export function MenuItemForm({ item, glazes, initialPhotoError }: { item?: MenuItemAdminView; glazes: readonly Glaze[]; initialPhotoError?: string }) {
+  const sign = useCurrencySign();
   const navigate = useNavigate();
   const save = useSaveMenuItem();
   const form = useForm<MenuFormValues, unknown, MenuItemInput>({
@@ -105,7 +106,7 @@ export function MenuItemForm({ item, glazes, initialPhotoError }: { item?: MenuI
         <FieldShell id="menu-glaze" label="Glaze as customers read it" optional help="Leave empty to use the recipe's name." error={errors.glaze?.message}>
           <input id="menu-glaze" className="field-input" autoComplete="off" {...aria('menu-glaze', errors.glaze?.message, true)} {...register('glaze')} />
         </FieldShell>
-        <FieldShell id="menu-surcharge" label="Extra charge per piece" unit="$" help="Added to the box price for each one in a box; 0 for none." error={errors.surchargeCents?.message}>
+        <FieldShell id="menu-surcharge" label="Extra charge per piece" unit={sign} help="Added to the box price for each one in a box; 0 for none." error={errors.surchargeCents?.message}>
           <input id="menu-surcharge" className="field-input" inputMode="decimal" autoComplete="off" {...aria('menu-surcharge', errors.surchargeCents?.message, true)} {...register('surchargeCents')} />
         </FieldShell>
         <FieldShell id="menu-description" label="Short description" optional className="sm:col-span-2" error={errors.description?.message}>

@@ -1,7 +1,8 @@
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useRef } from 'react';
 import type { MenuPhotoView } from '@fryline/schemas';
 import { MenuPhoto } from '@fryline/ui';
 import { photoProblem } from '../model/menu-form';
+import { ImageFileInput, usePreviewUrl } from '../../../lib/image-file';
 
 interface PhotoFieldProps {
   current: MenuPhotoView | null | undefined;
@@ -17,17 +18,7 @@ interface PhotoFieldProps {
 export function PhotoField({ current, itemName, chosen, remove, error, onChoose, onRemove }: PhotoFieldProps) {
   const id = useId();
   const input = useRef<HTMLInputElement>(null);
-  const [preview, setPreview] = useState<string | null>(null);
-
-  useEffect(() => {
-    if (!chosen) {
-      setPreview(null);
-      return;
-    }
-    const url = URL.createObjectURL(chosen);
-    setPreview(url);
-    return () => URL.revokeObjectURL(url);
-  }, [chosen]);
+  const preview = usePreviewUrl(chosen);
 
   return (
     <fieldset className="flex flex-col gap-2">
@@ -45,21 +36,13 @@ export function PhotoField({ current, itemName, chosen, remove, error, onChoose,
           )}
         </div>
         <div className="flex min-w-0 flex-1 flex-col gap-2">
-          <label htmlFor={id} className="font-semibold">
-            {current ? 'Choose another photo' : 'Choose a photo'}
-          </label>
-          <input
+          <ImageFileInput
             ref={input}
             id={id}
-            type="file"
-            accept="image/jpeg,image/png,image/webp"
-            aria-describedby={`${id}-help${error ? ` ${id}-error` : ''}`}
-            aria-invalid={error ? true : undefined}
-            className="max-w-full text-sm"
-            onChange={(event) => {
-              const file = event.target.files?.[0] ?? null;
-              onChoose(file, file ? photoProblem(file) : null);
-            }}
+            label={current ? 'Choose another photo' : 'Choose a photo'}
+            describedBy={`${id}-help${error ? ` ${id}-error` : ''}`}
+            invalid={Boolean(error)}
+            onFile={(file) => onChoose(file, file ? photoProblem(file) : null)}
           />
           <p id={`${id}-help`} className="text-sm text-muted">
             JPEG, PNG or WebP, up to 8 MB. We keep a few smaller copies for phones and leave out the camera details and

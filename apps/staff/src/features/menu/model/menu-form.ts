@@ -4,12 +4,12 @@ import {
   centsToInput,
   menuItemInputSchema,
   moneyTextSchema,
-  MENU_PHOTO_MAX_BYTES,
   type Allergen,
   type MenuItemAdminView,
   type MenuItemInput,
   type MenuItemPatch,
 } from '@fryline/schemas';
+import { imageProblem } from '../../../lib/upload-image';
 
 /** The nine, in the order the form lists them: the three in every doughnut first. */
 export const allergenChoices: readonly Allergen[] = ['wheat', 'milk', 'eggs', 'soybeans', 'tree nuts', 'peanuts', 'sesame', 'fish', 'crustacean shellfish'];
@@ -59,13 +59,5 @@ export function patchFrom(item: MenuItemAdminView, input: MenuItemInput): MenuIt
   return patch as MenuItemPatch;
 }
 
-const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'];
-
-/** A first check in the browser, so a wrong file is named before it is sent; the server checks the content again. */
-export function photoProblem(file: File): string | null {
-  if (file.size > MENU_PHOTO_MAX_BYTES) {
-    return `This photo is ${(file.size / 1024 / 1024).toFixed(1)} MB; the limit is ${MENU_PHOTO_MAX_BYTES / 1024 / 1024} MB. Choose a smaller one.`;
-  }
-  if (file.type && !PHOTO_TYPES.includes(file.type)) return 'Choose a JPEG, PNG or WebP photo.';
-  return null;
-}
+/** Why a chosen photo can't be sent, or null (the server checks again, by content). */
+export const photoProblem = (file: File) => imageProblem(file, 'photo');

@@ -1,9 +1,9 @@
 import { useDeferredValue, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { formatCents, type RefundView, type StaffOrderView } from '@fryline/schemas';
+import { type RefundView, type StaffOrderView } from '@fryline/schemas';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '@fryline/ui';
+import { ErrorState, LoadingState, useMoney } from '@fryline/ui';
 import { isApiError } from '@fryline/ui/api-client';
 import { formatClockRange, formatDate, plural } from '@fryline/ui/format';
 import { bakeDayOrdersQueries } from '../api/bake-day-orders-queries';
@@ -30,6 +30,7 @@ function BackLink() {
 
 /** Every order of one bake day (`/staff/bake-days/:id`), by pickup window, with search and refunds. */
 export function BakeDayOrdersPage({ bakeDayId, canRefund }: BakeDayOrdersPageProps) {
+  const money = useMoney();
   const day = useQuery(bakeDayOrdersQueries.day(bakeDayId));
   const orders = useQuery(bakeDayOrdersQueries.orders(bakeDayId));
   const [search, setSearch] = useState('');
@@ -70,9 +71,9 @@ export function BakeDayOrdersPage({ bakeDayId, canRefund }: BakeDayOrdersPagePro
       made.order.status === 'refunded' && order.status !== 'refunded'
         ? ' The order is now refunded and its doughnuts are back on sale.'
         : rest > 0
-          ? ` ${formatCents(rest)} is left to refund on this order.`
+          ? ` ${money(rest)} is left to refund on this order.`
           : ' Nothing is left to refund on this order.';
-    setNotice(`Refunded ${formatCents(made.amountCents)} to ${order.customer.name}.${after}`);
+    setNotice(`Refunded ${money(made.amountCents)} to ${order.customer.name}.${after}`);
   };
 
   const shown = orders.data?.filter((order) => matchesOrder(order, query)) ?? [];

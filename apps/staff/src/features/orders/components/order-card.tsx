@@ -1,4 +1,5 @@
-import { boxLabel, formatCents, type StaffOrderView } from '@fryline/schemas';
+import { boxLabel, type StaffOrderView } from '@fryline/schemas';
+import { useMoney } from '@fryline/ui';
 import { formatPieces } from '@fryline/ui/format';
 import { refundableCents } from '../model/refund-form';
 import { Fact } from './fact';
@@ -12,6 +13,7 @@ interface OrderCardProps {
 
 /** One order: who, pickup code, status, what is in the boxes, and the money. */
 export function OrderCard({ order, onRefund }: OrderCardProps) {
+  const money = useMoney();
   const headingId = `order-${order.id}`;
   const left = refundableCents(order);
   return (
@@ -31,10 +33,10 @@ export function OrderCard({ order, onRefund }: OrderCardProps) {
         </Fact>
         <Fact label="Doughnuts">{formatPieces(order.rings, order.holes)}</Fact>
         <Fact label="Total" valueClassName="tabular-nums">
-          {formatCents(order.totalCents)}
+          {money(order.totalCents)}
         </Fact>
         <Fact label="Refunded" valueClassName="tabular-nums">
-          {order.refundedCents > 0 ? formatCents(order.refundedCents) : <span className="text-muted">none</span>}
+          {order.refundedCents > 0 ? money(order.refundedCents) : <span className="text-muted">none</span>}
         </Fact>
       </dl>
       {order.boxes.length > 0 && (
@@ -48,17 +50,17 @@ export function OrderCard({ order, onRefund }: OrderCardProps) {
         </ul>
       )}
       <details className="border-t border-line pt-2 text-sm">
-        <summary className="cursor-pointer font-semibold">What the {formatCents(order.totalCents)} is made of</summary>
+        <summary className="cursor-pointer font-semibold">What the {money(order.totalCents)} is made of</summary>
         <dl className="mt-1 grid grid-cols-[1fr_auto] gap-x-3" data-testid="price-lines">
           {order.priceLines.map((line, index) => (
             <div key={index} className="contents" data-price-line={line.kind} data-cents={line.cents}>
               <dt className={line.kind === 'box' ? 'font-semibold' : 'pl-3 text-muted'}>{line.label}</dt>
-              <dd className="text-right tabular-nums">{formatCents(line.cents)}</dd>
+              <dd className="text-right tabular-nums">{money(line.cents)}</dd>
             </div>
           ))}
           <div className="contents" data-price-total={order.totalCents}>
             <dt className="border-t border-line font-extrabold">Total</dt>
-            <dd className="border-t border-line text-right font-extrabold tabular-nums">{formatCents(order.totalCents)}</dd>
+            <dd className="border-t border-line text-right font-extrabold tabular-nums">{money(order.totalCents)}</dd>
           </div>
         </dl>
       </details>

@@ -1,9 +1,10 @@
-import { formatCents, type BakeDayView, type StaffOrderView } from '@fryline/schemas';
+import { type BakeDayView, type StaffOrderView } from '@fryline/schemas';
+import { useMoney } from '@fryline/ui';
 import { summariseOrders } from '../model/order-list';
 import { Fact } from './fact';
 import { orderStatusNames } from './order-status-badge';
 
-const money = 'text-xl font-extrabold tabular-nums';
+const moneyText = 'text-xl font-extrabold tabular-nums';
 
 function Taken({ label, capacity, left }: { label: string; capacity: number; left: number }) {
   const taken = capacity - left;
@@ -23,6 +24,7 @@ function Taken({ label, capacity, left }: { label: string; capacity: number; lef
 
 /** Orders by status, the money in and out, and how much of the capacity is taken. */
 export function OrdersSummary({ day, orders }: { day: BakeDayView; orders: readonly StaffOrderView[] | undefined }) {
+  const money = useMoney();
   const summary = orders && summariseOrders(orders);
   return (
     <section aria-labelledby="summary-heading" className="card flex flex-col gap-4">
@@ -34,11 +36,11 @@ export function OrdersSummary({ day, orders }: { day: BakeDayView; orders: reado
         <Taken label="Holes" capacity={day.capacity.holes} left={day.remaining.holes} />
         {summary && (
           <>
-            <Fact label="Paid" valueClassName={money}>
-              {formatCents(summary.paidCents)}
+            <Fact label="Paid" valueClassName={moneyText}>
+              {money(summary.paidCents)}
             </Fact>
-            <Fact label="Refunded" valueClassName={money}>
-              {formatCents(summary.refundedCents)}
+            <Fact label="Refunded" valueClassName={moneyText}>
+              {money(summary.refundedCents)}
             </Fact>
           </>
         )}

@@ -1,11 +1,11 @@
 import { useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { centsToInput, formatCents, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
+import { centsToInput, currencySymbol, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { useRefundOrder } from '../api/use-refund-order';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
-import { ModalDialog } from '@fryline/ui';
+import { ModalDialog, useCurrency, useMoney } from '@fryline/ui';
 
 interface RefundDialogProps {
   /** The order as it was when the dialog opened. */
@@ -24,12 +24,14 @@ function FieldError({ id, message }: { id: string; message: string | undefined }
 
 /** Refund all or part of what is left on a paid order, with a reason. */
 export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) {
+  const money = useMoney();
+  const currency = useCurrency();
   const left = refundableCents(order);
   // One key for everything sent from this dialog: a double click or a retry refunds once.
   const [requestKey] = useState(() => crypto.randomUUID());
   const sending = useRef(false);
   const refund = useRefundOrder();
-  const schema = useMemo(() => refundFormSchema(left), [left]);
+  const schema = useMemo(() => refundFormSchema(left, currency), [left, currency]);
   const form = useForm<RefundFormValues, unknown, RefundRequest>({
     resolver: zodResolver(schema),
     defaultValues: refundFormDefaults(left),
@@ -95,9 +97,9 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
         <>
           <p>
             {order.pickupCode && <>Pickup code {order.pickupCode}. </>}
-            Paid {formatCents(order.totalCents)}
-            {order.refundedCents > 0 && <>, already refunded {formatCents(order.refundedCents)}</>}.{' '}
-            <strong>{formatCents(left)} is left to refund.</strong>
+            Paid {money(order.totalCents)}
+            {order.refundedCents > 0 && <>, already refunded {money(order.refundedCents)}</>}.{' '}
+            <strong>{money(left)} is left to refund.</strong>
           </p>
           <p className="text-sm text-muted">
             The money goes back to the card it was paid with, and the customer gets an e-mail about it.
@@ -127,11 +129,11 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
 
         <div>
           <label htmlFor={`${id}-amount`} className="field-label">
-            Amount in dollars
+            Amount ({currency.toUpperCase()})
           </label>
           <div className="relative max-w-48">
             <span aria-hidden="true" className="absolute inset-y-0 left-3 flex items-center font-semibold text-muted">
-              $
+              {currencySymbol(currency)}
             </span>
             <input
               id={`${id}-amount`}
@@ -152,7 +154,7 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
           <p id={`${id}-amount-help`} className="mt-1 text-sm text-muted">
             {mode === 'full'
               ? 'Everything that is left. Choose “Part” to refund less.'
-              : `Up to ${formatCents(left)}. The order keeps its status.`}
+              : `Up to ${money(left)}. The order keeps its status.`}
           </p>
           <FieldError id={`${id}-amount-error`} message={errors.amount?.message} />
         </div>
@@ -195,7 +197,7 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
           </button>
           <button type="submit" className="btn btn-danger" disabled={busy}>
             {busy && <span className="spinner" aria-hidden="true" />}
-            {busy ? 'Refunding…' : typed !== null && typed >= 1 && typed <= left ? `Refund ${formatCents(typed)}` : 'Refund'}
+            {busy ? 'Refunding…' : typed !== null && typed >= 1 && typed <= left ? `Refund ${money(typed)}` : 'Refund'}
           </button>
         </div>
       </form>

@@ -57,9 +57,9 @@ describe('the refund form (amounts in dollars, ISO 4217: 2 decimal places for US
 
   it.each([
     ['0', 'The amount must be at least $0.01'],
-    ['4,50', 'Write the amount in dollars, like 4.50'],
-    ['-3', 'Write the amount in dollars, like 4.50'],
-    ['', 'Write the amount in dollars, like 4.50'],
+    ['4,50', 'Write the amount as a number, like 4.50'],
+    ['-3', 'Write the amount as a number, like 4.50'],
+    ['', 'Write the amount as a number, like 4.50'],
   ])('refuses the amount "%s"', (amount, message) => {
     const result = schema.safeParse({ mode: 'part', amount, reason: 'Late' });
     expect(result.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['amount', message]]);

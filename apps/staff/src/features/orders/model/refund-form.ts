@@ -26,10 +26,10 @@ export function refundFormDefaults(leftCents: number): RefundFormValues {
 
 /**
  * The refund dialog's rules for an order with `leftCents` still refundable:
- * an amount in dollars between one cent and what is left, and a reason. Its
+ * an amount (in the shop's currency) between one cent and what is left, and a reason. Its
  * output is the API's refund request.
  */
-export function refundFormSchema(leftCents: number) {
+export function refundFormSchema(leftCents: number, currency?: string) {
   return z
     .object({
       mode: z.enum(['full', 'part']),
@@ -37,11 +37,11 @@ export function refundFormSchema(leftCents: number) {
         const cents = parseCents(text);
         const message =
           cents === null
-            ? 'Write the amount in dollars, like 4.50'
+            ? 'Write the amount as a number, like 4.50'
             : cents < 1
-              ? 'The amount must be at least $0.01'
+              ? `The amount must be at least ${formatCents(1, currency)}`
               : cents > leftCents
-                ? `At most ${formatCents(leftCents)} is left to refund`
+                ? `At most ${formatCents(leftCents, currency)} is left to refund`
                 : null;
         if (message !== null || cents === null) {
           ctx.addIssue({ code: 'custom', message: message ?? '' });

@@ -1,12 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
+import { useMoney } from '@fryline/ui';
 import type { CostPlan } from '@fryline/production';
-import { formatCents } from '@fryline/schemas';
+
 import { formatPercent } from '../../../lib/units';
 import { settingsQueries } from '../../../lib/queries/settings-queries';
 import { cell, num, SheetSection, TableHead } from './sheet-section';
 
 /** What a ring, a hole and each box cost to make, and the margin (owner only). */
 export function CostSection({ cost }: { cost: CostPlan }) {
+  const money = useMoney();
   const settings = useQuery(settingsQueries.current());
   const glazeNames = new Map(settings.data?.glazes.map((g) => [g.id, g.name]));
   return (
@@ -20,8 +22,8 @@ export function CostSection({ cost }: { cost: CostPlan }) {
               <th scope="row" className={cell.row}>
                 {piece.glazeId === null ? 'Plain' : glazeNames.get(piece.glazeId) ?? piece.glazeId}
               </th>
-              <td className={cell.num}>{formatCents(piece.ringCents)}</td>
-              <td className={cell.num}>{formatCents(piece.holeCents)}</td>
+              <td className={cell.num}>{money(piece.ringCents)}</td>
+              <td className={cell.num}>{money(piece.holeCents)}</td>
             </tr>
           ))}
         </tbody>
@@ -36,10 +38,10 @@ export function CostSection({ cost }: { cost: CostPlan }) {
                 <th scope="row" className={cell.row}>
                   {box.name}
                 </th>
-                <td className={cell.num}>{formatCents(box.priceCents)}</td>
-                <td className={cell.num}>{formatCents(box.costCents)}</td>
+                <td className={cell.num}>{money(box.priceCents)}</td>
+                <td className={cell.num}>{money(box.costCents)}</td>
                 <td className={cell.num}>
-                  {formatCents(box.marginCents)}
+                  {money(box.marginCents)}
                   {box.marginPercent !== null && (
                     <span className="block text-sm text-muted">{formatPercent(box.marginPercent, 0)}</span>
                   )}
@@ -50,7 +52,7 @@ export function CostSection({ cost }: { cost: CostPlan }) {
         </table>
       )}
       <p className="text-sm text-muted">
-        Box costs count plain pieces. Tonight’s dough costs {formatCents(cost.doughCents)}. {cost.rounding}
+        Box costs count plain pieces. Tonight’s dough costs {money(cost.doughCents)}. {cost.rounding}
       </p>
     </SheetSection>
   );

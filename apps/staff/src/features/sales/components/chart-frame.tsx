@@ -1,7 +1,14 @@
 import type { ReactNode } from 'react';
 
-/** The palette of the charts: the theme's plum, sugar, sage and brick (SVG fills can't read CSS variables). */
-export const chartColors = { now: '#56305f', before: '#e5a85e', sold: '#3b6642', capacity: '#e2d2b8', bad: '#a1352a' };
+/**
+ * The palette of the charts, from the theme (SVG fills can't read CSS
+ * variables): plum, a toasted sugar, sage and a warm grey, each at least
+ * 3:1 against the white card (WCAG 2.1, 1.4.11).
+ */
+export const chartColors = { now: '#56305f', before: '#b0651a', sold: '#3b6642', capacity: '#8f7f6a' };
+
+/** The charts' words and grid: the theme's ink and muted text (4.5:1 and more on white, WCAG 2.1, 1.4.3), the line colour for the grid. */
+export const chartText = { ink: '#2b1830', muted: '#6a5566', grid: '#e2d2b8' };
 
 /**
  * A chart with the table that says the same beside it (below it on a

@@ -1,32 +1,24 @@
-import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WeeklyFigures } from '@fryline/schemas';
-import { ChartFrame, Td, Th, chartColors } from './chart-frame';
+import { BarChartSection } from './bar-chart-section';
+import { Td, Th, chartColors } from './chart-frame';
 
 /** Pieces sold of each menu item, pre-ordered and over the counter. */
 export function ItemsSection({ week }: { week: WeeklyFigures }) {
-  const data = week.byItem.map((i) => ({ name: i.name, preorder: i.preorderPieces, walkUp: i.walkUpPieces }));
+  const rows = week.byItem.map((i) => ({ name: i.name, preorder: i.preorderPieces, walkUp: i.walkUpPieces }));
   return (
-    <ChartFrame
+    <BarChartSection
       id="items-heading"
       title="What sold"
       intro="Pieces of each item: from pre-orders still standing (paid this week, not cancelled or refunded in full) and from walk-up sales."
-      chart={
-        data.length === 0 ? (
-          <p className="text-muted">Nothing sold this week.</p>
-        ) : (
-          <ResponsiveContainer width="100%" height="100%">
-            <BarChart accessibilityLayer={false} data={data} layout="vertical" margin={{ left: 8, right: 16 }}>
-              <CartesianGrid strokeDasharray="3 3" horizontal={false} />
-              <XAxis type="number" allowDecimals={false} />
-              <YAxis type="category" dataKey="name" width={130} tick={{ fontSize: 12 }} />
-              <Tooltip />
-              <Legend />
-              <Bar dataKey="preorder" name="Pre-ordered" stackId="pieces" fill={chartColors.now} />
-              <Bar dataKey="walkUp" name="Walk-up" stackId="pieces" fill={chartColors.before} />
-            </BarChart>
-          </ResponsiveContainer>
-        )
-      }
+      rows={rows}
+      category="name"
+      series={[
+        { key: 'preorder', name: 'Pre-ordered', color: chartColors.now },
+        { key: 'walkUp', name: 'Walk-up', color: chartColors.before },
+      ]}
+      stacked
+      across
+      empty="Nothing sold this week."
       table={
         <table className="w-full">
           <caption className="sr-only">Pieces sold by menu item</caption>

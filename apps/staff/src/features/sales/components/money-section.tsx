@@ -1,7 +1,8 @@
-import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { formatCents, type WeeklyFigures } from '@fryline/schemas';
+import { useMoney } from '@fryline/ui';
+import type { WeeklyFigures } from '@fryline/schemas';
 import { changePercent } from '../model/week';
-import { ChartFrame, Td, Th, chartColors } from './chart-frame';
+import { BarChartSection } from './bar-chart-section';
+import { Td, Th, chartColors } from './chart-frame';
 
 const rows: Array<[keyof WeeklyFigures, string]> = [
   ['grossCents', 'Gross sales'],
@@ -19,25 +20,21 @@ const change = (now: number, before: number) => {
 
 /** Money in and out this week beside the week before. */
 export function MoneySection({ week, previous }: { week: WeeklyFigures; previous: WeeklyFigures }) {
-  const data = rows.map(([key, label]) => ({ label, now: (week[key] as number) / 100, before: (previous[key] as number) / 100 }));
+  const money = useMoney();
+  const data = rows.map(([key, label]) => ({ label, now: week[key] as number, before: previous[key] as number }));
   return (
-    <ChartFrame
+    <BarChartSection
       id="money-heading"
       title="Money"
       intro="Gross is pre-orders paid this week plus walk-up sales; refunds are those made this week; card fees are what the card processor kept. Net = gross − refunds − fees; margin = net − ingredients."
-      chart={
-        <ResponsiveContainer width="100%" height="100%">
-          <BarChart accessibilityLayer={false} data={data} margin={{ left: 8, right: 8 }}>
-            <CartesianGrid strokeDasharray="3 3" vertical={false} />
-            <XAxis dataKey="label" tick={{ fontSize: 12 }} interval={0} />
-            <YAxis tickFormatter={(v: number) => `$${v}`} width={56} />
-            <Tooltip formatter={(v) => formatCents(Math.round(Number(v) * 100))} />
-            <Legend />
-            <Bar dataKey="now" name="This week" fill={chartColors.now} />
-            <Bar dataKey="before" name="Week before" fill={chartColors.before} />
-          </BarChart>
-        </ResponsiveContainer>
-      }
+      rows={data}
+      category="label"
+      series={[
+        { key: 'now', name: 'This week', color: chartColors.now },
+        { key: 'before', name: 'Week before', color: chartColors.before },
+      ]}
+      empty="No money figures this week."
+      formatValue={(cents) => money(Math.round(cents))}
       table={
         <table className="w-full">
           <caption className="sr-only">Money this week and the week before</caption>
@@ -53,8 +50,8 @@ export function MoneySection({ week, previous }: { week: WeeklyFigures; previous
             {rows.map(([key, label]) => (
               <tr key={key}>
                 <Td head>{label}</Td>
-                <Td num>{formatCents(week[key] as number)}</Td>
-                <Td num>{formatCents(previous[key] as number)}</Td>
+                <Td num>{money(week[key] as number)}</Td>
+                <Td num>{money(previous[key] as number)}</Td>
                 <Td num>{change(week[key] as number, previous[key] as number)}</Td>
               </tr>
             ))}

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { formatCents, type WeeklyFigures } from '@fryline/schemas';
+import type { WeeklyFigures } from '@fryline/schemas';
 import { PageFrame } from '../../../components/page-frame';
-import { ErrorState, LoadingState } from '@fryline/ui';
+import { ErrorState, LoadingState, useMoney } from '@fryline/ui';
 import { formatDate, plural } from '@fryline/ui/format';
 import { salesQueries, weeklyCsvUrl } from '../api/sales-queries';
 import { mondayOf, shiftWeek, todayHere } from '../model/week';
@@ -22,22 +22,24 @@ function Figure({ label, value, before }: { label: string; value: string; before
 }
 
 function Headline({ week, previous }: { week: WeeklyFigures; previous: WeeklyFigures }) {
-  const perPiece = (f: WeeklyFigures) => (f.costPerPieceCents === null ? '—' : formatCents(f.costPerPieceCents));
+  const money = useMoney();
+  const perPiece = (f: WeeklyFigures) => (f.costPerPieceCents === null ? '—' : money(f.costPerPieceCents));
   return (
     <dl className="grid grid-cols-2 gap-3 md:grid-cols-4">
-      <Figure label="Net" value={formatCents(week.netCents)} before={formatCents(previous.netCents)} />
+      <Figure label="Net" value={money(week.netCents)} before={money(previous.netCents)} />
       <Figure label="Orders" value={String(week.orders)} before={String(previous.orders)} />
       <Figure label="Pieces pre-ordered" value={String(week.pieces)} before={String(previous.pieces)} />
       <Figure label="No-shows" value={String(week.noShows)} before={String(previous.noShows)} />
-      <Figure label="Walk-up sales" value={formatCents(week.walkUps.cents)} before={formatCents(previous.walkUps.cents)} />
+      <Figure label="Walk-up sales" value={money(week.walkUps.cents)} before={money(previous.walkUps.cents)} />
       <Figure label="Ingredient cost per piece" value={perPiece(week)} before={perPiece(previous)} />
-      <Figure label="Margin" value={formatCents(week.marginCents)} before={formatCents(previous.marginCents)} />
-      <Figure label="Card fees" value={formatCents(week.feesCents)} before={formatCents(previous.feesCents)} />
+      <Figure label="Margin" value={money(week.marginCents)} before={money(previous.marginCents)} />
+      <Figure label="Card fees" value={money(week.feesCents)} before={money(previous.feesCents)} />
     </dl>
   );
 }
 
 function WalkUpsTable({ week, previous }: { week: WeeklyFigures; previous: WeeklyFigures }) {
+  const money = useMoney();
   const methods = ['cash', 'card'] as const;
   const find = (f: WeeklyFigures, m: (typeof methods)[number]) => f.walkUps.byMethod.find((x) => x.method === m) ?? { sales: 0, cents: 0 };
   return (
@@ -64,8 +66,8 @@ function WalkUpsTable({ week, previous }: { week: WeeklyFigures; previous: Weekl
             <tr key={m}>
               <Td head>{m === 'cash' ? 'Cash' : 'Card'}</Td>
               <Td num>{find(week, m).sales}</Td>
-              <Td num>{formatCents(find(week, m).cents)}</Td>
-              <Td num>{formatCents(find(previous, m).cents)}</Td>
+              <Td num>{money(find(week, m).cents)}</Td>
+              <Td num>{money(find(previous, m).cents)}</Td>
             </tr>
           ))}
         </tbody>

@@ -1,34 +1,25 @@
-import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { WeeklyFigures } from '@fryline/schemas';
 import { formatDate } from '@fryline/ui/format';
-import { ChartFrame, Td, Th, chartColors } from './chart-frame';
+import { BarChartSection } from './bar-chart-section';
+import { Td, Th, chartColors } from './chart-frame';
 
 /** How much of each bake day's capacity was sold, in advance and at the stall. */
 export function SellThroughSection({ week }: { week: WeeklyFigures }) {
   const label = (date: string) => formatDate(date, week.week.timeZone, 'short');
-  const data = week.sellThrough.map((d) => ({ day: label(d.date), sold: d.sold, unsold: Math.max(d.capacity - d.sold, 0) }));
+  const rows = week.sellThrough.map((d) => ({ day: label(d.date), sold: d.sold, unsold: Math.max(d.capacity - d.sold, 0) }));
   return (
-    <ChartFrame
+    <BarChartSection
       id="sell-through-heading"
       title="Sell-through"
       intro="Each bake day of the week: pieces sold (pre-orders paid, collected or not, plus walk-ups) against its capacity."
-      chart={
-        data.length === 0 ? (
-          <p className="text-muted">No bake day this week.</p>
-        ) : (
-          <ResponsiveContainer width="100%" height="100%">
-            <BarChart accessibilityLayer={false} data={data} margin={{ left: 8, right: 8 }}>
-              <CartesianGrid strokeDasharray="3 3" vertical={false} />
-              <XAxis dataKey="day" />
-              <YAxis allowDecimals={false} />
-              <Tooltip />
-              <Legend />
-              <Bar dataKey="sold" name="Sold" stackId="day" fill={chartColors.sold} />
-              <Bar dataKey="unsold" name="Not sold" stackId="day" fill={chartColors.capacity} />
-            </BarChart>
-          </ResponsiveContainer>
-        )
-      }
+      rows={rows}
+      category="day"
+      series={[
+        { key: 'sold', name: 'Sold', color: chartColors.sold },
+        { key: 'unsold', name: 'Not sold', color: chartColors.capacity },
+      ]}
+      stacked
+      empty="No bake day this week."
       table={
         <table className="w-full">
           <caption className="sr-only">Sell-through by bake day</caption>

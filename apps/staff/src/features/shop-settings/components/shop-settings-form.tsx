@@ -59,7 +59,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsView }) {
 
       <section className="card grid gap-x-4 gap-y-4 sm:grid-cols-2" aria-labelledby="money-heading">
         <h2 id="money-heading" className="text-xl sm:col-span-2">Money and tax</h2>
-        <FieldShell id="set-currency" label="Currency" help="What customers pay in. Orders already paid keep theirs." error={errors.currency?.message}>
+        <FieldShell id="set-currency" label="Currency" help="What customers pay in, and how every amount is shown. Amounts already paid are not converted: change it before orders open." error={errors.currency?.message}>
           <select id="set-currency" className="field-input" {...aria('set-currency', errors.currency?.message)} {...register('currency')}>
             {shopCurrencies.map((c) => (
               <option key={c} value={c}>

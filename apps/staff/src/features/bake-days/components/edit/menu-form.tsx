@@ -1,13 +1,14 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { boxLabel, centsToInput, parseMoney, type BakeDayEditView, type BoxSize } from '@fryline/schemas';
-import { FieldShell, LoadingState } from '@fryline/ui';
+import { FieldShell, LoadingState, useCurrencySign } from '@fryline/ui';
 import { menuItemQueries } from '../../api/menu-item-queries';
 import { SectionForm, useServerReset } from './section-form';
 
 
 /** What this day sells and the box prices. Orders already paid keep what they paid. */
 export function MenuForm({ day }: { day: BakeDayEditView }) {
+  const sign = useCurrencySign();
   const menu = useQuery(menuItemQueries.all());
   const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
   const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToInput(b.priceCents)])) as Partial<Record<BoxSize, string>>;
@@ -62,7 +63,7 @@ export function MenuForm({ day }: { day: BakeDayEditView }) {
       )}
       <div className="grid gap-3 sm:grid-cols-3">
         {day.boxes.map((box) => (
-          <FieldShell key={box.size} id={`edit-price-${box.size}`} label={`${boxLabel(box.size)} (${box.pieces})`} unit="$">
+          <FieldShell key={box.size} id={`edit-price-${box.size}`} label={`${boxLabel(box.size)} (${box.pieces})`} unit={sign}>
             <input
               id={`edit-price-${box.size}`}
               inputMode="decimal"
