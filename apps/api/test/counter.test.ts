@@ -249,6 +249,38 @@ describe('the surplus follows the paid orders after the counter first reads it',
   });
 });
 
+describe('orders paid after the counter first reads the surplus', () => {
+  it('can use up more than the plan made of an item, and cancelling one gives back only what is really left', async () => {
+    const day = await openDay(stack);
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'late.orders@example.test');
+    const counter = new Browser(stack.url);
+    await signIn(counter, 'counter@fryline.test');
+    const itemId = halfDozen(day, 0).boxes[0]!.items[0]!.menuItemId;
+    const surplus = async () => (await counter.getJson(`/api/bake-days/${day.id}/surplus`)).body;
+    const itemOf = (s: any) => s.items.find((i: any) => i.menuItemId === itemId);
+    await surplus();
+    // a plan that made only two more of this flavour than were pre-ordered when the counter first looked
+    const [{ pre }] = await sql<{ pre: number }>(
+      `SELECT COALESCE(SUM(l.quantity), 0)::int AS pre FROM orders o JOIN order_boxes b ON b.order_id = o.id JOIN order_lines l ON l.order_box_id = b.id
+        WHERE o.bake_day_id = :dayId AND l.menu_item_id = :itemId AND o.status IN ('paid', 'collected', 'no_show')`,
+      { dayId: day.id, itemId },
+    ) as [{ pre: number }];
+    await database().query('UPDATE bake_day_surplus SET made = :made, left_count = 2 WHERE bake_day_id = :dayId AND menu_item_id = :itemId', {
+      replacements: { made: pre + 2, dayId: day.id, itemId },
+    });
+
+    const { order } = await orderAndPay(stack, customer, halfDozen(day, 0));
+    const afterPaid = itemOf(await surplus());
+    expect(afterPaid).toMatchObject({ made: pre + 2, preOrdered: pre + 6, left: 0 });
+
+    const cancelled = await customer.send('POST', `/api/orders/${order.id}/cancel`);
+    expect(cancelled.status).toBe(200);
+    await stack.payments.webhooksIdle();
+    expect(itemOf(await surplus())).toMatchObject({ made: pre + 2, preOrdered: pre, left: 2 });
+  });
+});
+
 describe('the end of the day', () => {
   it('adds up to a hand-computed expectation from a seeded day', async () => {
     const { seeded, counter } = await counterDay();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { centsToInput, currencySymbol, formatCents, moneyTextSchema, parseCents, parseMoney, roundHalfUp } from './money.js';
+import { centsToInput, currencyName, currencySymbol, formatCents, moneyTextSchema, parseCents, parseMoney, roundHalfUp } from './money.js';
 
 // ISO 4217 gives USD two minor-unit digits: one dollar is 100 cents.
 describe('parseMoney: typed amounts into integer cents (ISO 4217: USD has 2 decimal places)', () => {
@@ -108,5 +108,18 @@ describe('roundHalfUp (common practice, no source; values worked by hand)', () =
   it('refuses a non-number rather than return NaN', () => {
     expect(() => roundHalfUp(Number.NaN)).toThrow(/amount/);
     expect(() => roundHalfUp(1, 0)).toThrow(/divisor/);
+  });
+});
+
+describe('currencyName (the plural name from Intl.NumberFormat with currencyDisplay "name", ECMA-402)', () => {
+  it('names the shop locale’s own currency without its country, and others as Intl spells them', () => {
+    expect(currencyName('USD')).toBe('dollars');
+    for (const code of ['EUR', 'GBP', 'CAD']) {
+      const intl = new Intl.NumberFormat('en-US', { style: 'currency', currency: code, currencyDisplay: 'name' });
+      expect(currencyName(code)).toBe(intl.formatToParts(2).find((p) => p.type === 'currency')!.value);
+    }
+    // from memory: en-US spells the euro's plural "euros" and the Canadian dollar's "Canadian dollars"
+    expect(currencyName('eur')).toBe('euros');
+    expect(currencyName('CAD')).toBe('Canadian dollars');
   });
 });

@@ -83,6 +83,25 @@ export function currencySymbol(currency: string = SHOP_CURRENCY): string {
   return moneyFormat(currency).formatToParts(0).find((p) => p.type === 'currency')?.value ?? currency.toUpperCase();
 }
 
+const currencyNames = new Map<string, string>();
+
+/**
+ * The currency's name in the plural, to label an amount input: "euros",
+ * "Canadian dollars". The shop locale's own currency goes without its
+ * country ("dollars" rather than "US dollars" in en-US), as people say it.
+ */
+export function currencyName(currency: string = SHOP_CURRENCY): string {
+  const code = currency.toUpperCase();
+  let name = currencyNames.get(code);
+  if (!name) {
+    const parts = new Intl.NumberFormat(SHOP_LOCALE, { style: 'currency', currency: code, currencyDisplay: 'name' }).formatToParts(2);
+    name = parts.find((p) => p.type === 'currency')?.value ?? code;
+    if (code === SHOP_CURRENCY) name = name.replace(/^US /, '');
+    currencyNames.set(code, name);
+  }
+  return name;
+}
+
 /** Cents as the text of an amount input (no sign, no separators): 1250 → "12.50", 7 → "0.07"; parseMoney reads it back. */
 export function centsToInput(cents: number): string {
   if (!Number.isSafeInteger(cents) || cents < 0) throw new RangeError(`centsToInput: ${cents} is not a whole, non-negative number of cents`);

@@ -11,4 +11,4 @@ export { PageErrorBoundary } from './page-error-boundary';
 export { SignOutButton } from './sign-out-button';
 export { ErrorState, LoadingState, Notice } from './status';
 export { MenuPhoto } from './menu-photo';
-export { shopQuery, shopQueryRoot, useCurrency, useCurrencySign, useMoney, useShop } from './shop';
+export { shopQuery, shopQueryRoot, useCurrency, useCurrencyName, useCurrencySign, useMoney, useShop } from './shop';

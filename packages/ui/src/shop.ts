@@ -1,6 +1,6 @@
 import { useCallback } from 'react';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api as contract, currencySymbol, formatCents, SHOP_CURRENCY, type PublicShopView } from '@fryline/schemas';
+import { api as contract, currencyName, currencySymbol, formatCents, SHOP_CURRENCY, type PublicShopView } from '@fryline/schemas';
 import { api } from './api-client';
 
 /** The first element of the shop's query key: invalidate it after the owner changes the settings or the logo. */
@@ -26,6 +26,10 @@ export function useMoney(): (cents: number) => string {
   return useCallback((cents: number) => formatCents(cents, currency), [currency]);
 }
 
+/** The shop currency's name in the plural ("dollars", "euros"), to label an amount input in words. */
+export function useCurrencyName(): string {
+  return currencyName(useCurrency());
+}
 
 /** The shop currency's sign ("$", "€", "£", "CA$"), to label an amount input. */
 export function useCurrencySign(): string {

@@ -1,6 +1,6 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import { database } from '../sequelize.js';
-import { moveSurplusForOrder } from './surplus.js';
+import { recountSurplusForOrder } from './surplus.js';
 
 // Capacity moves only through single conditional statements: the check and
 // the change happen in one UPDATE, backed by CHECK (remaining >= 0) in the
@@ -103,7 +103,7 @@ export async function releaseOrder(
     await giveBackCapacity(row.bake_day_id, row.rings, row.holes, transaction);
     await giveBackWindowSlot(row.pickup_window_id, transaction);
   }
-  if (row.was === 'paid') await moveSurplusForOrder(row.id, row.bake_day_id, 1, transaction);
+  if (row.was === 'paid') await recountSurplusForOrder(row.id, row.bake_day_id, transaction);
   return row;
 }
 

@@ -4,6 +4,13 @@ import { database } from '../sequelize.js';
 // Surplus counters per (bake day, menu item), like capacity: taken only by
 // one conditional UPDATE each, backed by CHECK (left_count >= 0).
 
+/**
+ * Counts an item's pieces out of the walk-up surplus: paid pre-orders
+ * (waiting or no-show) and every order that was handed over, whatever
+ * happened to it afterwards (a refund does not bring a box back).
+ */
+const PIECES_GONE = "(o.status IN ('paid', 'collected', 'no_show') OR o.collected_at IS NOT NULL)";
+
 export interface SurplusRow {
   menu_item_id: string;
   name: string;
@@ -14,12 +21,12 @@ export interface SurplusRow {
   pre_ordered: number;
 }
 
-/** Paid pre-orders (waiting, handed over or no-show) per menu item of a bake day. */
+/** Pre-orders whose pieces are gone from the surplus (see PIECES_GONE) per menu item of a bake day. */
 export async function paidPreOrders(bakeDayId: string, transaction?: Transaction): Promise<Map<string, number>> {
   const rows = await database().query<{ menu_item_id: string; quantity: number }>(
     `SELECT l.menu_item_id, SUM(l.quantity)::int AS quantity
        FROM orders o JOIN order_boxes b ON b.order_id = o.id JOIN order_lines l ON l.order_box_id = b.id
-      WHERE o.bake_day_id = :bakeDayId AND o.status IN ('paid', 'collected', 'no_show')
+      WHERE o.bake_day_id = :bakeDayId AND ${PIECES_GONE}
       GROUP BY l.menu_item_id`,
     { replacements: { bakeDayId }, type: QueryTypes.SELECT, transaction },
   );
@@ -27,20 +34,32 @@ export async function paidPreOrders(bakeDayId: string, transaction?: Transaction
 }
 
 /**
- * Moves an order's pieces into (+1) or out of (-1) its bake day's surplus
- * counters, if the counter has made them: a paid order released, or an order
- * paid after the counters were written. Never below zero (what walk-ups
- * already took stays sold).
+ * Counts again what is left of the items in one order, after the order was
+ * paid, refunded or cancelled, if the counter has made them: left = made −
+ * pre-ordered − sold, never below zero (what walk-ups already took stays
+ * sold) and never above what was made. Counting again rather than adding the
+ * order's pieces keeps it exact when orders were paid after the counter first
+ * read the surplus. The rows are locked first, so the count (a new snapshot
+ * in READ COMMITTED) sees any walk-up sale that held them.
  */
-export async function moveSurplusForOrder(orderId: string, bakeDayId: string, sign: 1 | -1, transaction: Transaction): Promise<void> {
+export async function recountSurplusForOrder(orderId: string, bakeDayId: string, transaction: Transaction): Promise<void> {
+  const replacements = { orderId, bakeDayId };
+  const items = `SELECT DISTINCT l.menu_item_id FROM order_boxes b JOIN order_lines l ON l.order_box_id = b.id WHERE b.order_id = :orderId`;
+  const locked = await database().query<{ menu_item_id: string }>(
+    `SELECT s.menu_item_id FROM bake_day_surplus s WHERE s.bake_day_id = :bakeDayId AND s.menu_item_id IN (${items}) FOR UPDATE`,
+    { replacements, type: QueryTypes.SELECT, transaction },
+  );
+  if (locked.length === 0) return;
   await database().query(
     `UPDATE bake_day_surplus s
-        SET left_count = GREATEST(0, s.left_count + :sign * x.quantity), updated_at = now()
-       FROM (SELECT l.menu_item_id, SUM(l.quantity)::int AS quantity
-               FROM order_boxes b JOIN order_lines l ON l.order_box_id = b.id
-              WHERE b.order_id = :orderId GROUP BY l.menu_item_id) x
-      WHERE s.bake_day_id = :bakeDayId AND s.menu_item_id = x.menu_item_id`,
-    { replacements: { orderId, bakeDayId, sign }, transaction },
+        SET left_count = LEAST(s.made, GREATEST(0, s.made
+              - COALESCE((SELECT SUM(l.quantity) FROM orders o JOIN order_boxes b ON b.order_id = o.id JOIN order_lines l ON l.order_box_id = b.id
+                           WHERE o.bake_day_id = s.bake_day_id AND l.menu_item_id = s.menu_item_id AND ${PIECES_GONE}), 0)
+              - COALESCE((SELECT SUM(i.quantity) FROM walk_up_sale_items i JOIN walk_up_sales w ON w.id = i.sale_id
+                           WHERE w.bake_day_id = s.bake_day_id AND i.menu_item_id = s.menu_item_id), 0))),
+            updated_at = now()
+      WHERE s.bake_day_id = :bakeDayId AND s.menu_item_id IN (${items})`,
+    { replacements, transaction },
   );
 }
 
@@ -88,7 +107,7 @@ export async function surplusRows(bakeDayId: string, transaction?: Transaction):
                        WHERE w.bake_day_id = s.bake_day_id AND i.menu_item_id = s.menu_item_id), 0)::int AS sold,
             COALESCE((SELECT SUM(l.quantity) FROM orders o JOIN order_boxes b ON b.order_id = o.id JOIN order_lines l ON l.order_box_id = b.id
                        WHERE o.bake_day_id = s.bake_day_id AND l.menu_item_id = s.menu_item_id
-                         AND o.status IN ('paid', 'collected', 'no_show')), 0)::int AS pre_ordered
+                         AND ${PIECES_GONE}), 0)::int AS pre_ordered
        FROM bake_day_surplus s JOIN menu_items m ON m.id = s.menu_item_id
       WHERE s.bake_day_id = :bakeDayId
       ORDER BY m.kind DESC, m.sort_order, m.name`,

@@ -8,9 +8,9 @@ import { getProductionSettings, planForBakeDay } from '../production/production.
 // Surplus per menu item = what the production plan made − paid pre-orders −
 // walk-ups sold. The counters are written the first time the counter asks
 // (the plan's figures and the paid pre-orders as they are then); from then
-// on walk-up sales take from them, a paid order that is refunded or cancelled
-// gives its pieces back, and an order paid later takes its own, each by one
-// conditional UPDATE.
+// on walk-up sales take from them by one conditional UPDATE, and whenever an
+// order is paid, refunded or cancelled its items are counted again
+// (recountSurplusForOrder), so a refund gives back only what is really left.
 
 /** What the plan made of each menu item of the day, from the production sheet. */
 async function madeForDay(bakeDayId: string, now: Date) {

@@ -5,7 +5,7 @@ import { eventRecorded, recordEvent, recordOutcome } from '../../db/queries/paym
 import { Order } from '../../db/models/index.js';
 import { context } from '../../integrations/context.js';
 import { releaseOrder, takeCapacity, takeWindowSlot } from '../../db/queries/capacity.js';
-import { moveSurplusForOrder } from '../../db/queries/surplus.js';
+import { recountSurplusForOrder } from '../../db/queries/surplus.js';
 import { newPickupCode } from '../orders/pickup-codes.js';
 import { queueConfirmation, queueLateRefundApology } from '../mail/order-mails.js';
 import { afterCommitting, recordRefundIntent, refundableCents, runAfterCommit, sendAfterCommit } from './refund-intents.js';
@@ -89,7 +89,7 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
       await order.reload({ transaction });
     }
   }
-  await moveSurplusForOrder(order.id, order.bakeDayId, -1, transaction);
+  await recountSurplusForOrder(order.id, order.bakeDayId, transaction);
   await recordProcessingFee(order.id, paymentIntentId, transaction);
   await queueConfirmation(order.id, transaction);
   await audit({ actorId: null, action: 'order.paid', subjectType: 'order', subjectId: order.id }, transaction);

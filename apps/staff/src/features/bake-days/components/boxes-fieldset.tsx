@@ -1,7 +1,7 @@
 import { useWatch } from 'react-hook-form';
 import { boxCatalogue, boxTakes, type BoxSize } from '@fryline/schemas';
 import { ListError } from '../../../components/row-controls';
-import { FieldShell, useCurrencySign } from '@fryline/ui';
+import { FieldShell, useCurrencyName, useCurrencySign } from '@fryline/ui';
 import type { NewBakeDayForm } from './pickup-windows-fieldset';
 
 /** "Offer a dozen (12 rings)", "Price of a dozen": the catalogue's names in the form's words. */
@@ -15,6 +15,7 @@ function boxWords(size: BoxSize): { offer: string; price: string } {
 /** The boxes on sale that day, each with its price in the shop's currency; the bag of holes also says how many it holds. */
 export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
   const sign = useCurrencySign();
+  const currencyName = useCurrencyName();
   const { register, control, formState } = form;
   const boxes = useWatch({ control, name: 'boxes' });
   const errors = formState.errors.boxes;
@@ -24,7 +25,7 @@ export function BoxesFieldset({ form }: { form: NewBakeDayForm }) {
     <fieldset className="card flex flex-col gap-3">
       <legend className="float-left w-full text-xl font-extrabold">Boxes and prices</legend>
       <p className="text-muted">
-        Prices in dollars. A menu item with an extra charge adds it on top, for each one in the box.
+        Prices in {currencyName}. A menu item with an extra charge adds it on top, for each one in the box.
       </p>
       <ul className="flex flex-col gap-3">
         {boxes.map((box, index) => {

@@ -1,7 +1,7 @@
 import { useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { centsToInput, currencySymbol, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
+import { centsToInput, currencyName, currencySymbol, parseCents, type RefundRequest, type RefundView, type StaffOrderView } from '@fryline/schemas';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { useRefundOrder } from '../api/use-refund-order';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
@@ -129,7 +129,7 @@ export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) 
 
         <div>
           <label htmlFor={`${id}-amount`} className="field-label">
-            Amount ({currency.toUpperCase()})
+            Amount in {currencyName(currency)}
           </label>
           <div className="relative max-w-48">
             <span aria-hidden="true" className="absolute inset-y-0 left-3 flex items-center font-semibold text-muted">
