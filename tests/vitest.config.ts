@@ -7,6 +7,7 @@ export default defineConfig({
     name: 'e2e',
     include: ['e2e/**/*.test.ts', 'setup/**/*.test.ts'],
     globalSetup: ['support/global-setup.ts'],
+    setupFiles: ['support/report-failures.ts'],
     fileParallelism: false,
     testTimeout: 120_000,
     hookTimeout: 120_000,

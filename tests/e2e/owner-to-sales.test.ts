@@ -31,6 +31,7 @@ async function signInStaff(page: Page, email: string) {
   await page.goto(`${appUrl}/staff/`);
   await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
   await chooseAccount(page, email);
+  await page.getByRole('button', { name: /sign out/i }).first().waitFor();
 }
 
 /** "$1,234.50" → 123450 */

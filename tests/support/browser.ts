@@ -2,6 +2,22 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
+const openPages = new Set<Page>();
+
+/**
+ * What every open page shows (its address and the start of its text), for a
+ * failed journey's report: a timeout alone does not say what was on the screen.
+ */
+export async function describeOpenPages(): Promise<string> {
+  const parts = await Promise.all(
+    [...openPages].map(async (page, i) => {
+      const text = await page.locator('body').innerText({ timeout: 2_000 }).catch((err: Error) => `(no text: ${err.message.split('\n')[0]})`);
+      return `--- page ${i + 1}: ${page.url()}\n${text.replace(/\n{2,}/g, '\n').slice(0, 1_500)}`;
+    }),
+  );
+  return parts.join('\n');
+}
+
 /**
  * Debian's Chromium, headless and kept off the network. Each `fresh()` is a
  * new browser context (its own cookies), so one person's late responses can
@@ -20,7 +36,10 @@ export async function openBrowser(viewport = { width: 390, height: 844 }, extraA
   });
   const fresh = async () => {
     const context = await browser.newContext({ viewport });
-    return { context, page: await context.newPage() };
+    const page = await context.newPage();
+    openPages.add(page);
+    page.on('close', () => openPages.delete(page));
+    return { context, page };
   };
   const first = await fresh();
   return {
@@ -35,6 +54,8 @@ export async function openBrowser(viewport = { width: 390, height: 844 }, extraA
 /** Signs in on the sign-in page by choosing a listed account (or typing a new address). */
 export async function chooseAccount(page: Page, email: string) {
   const listed = page.getByRole('button', { name: new RegExp(email.replace(/[.@]/g, '\\$&'), 'i') });
+  // wait for the sign-in page itself: counting on the page being left would find nothing
+  await listed.or(page.getByLabel(/e-?mail/i)).first().waitFor();
   if (await listed.count()) await listed.first().click();
   else {
     await page.getByLabel(/e-?mail/i).fill(email);
