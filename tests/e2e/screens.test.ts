@@ -52,6 +52,7 @@ export const screens: Screen[] = [
   { name: 'menu-list', who: 'owner', path: () => '/staff/menu', ready: /^rings$/i },
   { name: 'menu-item-form', who: 'owner', path: () => '/staff/menu/new', ready: /^allergens$/i },
   { name: 'shop-settings', who: 'owner', path: () => '/staff/settings', ready: /^money and tax$/i },
+  { name: 'payment-checks', who: 'owner', path: () => '/staff/payment-checks', ready: /^(no payment has failed its check|\d+ payments? that didn’t match)$/i },
   { name: 'audit-log', who: 'owner', path: () => '/staff/audit-log', ready: /^(no changes match|\d+ changes?)/i },
   { name: 'weekly-sales', who: 'owner', path: () => '/staff/sales', ready: /^walk-up sales$/i },
   { name: 'bake-day-edit', who: 'owner', path: (f) => `/staff/bake-days/${f.openDayId}/edit`, ready: /^change (?!a bake day)/i },

@@ -76,6 +76,15 @@ describe('webhooks: the session is checked against the order', () => {
     const flags = await owner.getJson('/api/staff/payment-flags');
     expect(flags.status).toBe(200);
     expect(flags.body).toEqual([expect.objectContaining({ orderId, checkoutSessionId: sneaky.id, amountCents: 50, refundStatus: 'succeeded' })]);
+    // with whose order it was, for which bake day, and where that order stands
+    expect(flags.body[0].order).toEqual({
+      customerName: expect.any(String),
+      customerEmail: (await customer.getJson('/api/me')).body.email,
+      bakeDayId: (body as { bakeDayId: string }).bakeDayId,
+      bakeDayDate: expect.stringMatching(/^\d{4}-\d{2}-\d{2}$/),
+      status: 'held',
+      totalCents: 3250,
+    });
     expect((await customer.getJson('/api/staff/payment-flags')).status).toBe(403);
     expect(await OutboxMessage.count({ where: { kind: 'confirmation' } })).toBe(0);
   });

@@ -17,6 +17,17 @@ export const paymentFlagViewSchema = z.object({
   currency: z.string(),
   refundStatus: z.enum(['pending', 'succeeded', 'failed', 'none']),
   createdAt: z.string(),
+  /** The order the session named, when it exists: who, which bake day, and where it stands now. */
+  order: z
+    .object({
+      customerName: z.string(),
+      customerEmail: z.string(),
+      bakeDayId: z.string(),
+      bakeDayDate: z.string(),
+      status: z.string(),
+      totalCents: z.number().int(),
+    })
+    .nullable(),
 });
 export type PaymentFlagView = z.infer<typeof paymentFlagViewSchema>;
 

@@ -24,6 +24,7 @@ export const sections: readonly StaffSection[] = [
   { path: 'staff', label: 'Staff', minRole: 'owner', summary: 'Who can sign in, and their roles.' },
   { path: 'sales', label: 'Sales', minRole: 'owner', summary: 'Weekly money, units and margin.' },
   { path: 'settings', label: 'Shop settings', minRole: 'owner', summary: 'Name, time zone, tax, holds and refund policy.' },
+  { path: 'payment-checks', label: 'Payment checks', minRole: 'owner', summary: 'Payments that didn\u2019t match their order, refunded.' },
   { path: 'audit-log', label: 'Audit log', minRole: 'owner', summary: 'Who changed what, and when.' },
 ];
 

@@ -6,6 +6,7 @@ import { logger } from '../../lib/logger.js';
 import { context } from '../../integrations/context.js';
 import { audit } from '../audit/audit.js';
 import { describePaymentsError } from './errors.js';
+import { formatCents } from '@fryline/schemas';
 
 // The payments company's own advice for fulfilment: don't trust the event's
 // copy of the checkout session; retrieve it, and check that it is the
@@ -33,7 +34,9 @@ export function sessionProblem(session: Stripe.Checkout.Session, order: Order, c
   if (order.checkoutSessionId ? session.id !== order.checkoutSessionId : session.client_reference_id !== order.id) {
     return `session ${session.id} is not the order's checkout session (${order.checkoutSessionId ?? 'none recorded'})`;
   }
-  if (session.amount_total !== order.totalCents) return `paid ${session.amount_total} but the order's total is ${order.totalCents}`;
+  if (session.amount_total !== order.totalCents) {
+    return `paid ${formatCents(session.amount_total ?? 0, session.currency ?? currency)} but the order's total is ${formatCents(order.totalCents, currency)}`;
+  }
   if ((session.currency ?? '').toLowerCase() !== currency.toLowerCase()) return `paid in ${session.currency} but the shop charges in ${currency}`;
   return null;
 }

@@ -17,6 +17,7 @@ import { MenuPage } from '../../features/menu/components/menu-page';
 import { ShopSettingsPage } from '../../features/shop-settings/components/shop-settings-page';
 import { AuditLogPage } from '../../features/audit-log/components/audit-log-page';
 import { CounterPage } from '../../features/counter/components/counter-page';
+import { PaymentChecksPage } from '../../features/payment-checks/components/payment-checks-page';
 
 /** Sections that have a page of their own; the rest show what is planned. */
 const builtPages: Record<string, ReactNode> = {
@@ -29,6 +30,7 @@ const builtPages: Record<string, ReactNode> = {
   sales: <SalesPage />,
   menu: <MenuPage />,
   settings: <ShopSettingsPage />,
+  'payment-checks': <PaymentChecksPage />,
   'audit-log': <AuditLogPage />,
 };
 
