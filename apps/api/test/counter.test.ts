@@ -1,7 +1,8 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, onTestFinished } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { seedCounterDay, type SeededCounterDay } from '@fryline/seeds';
 import { database } from '../src/db/sequelize.js';
+import { ReadCache } from '../src/lib/read-cache.js';
 import { Browser, signIn, useStack } from './support.js';
 import { CARD_OK, halfDozen, openDay, orderAndPay, sessionIdOf } from './order-helpers.js';
 
@@ -334,5 +335,23 @@ describe('the owner’s counter settings', () => {
     const collected = await counter.send('POST', `/api/orders/${row.orderId}/collect`, {});
     expect(Date.parse(collected.body.undoUntil) - Date.parse(collected.body.collectedAt)).toBe(20_000);
     expect((await sql<{ action: string }>("SELECT action FROM audit_log WHERE action = 'shop.counter_settings'"))).toHaveLength(1);
+  });
+
+  it('is one setting with the shop settings page: a change on either side shows on the other at once', async () => {
+    // with the read cache on, as in a started API (it is off under test)
+    ReadCache.ttlMs = 60_000;
+    onTestFinished(() => {
+      ReadCache.ttlMs = 0;
+    });
+    const owner = new Browser(stack.url);
+    await signIn(owner, 'owner@fryline.test');
+    const shopSide = async () => (await owner.getJson('/api/staff/shop-settings')).body;
+    await shopSide(); // read once, so a stale copy would be cached
+    expect((await owner.send('PUT', '/api/counter/settings', { noShowGraceMinutes: 50, handOverUndoSeconds: 15 })).status).toBe(200);
+    const onShopPage = await shopSide();
+    expect(onShopPage.noShowGraceMinutes).toBe(50);
+    const { updatedAt: _updatedAt, logo: _logo, ...input } = onShopPage;
+    expect((await owner.send('PUT', '/api/staff/shop-settings', { ...input, noShowGraceMinutes: 25 })).status).toBe(200);
+    expect((await owner.getJson('/api/counter/settings')).body.noShowGraceMinutes).toBe(25);
   });
 });

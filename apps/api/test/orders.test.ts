@@ -67,6 +67,21 @@ describe('placing an order', () => {
     expect(closed.body.error.code).toBe('closed');
   });
 
+  it('answers 409 window_full naming the field when the pickup window has no order left, and takes nothing', async () => {
+    const day = await openDay(stack);
+    await PickupWindow.update({ ordersRemaining: 0 }, { where: { id: day.pickupWindows[0]!.id } });
+    const before = await remaining(day.id);
+    const ordersBefore = await Order.count({ where: { bakeDayId: day.id } });
+    const full = await customer.send('POST', '/api/orders', halfDozen(day, 0));
+    expect(full.status).toBe(409);
+    expect(full.body.error).toMatchObject({ code: 'window_full', details: { fields: { pickupWindowId: expect.stringMatching(/full/i) } } });
+    expect(await remaining(day.id)).toEqual(before);
+    expect(await Order.count({ where: { bakeDayId: day.id } })).toBe(ordersBefore);
+    expect((await PickupWindow.findByPk(day.pickupWindows[0]!.id))!.ordersRemaining).toBe(0);
+    // another window still takes it
+    expect((await customer.send('POST', '/api/orders', halfDozen(day, 1))).status).toBe(201);
+  });
+
   it('adds sales tax when the owner sets it added, and sends it to checkout as its own line', async () => {
     await ShopSettings.update({ taxMode: 'added', taxRateBp: 825 }, { where: { id: 1 } });
     const day = await openDay(stack);
