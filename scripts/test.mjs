@@ -4,7 +4,8 @@
 // "N passed, N failed".
 import fs from 'node:fs';
 import path from 'node:path';
-import { aptInstall, buildApps, ensurePnpm, installDependencies, log, root, run, SetupError } from './lib/shell.mjs';
+import { spawn } from 'node:child_process';
+import { aptInstall, buildApps, ensurePnpm, installDependencies, log, root, SetupError } from './lib/shell.mjs';
 import { ensurePostgres } from './lib/postgres.mjs';
 
 async function main() {
@@ -14,11 +15,15 @@ async function main() {
 
   const dataDir = process.env.TEST_DATA_DIR ? path.resolve(process.env.TEST_DATA_DIR) : path.join(root, '.test-data');
   const pgPort = Number(process.env.TEST_PGPORT ?? 5434);
-  // a fresh cluster every run: tests never see yesterday's data
-  const previous = await ensurePostgresIfPresent(dataDir, pgPort);
-  previous?.stop();
+  // The browser journeys get a PostgreSQL of their own (the next port), so the
+  // API tests, one of which stops and starts its server on purpose, can run
+  // beside them.
+  const e2eDir = path.join(dataDir, 'e2e');
+  const e2ePort = Number(process.env.TEST_E2E_PGPORT ?? pgPort + 1);
+  for (const [dir, port] of [[dataDir, pgPort], [e2eDir, e2ePort]]) (await ensurePostgresIfPresent(dir, port))?.stop();
   fs.rmSync(dataDir, { recursive: true, force: true });
   const pg = await ensurePostgres({ dataDir, port: pgPort, durable: false });
+  const pgE2e = await ensurePostgres({ dataDir: e2eDir, port: e2ePort, durable: false });
 
   let code = 1;
   try {
@@ -27,30 +32,61 @@ async function main() {
       NODE_ENV: 'test',
       TEST_PG_ADMIN_URL: pg.createDatabase('postgres'),
       TEST_DATABASE_URL: pg.createDatabase('fryline_test'),
-      TEST_E2E_DATABASE_URL: pg.createDatabase('fryline_e2e'),
-      TEST_SETUP_DATABASE_URL: pg.createDatabase('fryline_setup'),
+      TEST_E2E_DATABASE_URL: pgE2e.createDatabase('fryline_e2e'),
+      TEST_SETUP_DATABASE_URL: pgE2e.createDatabase('fryline_setup'),
     };
     buildApps(pnpm);
-    const results = path.join(dataDir, 'results.json');
-    log('running the tests');
-    const res = run(path.join(root, 'node_modules/.bin/vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${results}`], {
-      env,
-      allowFail: true,
-    });
-    code = res.status ?? 1;
-    if (fs.existsSync(results)) {
-      const summary = JSON.parse(fs.readFileSync(results, 'utf8'));
-      const failed = summary.numFailedTests + (summary.numFailedTestSuites && !summary.numFailedTests ? summary.numFailedTestSuites : 0);
-      console.log(`\n${summary.numPassedTests} passed, ${failed} failed${summary.numPendingTests ? `, ${summary.numPendingTests} skipped` : ''}`);
-      if (summary.numTotalTests === 0) code = 1;
-    } else {
-      console.log('\n0 passed, 1 failed');
-      code = code || 1;
+    log('running the tests: the browser journeys beside the rest (their report follows the others)');
+    const lanes = [
+      { name: 'main', projects: ['!e2e'], results: path.join(dataDir, 'results.json'), output: null },
+      { name: 'e2e', projects: ['e2e'], results: path.join(dataDir, 'results-e2e.json'), output: path.join(dataDir, 'e2e-output.log') },
+    ];
+    const statuses = await Promise.all(lanes.map((lane) => runLane(lane, env)));
+    for (const lane of lanes.filter((l) => l.output)) {
+      console.log(`\n--- the ${lane.name} lane ---`);
+      if (fs.existsSync(lane.output)) process.stdout.write(fs.readFileSync(lane.output, 'utf8'));
     }
+    code = statuses.every((status) => status === 0) ? 0 : 1;
+    let passed = 0;
+    let failed = 0;
+    let skipped = 0;
+    let total = 0;
+    for (const lane of lanes) {
+      if (!fs.existsSync(lane.results)) {
+        console.log(`\nthe ${lane.name} lane wrote no results`);
+        failed += 1;
+        continue;
+      }
+      const summary = JSON.parse(fs.readFileSync(lane.results, 'utf8'));
+      passed += summary.numPassedTests;
+      failed += summary.numFailedTests + (summary.numFailedTestSuites && !summary.numFailedTests ? summary.numFailedTestSuites : 0);
+      skipped += summary.numPendingTests;
+      total += summary.numTotalTests;
+    }
+    if (total === 0 || failed > 0) code = 1;
+    console.log(`\n${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
   } finally {
     pg.stop();
+    pgE2e.stop();
   }
   process.exit(code);
+}
+
+/** One vitest run over some projects; its output goes to the console, or to a file printed afterwards. */
+function runLane(lane, env) {
+  const args = ['run', ...lane.projects.map((p) => `--project=${p}`), '--reporter=default', '--reporter=json', `--outputFile.json=${lane.results}`];
+  return new Promise((resolve) => {
+    const out = lane.output ? fs.openSync(lane.output, 'w') : 'inherit';
+    const child = spawn(path.join(root, 'node_modules/.bin/vitest'), args, { cwd: root, env, stdio: ['ignore', out, out] });
+    child.on('error', (err) => {
+      console.error(`the ${lane.name} lane could not start: ${err.message}`);
+      resolve(1);
+    });
+    child.on('exit', (status, signal) => {
+      if (typeof out === 'number') fs.closeSync(out);
+      resolve(signal ? 1 : status ?? 1);
+    });
+  });
 }
 
 async function ensurePostgresIfPresent(dataDir, port) {

@@ -1,5 +1,5 @@
 import { NavLink } from 'react-router-dom';
-import { BrandLink } from '@fryline/ui';
+import { BrandLink, useShop } from '@fryline/ui';
 import { hasRole } from '@fryline/schemas';
 import { roleNames, sections } from '../../config/sections';
 import { useStaffMember } from '../session/staff-member';
@@ -14,13 +14,16 @@ const navLink = ({ isActive }: { isActive: boolean }) =>
 
 export function StaffHeader() {
   const member = useStaffMember();
+  const shop = useShop();
+  // the business's own name and logo, as its customers see them; Fryline until the settings have loaded
+  const name = shop?.name ?? 'Fryline';
   // only pages that work, and only those this role may open
   const allowed = sections.filter((section) => hasRole(member.role, section.minRole) && isBuilt(section.path));
   return (
     <header className="border-b border-line bg-paper">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-3 gap-y-2 px-4 pt-3">
-        <BrandLink className="text-xl">
-          Fryline <span className="font-semibold text-muted">staff</span>
+        <BrandLink className="text-xl" logo={shop?.logo ?? null} name={name}>
+          <span className="min-w-0 truncate">{name}</span> <span className="shrink-0 font-semibold text-muted">staff</span>
         </BrandLink>
         <div className="ml-auto flex min-w-0 items-center gap-2 sm:gap-3">
           <WaitingToSend />

@@ -1,14 +1,6 @@
 import type { OrderStatus } from '@fryline/schemas';
+import { orderStatusNames } from '../../../lib/order-status-names';
 
-export const orderStatusNames: Record<OrderStatus, string> = {
-  held: 'Awaiting payment',
-  paid: 'Paid',
-  collected: 'Collected',
-  no_show: 'No-show',
-  cancelled: 'Cancelled',
-  refunded: 'Refunded',
-  expired: 'Hold lapsed',
-};
 
 const tones: Record<OrderStatus, string> = {
   held: 'badge-warn',

@@ -2,7 +2,7 @@ import { type BakeDayView, type StaffOrderView } from '@fryline/schemas';
 import { useMoney } from '@fryline/ui';
 import { summariseOrders } from '../model/order-list';
 import { Fact } from './fact';
-import { orderStatusNames } from './order-status-badge';
+import { orderStatusNames } from '../../../lib/order-status-names';
 
 const moneyText = 'text-xl font-extrabold tabular-nums';
 

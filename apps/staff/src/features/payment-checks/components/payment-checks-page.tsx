@@ -1,12 +1,11 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { formatCents, type PaymentFlagView } from '@fryline/schemas';
-import { ErrorState, LoadingState } from '@fryline/ui';
+import { ErrorState, LoadingState, useShop } from '@fryline/ui';
 import { formatDate, formatDateTime } from '@fryline/ui/format';
 import { PageFrame } from '../../../components/page-frame';
-import { shopSettingsQueries } from '../../shop-settings/api/shop-settings-queries';
 import { paymentChecksQueries } from '../api/payment-checks-queries';
-import { orderStatusNames } from '../../orders/components/order-status-badge';
+import { orderStatusNames } from '../../../lib/order-status-names';
 
 /** Where the money of a flagged payment stands, in words (never colour alone). */
 const refundWords: Record<PaymentFlagView['refundStatus'], { text: string; icon: string; tone: string }> = {
@@ -24,8 +23,7 @@ const refundWords: Record<PaymentFlagView['refundStatus'], { text: string; icon:
  */
 export function PaymentChecksPage() {
   const flags = useQuery(paymentChecksQueries.flags());
-  const settings = useQuery(shopSettingsQueries.current());
-  const timeZone = settings.data?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;
+  const timeZone = useShop()?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;
 
   return (
     <PageFrame
