@@ -216,6 +216,25 @@ describe('warnings as data', () => {
     expect(p.cuts.firstRollSheet.ringsThatFit).toBe(0);
   });
 
+  it('the first roll never plans more rings than its own sheet fits, and the note and warning say the same count (hand-worked layout in cutting.test.ts)', () => {
+    // A narrow bench and little scrap make the first sheet the limit; the sheet's count comes from one layout.
+    const tight = (orders: OrderLine[]) => withEquipment(orders, (e) => ({ rolling: { ...e.rolling, widthMm: 250, scrapPercent: 10 } }));
+    let warned = 0;
+    for (const rings of [6, 12, 20, 21, 30, 45, 60]) {
+      const p = planBake(tight([order(0, rings)]));
+      const first = p.cuts.rolls[0]!;
+      expect(first.rings).toBeLessThanOrEqual(p.cuts.firstRollSheet.ringsThatFit);
+      const w = p.warnings.find((x) => x.code === 'sheet_fits_fewer');
+      if (w) {
+        warned++;
+        expect(first.rings).toBe(p.cuts.firstRollSheet.ringsThatFit);
+        expect(w.message).toContain(`fits ${first.rings} rings`);
+      }
+      expect(p.cuts.rings).toBeGreaterThanOrEqual(p.pieces.rings.toMake);
+    }
+    expect(warned).toBeGreaterThan(0);
+  });
+
   it('egg_rounding_shift: two rings need a sliver of egg, and one whole egg moves the dough by more than 2 %', () => {
     const p = planBake(baseInput([order(2, 2)]));
     expect(codes(p)).toContain('egg_rounding_shift');

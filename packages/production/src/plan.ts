@@ -15,7 +15,7 @@
 import { allergenCaution, distinctAllergens, HOME_FOOD_RULES_CAUTION, hotOilCautions } from './cautions.js';
 import { capacityFromEquipment, type Capacity } from './capacity.js';
 import { costBake, type BoxOffer, type CostPlan, type Prices } from './cost.js';
-import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, type RollResult, type RollStep } from './cutting.js';
+import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, sheetOfDough, type RollResult, type RollStep } from './cutting.js';
 import { ProductionInputError, requireFinite, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
 import {
   eggEdibleGrams, scaleFormula, type EggClass, type EggCount, type Formula, type RouxPlan, type ScaledFormula, type StarterPlan,
@@ -527,15 +527,25 @@ export function planBake(input: PlanBakeInput): BakePlan {
     warn('cutter_wider_than_sheet', `The ${Math.round(eq.cutter.outerMm)} mm cutter does not fit on a sheet rolled ${Math.round(eq.rolling.widthMm)} mm wide: no ring can be cut. Roll wider or use a smaller cutter; the plan below assumes the usual ${Math.round(keep * 100)} % cut.`);
   }
   const cutShare = { ring: ringShareRaw > 0 ? Math.min(keep, ringShareRaw) : keep, hole: holeShareRaw > 0 ? Math.min(keep, holeShareRaw) : keep };
+  const firstSheet = { rolling: eq.rolling, cutterMm: eq.cutter.outerMm };
   const rollSettings = { ...mass, scrapPercent: eq.rolling.scrapPercent, rerolls: eq.rolling.rerolls, ringCutShare: Math.max(0.05, cutShare.ring), holeCutShare: Math.max(0.05, cutShare.hole) };
 
   // Dough each lot needs, and its cuts.
   const lotList = [...lots.values()];
   const lotCuts = lotList.map((lot) => {
     const need = doughForPieces({ ...rollSettings, rings: lot.rings, holes: lot.holes });
-    const rolled = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles });
-    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece'); // doughForPieces guarantees it
-    return { lot, need, rolled };
+    const cut = (doughGrams: number) => rollAndCut({ ...rollSettings, doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles, firstSheet });
+    let rolled = cut(need.doughGrams);
+    // The first sheet may fit fewer rings than the cut share gives (a short sheet loses more at its ends):
+    // then more dough goes to the re-rolls, and the dough grows a piece at a time until every piece is cut.
+    for (let more = 0; (rolled.short.rings > 0 || rolled.short.holes > 0) && more < 1000; more++) {
+      need.doughGrams += Math.max(1, Math.ceil(mass.ringGrams + mass.holeGrams));
+      rolled = cut(need.doughGrams);
+    }
+    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece');
+    // Rings the cut share alone would have planned on the first roll, to say when the sheet held some back.
+    const shareFirstRings = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles }).rolls[0]?.rings ?? 0;
+    return { lot, need, rolled, heldBack: shareFirstRings > (rolled.rolls[0]?.rings ?? 0) };
   });
   const baseCut = lotCuts[0]!;
 
@@ -916,12 +926,10 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const cutRings = lotCuts.reduce((s, c) => s + c.rolled.rings, 0);
   const cutHoles = lotCuts.reduce((s, c) => s + c.rolled.holes, 0);
   const firstRoll = rollsSum[0];
-  const sheetLengthMm = firstRoll && firstRoll.doughGrams > 0
-    ? (firstRoll.doughGrams * 1000) / (eq.rolling.doughDensityGPerCm3 * eq.rolling.thicknessMm * eq.rolling.widthMm)
-    : 0;
-  const ringsThatFit = sheetLengthMm > 0
-    ? cutsFromSheet({ widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, cutterMm: eq.cutter.outerMm, gapMm: eq.rolling.gapMm })
-    : 0;
+  const sheetLengthMm = firstRoll ? sheetOfDough(firstRoll.doughGrams, eq.rolling, eq.cutter.outerMm).lengthMm : 0;
+  // Each dough's first sheet as rollAndCut laid it out: the same count that bounds its first-roll rings.
+  const ringsThatFit = lotCuts.reduce((s, c) => s + (c.rolled.rolls[0]?.ringsThatFit ?? 0), 0);
+  const firstRollHeldBack = lotCuts.some((c) => c.heldBack);
   const cuts: CutsPlan = {
     rolls: rollsSum,
     rings: cutRings,
@@ -933,8 +941,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
     firstRollSheet: { widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, ringsThatFit },
     cutShare,
   };
-  if (firstRoll && ringShareRaw > 0 && firstRoll.rings > ringsThatFit && ringsThatFit > 0) {
-    warn('sheet_fits_fewer', `Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits about ${ringsThatFit} rings, not the ${firstRoll.rings} planned: cut closer together or expect more re-rolled dough.`);
+  if (firstRoll && ringShareRaw > 0 && ringsThatFit > 0 && firstRollHeldBack) {
+    warn('sheet_fits_fewer', `Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits ${ringsThatFit} rings, fewer than the usual cut share would give: the first roll plans those ${ringsThatFit} and the rest come from re-rolled dough. Roll wider or cut closer together to re-roll less.`);
   }
 
   // The fry plan with the staged line's figures.

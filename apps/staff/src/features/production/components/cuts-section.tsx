@@ -34,7 +34,7 @@ export function CutsSection({ cuts, units }: { cuts: CutsPlan; units: Units }) {
           sheet.lengthMm > 0 && {
             label: 'First roll',
             value: `${Math.round(sheet.widthMm)} × ${Math.round(sheet.lengthMm)} mm`,
-            note: `about ${sheet.ringsThatFit} rings fit`,
+            note: `${sheet.ringsThatFit} rings fit on it`,
           },
         ]}
       />
