@@ -627,9 +627,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const peakHoursRef = input.formula.starterFeed?.peakHours ?? 4;
   const starterPeakMinutes = scaled.starter ? fermentationMinutes(peakHoursRef * 60, refC, dt.starterC ?? roomTempC) : 0;
   if (roomTempC < YEAST_NO_GROWTH_C) {
-    warn('room_too_cold', `Room at ${tempInBothScales(roomTempC)}: yeast barely grows below about ${YEAST_NO_GROWTH_C} °C, so the bulk time cannot be trusted.`);
+    warn('room_too_cold', `Room at ${tempInBothScales(roomTempC)}: yeast barely grows below about ${tempInBothScales(YEAST_NO_GROWTH_C)}, so the bulk time cannot be trusted.`);
   } else if (roomTempC > YEAST_OPTIMUM_C) {
-    warn('room_too_warm', `Room at ${tempInBothScales(roomTempC)} is above the yeast's optimum (about ${YEAST_OPTIMUM_C} °C): the bulk time is a rough guess and the dough sours fast.`);
+    warn('room_too_warm', `Room at ${tempInBothScales(roomTempC)} is above the yeast's optimum (about ${tempInBothScales(YEAST_OPTIMUM_C)}): the bulk time is a rough guess and the dough sours fast.`);
   }
 
   // The pot.

@@ -7,6 +7,7 @@ import { errorMessage } from '@fryline/ui/api-client';
 import { formatClock, formatDate } from '@fryline/ui/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
+import { unitsInText } from '../../../lib/units';
 import { useCan } from '../../../app/session/staff-member';
 import type { PlanResponse } from '@fryline/schemas';
 import { productionQueries } from '../../../lib/queries/production-queries';
@@ -85,7 +86,7 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
   const isOwner = useCan('owner');
   const { plan, meta } = data;
   const zone = meta.bakeDay.timeZone;
-  const warnings = warningMessages(plan, meta);
+  const warnings = warningMessages(plan, meta).map((warning) => unitsInText(warning, units));
 
   return (
     <div className="production-sheet flex flex-col gap-4">
@@ -119,8 +120,8 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
         <LineSection plan={plan} timeZone={zone} units={units} />
         <GlazeSection glazes={plan.glaze} units={units} />
         {isOwner && <CostSection cost={plan.cost} />}
-        <ScheduleSection timeline={plan.timeline} timeZone={zone} />
-        <SheetCautions cautions={plan.cautions} />
+        <ScheduleSection timeline={plan.timeline} timeZone={zone} units={units} />
+        <SheetCautions cautions={plan.cautions.map((caution) => unitsInText(caution, units))} />
       </div>
     </div>
   );

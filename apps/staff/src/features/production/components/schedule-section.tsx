@@ -1,10 +1,10 @@
 import type { TimelineEntry } from '@fryline/production';
-import { formatMinutes } from '../../../lib/units';
+import { formatMinutes, unitsInText, type Units } from '../../../lib/units';
 import { scheduleRows } from '../model/sheet';
 import { cell, SheetSection, TableHead } from './sheet-section';
 
 /** The clock-time schedule, worked back from the first pickup, in the bake day's time zone. */
-export function ScheduleSection({ timeline, timeZone }: { timeline: readonly TimelineEntry[]; timeZone: string }) {
+export function ScheduleSection({ timeline, timeZone, units }: { timeline: readonly TimelineEntry[]; timeZone: string; units: Units }) {
   return (
     <SheetSection id="schedule" title="Schedule" wide>
       <table className="w-full">
@@ -20,7 +20,7 @@ export function ScheduleSection({ timeline, timeZone }: { timeline: readonly Tim
               </td>
               <th scope="row" className={`${cell.text} text-left font-normal`}>
                 <span className="sheet-step block font-extrabold">{row.title}</span>
-                <span className="sheet-look block text-sm">{row.lookFor}</span>
+                <span className="sheet-look block text-sm">{unitsInText(row.lookFor, units)}</span>
               </th>
             </tr>
           ))}
