@@ -30,7 +30,7 @@ import {
   DEFAULT_DOUGH_TEMPERATURE, driftingFermentationMinutes, fermentationMinutes, liquidTemperatureC,
   type DoughTemperatureSettings, type TemperatureFactor,
 } from './temperature.js';
-import { instantFormatter, parseInstant, readLocalTime, requireTimeZone } from './time.js';
+import { fiveMinuteMarkAtOrBefore, instantFormatter, parseInstant, readLocalTime, requireTimeZone } from './time.js';
 import { tempInBothScales } from './units.js';
 import { warning, type PlanWarning, type WarningCode } from './warnings.js';
 
@@ -780,8 +780,12 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const hasPieces = B.count > 0;
   const heatMinutes = Math.max(durations['heat-oil'], heatUpMinutes(fryer));
   const lineEndRel = hasPieces ? line.packUntil + packSetup : 0;
-  // The sheet reads to the minute: every line time is rounded to a whole minute.
-  const abs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
+  // The sheet reads to the minute: every line time is rounded to a whole minute. The whole line then
+  // moves earlier (by under five minutes) so that frying starts on a five-minute mark; the batches keep
+  // their exact minutes from there, and packing still runs to the first pickup.
+  const lineMs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
+  const lineShift = hasPieces ? lineMs(line.fryFrom) - fiveMinuteMarkAtOrBefore(lineMs(line.fryFrom)) : 0;
+  const abs = (rel: number) => lineMs(rel) - lineShift;
   const fmt = instantFormatter(zone);
   const at = (rel: number) => fmt(abs(rel));
 
@@ -829,14 +833,29 @@ export function planBake(input: PlanBakeInput): BakePlan {
   }
   const fryWindowOf = (mixNo: number) => windows.get(mixNo) ?? { from: line.fryFrom, until: line.fryUntil };
   // Each mix's instants, to the minute, once; the mix list and the timeline both read them.
+  // Every step starts on a five-minute mark, the way a baker plans: worked back from when each mix is first
+  // rolled, each start moves earlier to a mark (never later), so each step keeps at least its own minutes and
+  // the cut-off only moves earlier. A mix that would still be in the bowl when the next one starts moves
+  // earlier as a whole (its cold retard grows), as the unrounded plan does.
   const toMinute = (ms: number) => Math.round(ms / MIN) * MIN;
-  const mixTimes = mixPlans.map((m, k) => {
-    const start = toMinute(mixStart[k]!);
-    const bulkFrom = start + Math.round(mixMinutes) * MIN;
-    const bulkUntil = toMinute(bulkFrom + bulkMinutes * MIN);
-    const retardFrom = bulkUntil + Math.round(shapeMinutes) * MIN;
-    return { feed: toMinute(start - starterPeakMinutes * MIN), roux: start - Math.round(rouxMinutes) * MIN, start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(m.mix) };
-  });
+  const mark = fiveMinuteMarkAtOrBefore;
+  const mixTimes = new Array<{ feed: number; roux: number; start: number; bulkFrom: number; bulkUntil: number; retardFrom: number; roll: number; window: { from: number; until: number } }>(mixPlans.length);
+  for (let k = mixPlans.length - 1; k >= 0; k--) {
+    const start0 = toMinute(mixStart[k]!);
+    const bulkFrom0 = start0 + Math.round(mixMinutes) * MIN;
+    const bulkUntil0 = toMinute(bulkFrom0 + bulkMinutes * MIN);
+    let retardFrom = mark(bulkUntil0 + Math.round(shapeMinutes) * MIN);
+    let bulkUntil = mark(retardFrom - Math.round(shapeMinutes) * MIN);
+    let bulkFrom = mark(bulkUntil - (bulkUntil0 - bulkFrom0));
+    let start = mark(bulkFrom - Math.round(mixMinutes) * MIN);
+    const next = mixTimes[k + 1];
+    const overlap = next ? Math.max(0, bulkFrom - next.start) : 0; // both on marks: a whole number of marks
+    start -= overlap;
+    bulkFrom -= overlap;
+    bulkUntil -= overlap;
+    retardFrom -= overlap;
+    mixTimes[k] = { feed: mark(start - starterPeakMinutes * MIN), roux: mark(start - Math.round(rouxMinutes) * MIN), start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(mixPlans[k]!.mix) };
+  }
   const mixes: MixSchedule[] = mixPlans.map((m, k) => {
     const t = mixTimes[k]!;
     // Fields copied one by one: spreading each mix into a wider object took V8's slow path, ten times the cost.
@@ -877,7 +896,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
     if (text === undefined) texts.set(key, (text = `${extra} ${lookFor[step]}`));
     return text;
   };
-  const entry = (step: ScheduleStep, fromMs: number, untilMs: number, mix?: number, extra = '') => {
+  const entry = (step: ScheduleStep, startMsRaw: number, untilMs: number, mix?: number, extra = '') => {
+    const fromMs = mark(startMsRaw);
     const minutes = Math.max(0, Math.ceil((untilMs - fromMs) / MIN - 1e-9));
     startMs.push(fromMs);
     const e: TimelineEntry = { step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: textFor(step, extra) };
@@ -899,13 +919,13 @@ export function planBake(input: PlanBakeInput): BakePlan {
     entry('cold-retard', t.retardFrom, t.roll, mixNo);
   });
   if (hasPieces) {
-    entry('heat-oil', abs(line.fryFrom - heatMinutes), abs(line.fryFrom));
+    entry('heat-oil', abs(line.fryFrom) - Math.ceil(heatMinutes - 1e-9) * MIN, abs(line.fryFrom));
     entry('roll-and-cut', abs(lineStartRel), abs(line.sheets.at(-1)!.until));
     entry('final-proof', abs(line.trays.reduce((m, t) => Math.min(m, t.proofFrom), Infinity)), abs(line.trays.reduce((m, t) => Math.max(m, t.fryAt), -Infinity)));
     entry('fry', abs(line.fryFrom), abs(line.fryUntil));
     entry('cool', abs(line.fryUntil), abs(line.fryUntil + durations.cool));
     entry('glaze', abs(line.glazeFrom), abs(line.glazeUntil));
-    entry('pack', abs(line.packFrom), abs(lineEndRel));
+    entry('pack', abs(line.packFrom), lineMs(lineEndRel));
   } else {
     entry('pack', pickupMs, pickupMs);
   }
@@ -1071,7 +1091,7 @@ export function planBake(input: PlanBakeInput): BakePlan {
       glazeFrom: at(line.glazeFrom),
       glazeUntil: at(line.glazeUntil),
       packFrom: at(line.packFrom),
-      packUntil: at(lineEndRel),
+      packUntil: fmt(lineMs(lineEndRel)),
     },
     glaze,
     timeline: sortedTimeline,
