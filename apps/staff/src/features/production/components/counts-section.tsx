@@ -56,8 +56,8 @@ export function CountsSection({ plan, meta }: { plan: BakePlan; meta: PlanMeta }
         </tbody>
       </table>
       <p className="sheet-note text-sm text-muted">
-        Extra for seconds: pieces made beyond the orders to replace any that come out misshapen, dropped or
-        over-fried. Whatever the dough gives beyond that is the surplus for walk-ups, under Cutting.
+        Extra for seconds replaces misshapen, dropped or over-fried pieces; the surplus for walk-ups (under
+        Cutting) is what the dough gives beyond that.
       </p>
       <p className="text-sm text-muted" data-print="hide">
         The equipment makes about {plan.capacity.pieces} rings a bake day (limited by{' '}

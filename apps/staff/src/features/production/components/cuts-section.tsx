@@ -33,7 +33,7 @@ export function CutsSection({ cuts, units }: { cuts: CutsPlan; units: Units }) {
           {
             label: 'Surplus for walk-ups',
             value: formatPieces(cuts.surplus.rings, cuts.surplus.holes),
-            note: 'cut beyond the pieces to make; the counter sells them',
+            note: 'cut beyond the pieces to make',
           },
           sheet.lengthMm > 0 && {
             label: 'First roll',

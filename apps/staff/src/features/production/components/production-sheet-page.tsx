@@ -110,15 +110,20 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
       </div>
       <div className="sheet-grid grid gap-4 lg:grid-cols-2">
         <SheetWarnings warnings={warnings} />
-        <CountsSection plan={plan} meta={meta} />
-        <DoughSection plan={plan} units={units} />
+        {/* On screen the two groups melt into the grid; on paper they are the page's two columns. */}
+        <div className="sheet-column">
+          <CountsSection plan={plan} meta={meta} />
+          <DoughSection plan={plan} units={units} />
+          {plan.roux && <RouxSection roux={plan.roux} units={units} />}
+          {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
+        </div>
+        <div className="sheet-column">
+          <CutsSection cuts={plan.cuts} units={units} />
+          <FrySection fry={plan.fry} units={units} />
+          <LineSection plan={plan} timeZone={zone} units={units} />
+          <GlazeSection glazes={plan.glaze} units={units} />
+        </div>
         <MixesSection mixes={plan.mixes} variations={plan.variations} timeZone={zone} units={units} />
-        {plan.roux && <RouxSection roux={plan.roux} units={units} />}
-        {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
-        <CutsSection cuts={plan.cuts} units={units} />
-        <FrySection fry={plan.fry} units={units} />
-        <LineSection plan={plan} timeZone={zone} units={units} />
-        <GlazeSection glazes={plan.glaze} units={units} />
         {isOwner && <CostSection cost={plan.cost} />}
         <ScheduleSection timeline={plan.timeline} timeZone={zone} units={units} />
         <SheetCautions cautions={plan.cautions.map((caution) => unitsInText(caution, units))} />
