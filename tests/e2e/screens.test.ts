@@ -2,6 +2,7 @@ import { mkdirSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { PDFDocument } from 'pdf-lib';
 import pg from 'pg';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -214,6 +215,40 @@ describe('printed production sheet', () => {
       const pdf = await page.pdf({ path: path.join(shotsDir, 'production-sheet.pdf'), printBackground: true });
       // every PDF file opens with the "%PDF-" header (ISO 32000-1, 7.5.2)
       expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+      // The printed layout as a picture too, at US Letter's printable width (8.5 in less the sheet's 2 × 6 mm margins, 96 px an inch).
+      await page.setViewportSize({ width: Math.floor(8.5 * 96 - (2 * 6 * 96) / 25.4), height: 900 });
+      await page.screenshot({ path: path.join(shotsDir, 'production-sheet-print.png'), fullPage: true });
+      // One page on US Letter (8.5 × 11 in = 612 × 792 pt, ANSI/ASME Y14.1) and on A4 (210 × 297 mm, ISO 216),
+      // counted by pdf-lib, which reads the file's page tree.
+      for (const [format, size] of [['Letter', [612, 792]], ['A4', [595.28, 841.89]]] as const) {
+        const file = await page.pdf({ path: path.join(shotsDir, `production-sheet-${format.toLowerCase()}.pdf`), format, printBackground: true });
+        const doc = await PDFDocument.load(file);
+        expect(doc.getPageCount(), `${format}: the sheet fits one page`).toBe(1);
+        // Chromium sizes pages in whole CSS pixels (0.75 pt each), so allow a pixel and a half.
+        const { width, height } = doc.getPage(0).getSize();
+        expect(Math.abs(width - size[0]), `${format}: page width ${width} pt`).toBeLessThanOrEqual(1.2);
+        expect(Math.abs(height - size[1]), `${format}: page height ${height} pt`).toBeLessThanOrEqual(1.2);
+      }
+      // Readable at arm's length: no printed text under 9 pt (12 CSS px; CSS Values 4: 1 pt = 4/3 px).
+      const small = await page.locator('main').evaluate((main) => {
+        const tooSmall: string[] = [];
+        const walker = document.createTreeWalker(main, NodeFilter.SHOW_TEXT);
+        for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+          const el = node.parentElement;
+          if (!el || !node.textContent?.trim() || el.closest('.sr-only')) continue;
+          const box = el.getBoundingClientRect();
+          if (box.width === 0 || box.height === 0 || getComputedStyle(el).visibility === 'hidden') continue;
+          const px = parseFloat(getComputedStyle(el).fontSize);
+          if (px < 12 - 0.01) tooSmall.push(`${px * 0.75} pt: ${node.textContent.trim().slice(0, 40)}`);
+        }
+        return tooSmall;
+      });
+      expect(small, 'printed text of at least 9 pt').toEqual([]);
+      // The parts a baker works from are on paper: the schedule, the mixer list, the fry plan and its batches.
+      for (const name of [/^schedule$/i, /^dough$/i, /^frying$/i, /^cutting$/i, /^proof and fry, batch by batch$/i]) {
+        await expect.poll(() => page.getByRole('heading', { name }).first().isVisible(), { message: `${name} printed` }).toBe(true);
+      }
+      await expect.poll(() => page.getByText(/^into the mixer$/i).isVisible()).toBe(true);
     } finally {
       await page.emulateMedia({ media: null });
     }

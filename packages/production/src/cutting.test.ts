@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { cutLayout, cutPositions, cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare } from './cutting.js';
+import { cutLayout, cutPositions, cutsFromSheet, doughForPieces, ringsOnSheetOf, rollAndCut, sheetCutShare, sheetOfDough } from './cutting.js';
 
 /** Densest packing of equal circles, π/(2√3) = 0.9068996821… (ProofWiki; OEIS A093766). */
 const HEX_BOUND = 0.9068996821;
@@ -58,6 +58,31 @@ describe('cutsFromSheet', () => {
 
   it('a sheet narrower than the cutter gives nothing', () => {
     expect(cutsFromSheet({ widthMm: 70, lengthMm: 500, cutterMm: 76, gapMm: 5 })).toBe(0);
+  });
+});
+
+describe('the first roll as one sheet at the bench width (worked by hand)', () => {
+  // 400 mm wide, 13 mm thick, dough 1.18 g/cm³ (Sourdough Biotechnology, Table 3.4): 1 mm of sheet holds
+  // 400 × 13 × 1.18 / 1000 = 6.136 g, so 1840.8 g makes a sheet 300 mm long.
+  const rolling = { widthMm: 400, thicknessMm: 13, gapMm: 5, doughDensityGPerCm3: 1.18 };
+  it('a 76 mm cutter, 5 mm apart, fits 18 rings on a 400 × 300 mm sheet (worked by hand)', () => {
+    expect(sheetOfDough(1840.8, rolling, 76).lengthMm).toBeCloseTo(300, 9);
+    // Staggered rows, pitch 81 mm, rows 81·√3/2 = 70.15 mm apart: ⌊(300 − 76)/70.15⌋ + 1 = 4 rows;
+    // ⌊(400 − 76)/81⌋ + 1 = 5 in the 1st and 3rd, ⌊(400 − 40.5 − 76)/81⌋ + 1 = 4 in the 2nd and 4th: 18.
+    // Turned, or in a square grid: 3 rows of 5 = 15. So 18.
+    expect(ringsOnSheetOf(1840.8, rolling, 76)).toBe(18);
+  });
+  it('plans no more first-roll rings than the sheet fits, even when the cut share would give more', () => {
+    // 10 % scrap: the share alone gives ⌊1840.8 × 0.9 / 70⌋ = 23 rings, but only 18 fit. The re-roll gets
+    // 1840.8 − 18 × 70 = 580.8 g and cuts ⌊580.8 × 0.9 / 70⌋ = 7: the 2 still wanted and 5 surplus.
+    const settings = { doughGrams: 1840.8, ringGrams: 60, holeGrams: 10, scrapPercent: 10, rerolls: 1, ringsWanted: 20, extraHolesWanted: 0 };
+    expect(rollAndCut(settings).rolls[0]!.rings).toBe(23);
+    const r = rollAndCut({ ...settings, firstSheet: { rolling, cutterMm: 76 } });
+    expect(r.rolls[0]!.rings).toBe(18);
+    expect(r.rolls[0]!.ringsThatFit).toBe(18);
+    expect(r.rolls[1]!.rings).toBe(7);
+    expect(r.rings).toBe(25);
+    expect(r.short).toEqual({ rings: 0, holes: 0 });
   });
 });
 

@@ -135,8 +135,40 @@ function cutShares(settings: RollSettings): { ring: number; hole: number } {
   return { ring, hole };
 }
 
+/** How a roll's dough is spread on the bench: a sheet this wide, this thick, cuts this far apart. */
+export interface SheetRolling {
+  widthMm: number;
+  thicknessMm: number;
+  gapMm: number;
+  doughDensityGPerCm3: number;
+}
+
+/**
+ * The sheet a mass of dough makes when rolled to the bench width and the set
+ * thickness: length = mass ÷ (density × thickness × width).
+ */
+export function sheetOfDough(doughGrams: number, rolling: SheetRolling, cutterMm: number): Sheet {
+  requireNonNegative('doughGrams', doughGrams);
+  requirePositive('doughDensityGPerCm3', rolling.doughDensityGPerCm3);
+  requirePositive('thicknessMm', rolling.thicknessMm);
+  requirePositive('widthMm', rolling.widthMm);
+  const lengthMm = (doughGrams * 1000) / (rolling.doughDensityGPerCm3 * rolling.thicknessMm * rolling.widthMm);
+  return { widthMm: rolling.widthMm, lengthMm, cutterMm, gapMm: rolling.gapMm };
+}
+
+/** Rings a real layout fits on the sheet that a mass of dough makes (0 for no dough). */
+export function ringsOnSheetOf(doughGrams: number, rolling: SheetRolling, cutterMm: number): number {
+  const sheet = sheetOfDough(doughGrams, rolling, cutterMm);
+  return sheet.lengthMm > 0 ? cutsFromSheet(sheet) : 0;
+}
+
 export interface RollInput extends RollSettings {
   doughGrams: number;
+  /**
+   * When set, the first roll is one sheet at the bench width: it never plans
+   * more rings than `ringsOnSheetOf` fits on it (the rest come from re-rolls).
+   */
+  firstSheet?: { rolling: SheetRolling; cutterMm: number };
   /** Rings the orders need; more are cut as surplus if the dough allows. */
   ringsWanted: number;
   /** Holes needed beyond the ring centres, cut with the hole cutter. */
@@ -150,6 +182,8 @@ export interface RollStep {
   rings: number;
   extraHoles: number;
   scrapGrams: number;
+  /** First roll with `firstSheet` only: rings a real layout fits on its sheet (the rings above never exceed it). */
+  ringsThatFit?: number;
 }
 
 export interface RollResult {
@@ -196,18 +230,21 @@ export function rollAndCut(input: RollInput): RollResult {
   for (let roll = 1; roll <= input.rerolls + 1; roll++) {
     // Dough "footprint" left on the sheet: a ring takes disc/share of it, a hole hole/share.
     let footprint = dough;
-    let rings = Math.min(ringsLeft, Math.floor((footprint * share.ring) / disc + EPS));
+    const fit = roll === 1 && input.firstSheet ? ringsOnSheetOf(dough, input.firstSheet.rolling, input.firstSheet.cutterMm) : Infinity;
+    let rings = Math.min(ringsLeft, fit, Math.floor((footprint * share.ring) / disc + EPS));
     footprint -= (rings * disc) / share.ring;
     const extraHoles = holesLeft > 0 ? Math.min(holesLeft, Math.floor((Math.max(0, footprint) * share.hole) / input.holeGrams + EPS)) : 0;
     footprint -= extraHoles > 0 ? (extraHoles * input.holeGrams) / share.hole : 0;
     ringsLeft -= rings;
     holesLeft -= extraHoles;
     if (ringsLeft === 0 && holesLeft === 0) {
-      const surplus = Math.floor((Math.max(0, footprint) * share.ring) / disc + EPS);
+      const surplus = Math.min(fit - rings, Math.floor((Math.max(0, footprint) * share.ring) / disc + EPS));
       rings += surplus;
     }
     const scrapGrams = Math.max(0, dough - rings * disc - extraHoles * input.holeGrams);
-    rolls.push({ roll, doughGrams: dough, rings, extraHoles, scrapGrams });
+    const step: RollStep = { roll, doughGrams: dough, rings, extraHoles, scrapGrams };
+    if (fit !== Infinity) step.ringsThatFit = fit;
+    rolls.push(step);
     dough = scrapGrams;
   }
   const rings = rolls.reduce((s, r) => s + r.rings, 0);

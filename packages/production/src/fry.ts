@@ -627,7 +627,7 @@ export function oilWarnings(input: Pick<FryInput, 'oilStartC' | 'smokePointC' | 
     push('oil_outside_usual_range', `Oil start temperature ${tempInBothScales(input.oilStartC)} is outside the usual ${tempInBothScales(FRY_RANGE_C.min)} to ${tempInBothScales(FRY_RANGE_C.max)} for yeast-raised doughnuts.`);
   }
   if (input.smokePointC !== undefined && input.oilStartC >= requirePositive('smokePointC', input.smokePointC) - 10) {
-    push('oil_near_smoke_point', `Oil start temperature ${tempInBothScales(input.oilStartC)} is within 10 °C of this oil's smoke point (${tempInBothScales(input.smokePointC)}): choose an oil with a higher smoke point or fry cooler.`);
+    push('oil_near_smoke_point', `Oil start temperature ${tempInBothScales(input.oilStartC)} is within 10 °C (18 °F) of this oil's smoke point (${tempInBothScales(input.smokePointC)}): choose an oil with a higher smoke point or fry cooler.`);
   }
   if (input.oilDepthMm < oil.minDepthMm) {
     push('oil_too_shallow', `${Math.round(input.oilDepthMm)} mm of oil is too shallow for the pieces to float free: pour at least ${Math.round(oil.minDepthMm)} mm.`);

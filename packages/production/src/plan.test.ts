@@ -216,6 +216,25 @@ describe('warnings as data', () => {
     expect(p.cuts.firstRollSheet.ringsThatFit).toBe(0);
   });
 
+  it('the first roll never plans more rings than its own sheet fits, and the note and warning say the same count (hand-worked layout in cutting.test.ts)', () => {
+    // A narrow bench and little scrap make the first sheet the limit; the sheet's count comes from one layout.
+    const tight = (orders: OrderLine[]) => withEquipment(orders, (e) => ({ rolling: { ...e.rolling, widthMm: 250, scrapPercent: 10 } }));
+    let warned = 0;
+    for (const rings of [6, 12, 20, 21, 30, 45, 60]) {
+      const p = planBake(tight([order(0, rings)]));
+      const first = p.cuts.rolls[0]!;
+      expect(first.rings).toBeLessThanOrEqual(p.cuts.firstRollSheet.ringsThatFit);
+      const w = p.warnings.find((x) => x.code === 'sheet_fits_fewer');
+      if (w) {
+        warned++;
+        expect(first.rings).toBe(p.cuts.firstRollSheet.ringsThatFit);
+        expect(w.message).toContain(`fits ${first.rings} rings`);
+      }
+      expect(p.cuts.rings).toBeGreaterThanOrEqual(p.pieces.rings.toMake);
+    }
+    expect(warned).toBeGreaterThan(0);
+  });
+
   it('egg_rounding_shift: two rings need a sliver of egg, and one whole egg moves the dough by more than 2 %', () => {
     const p = planBake(baseInput([order(2, 2)]));
     expect(codes(p)).toContain('egg_rounding_shift');
@@ -251,6 +270,48 @@ describe('warnings as data', () => {
     expect(retard.startsAt).toMatch(/-05:00$/);
     expect(retard.endsAt).toMatch(/-06:00$/);
     expect(minutesBetween(retard.startsAt, retard.endsAt)).toBeGreaterThanOrEqual(DEFAULT_SCHEDULE.durationsMinutes['cold-retard']);
+  });
+});
+
+describe('schedule steps start on five-minute marks (common practice, no source: bakers plan to round times)', () => {
+  // Odd minutes of our own, so no step falls on a mark by itself; pickup on the night America/Chicago repeats
+  // 01:00–02:00 (2026-11-01, IANA tz database).
+  const odd = { ...DEFAULT_SCHEDULE, durationsMinutes: { ...DEFAULT_SCHEDULE.durationsMinutes, mix: 17, 'shape-and-chill': 13, 'cook-cool-roux': 41, pack: 19, 'roll-and-cut': 23 } };
+  const inputs = [
+    { ...baseInput(saturday), schedule: odd, firstPickupStartsAt: '2026-11-01T09:00', now: '2026-10-20T12:00:00-05:00' },
+    { ...baseInput([order(0, 150), order(1, 90), order(3, 120)]), schedule: odd, firstPickupStartsAt: '2026-11-01T02:30', now: '2026-10-20T12:00:00-05:00' },
+  ];
+  const onMark = (iso: string) => Number(iso.slice(14, 16)) % 5 === 0 && iso.slice(17, 19) === '00';
+  it.each(inputs.map((x, i) => [i, x] as const))('case %i: every step starts on a mark and keeps at least its own minutes; the fry timetable keeps its minutes', (_, input) => {
+    const p = planBake(input);
+    const own = odd.durationsMinutes;
+    for (const step of p.timeline) {
+      expect(onMark(step.startsAt), `${step.step} at ${step.startsAt}`).toBe(true);
+      expect(Math.abs(minutesBetween(step.startsAt, step.endsAt) - step.minutes)).toBeLessThanOrEqual(1);
+      if (step.step === 'mix' || step.step === 'shape-and-chill' || step.step === 'cook-cool-roux' || step.step === 'pack' || step.step === 'heat-oil') {
+        expect(minutesBetween(step.startsAt, step.endsAt)).toBeGreaterThanOrEqual(own[step.step]);
+      }
+    }
+    expect(onMark(p.firstStepAt) && onMark(p.preorderCutoffAt)).toBe(true);
+    // The mixes list and the schedule give the same starts.
+    const mixSteps = p.timeline.filter((s) => s.step === 'mix');
+    expect(mixSteps.map((s) => s.startsAt)).toEqual(p.mixes.map((m) => m.mixAt));
+    // Frying starts on a mark with the first batch; the batches keep their own minutes and stay in the fry step.
+    const fry = p.timeline.find((s) => s.step === 'fry')!;
+    const batches = p.fry.timetable.map((b) => Date.parse(b.at));
+    expect(p.fry.timetable[0]!.at).toBe(fry.startsAt);
+    expect(batches.some((t) => new Date(t).getUTCMinutes() % 5 !== 0)).toBe(true);
+    for (let i = 1; i < batches.length; i++) expect(batches[i]!).toBeGreaterThan(batches[i - 1]!);
+    expect(batches.at(-1)!).toBeLessThan(Date.parse(fry.endsAt));
+    expect(Math.abs(fry.minutes - p.fry.minutes)).toBeLessThanOrEqual(1);
+    expect(p.timeline.at(-1)!.endsAt).toBe(input.firstPickupStartsAt === '2026-11-01T09:00' ? '2026-11-01T09:00:00-06:00' : '2026-11-01T02:30:00-06:00');
+  });
+
+  it('a pickup 4 min later moves the cut-off later by 0 to 5 min, never earlier (marks only take a start back to the mark before it)', () => {
+    const a = planBake(inputs[0]!);
+    const b = planBake({ ...inputs[0]!, firstPickupStartsAt: '2026-11-01T09:04' });
+    expect(Date.parse(b.preorderCutoffAt)).toBeGreaterThanOrEqual(Date.parse(a.preorderCutoffAt));
+    expect(minutesBetween(a.preorderCutoffAt, b.preorderCutoffAt)).toBeLessThanOrEqual(5);
   });
 });
 

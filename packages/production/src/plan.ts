@@ -15,7 +15,7 @@
 import { allergenCaution, distinctAllergens, HOME_FOOD_RULES_CAUTION, hotOilCautions } from './cautions.js';
 import { capacityFromEquipment, type Capacity } from './capacity.js';
 import { costBake, type BoxOffer, type CostPlan, type Prices } from './cost.js';
-import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, type RollResult, type RollStep } from './cutting.js';
+import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, sheetOfDough, type RollResult, type RollStep } from './cutting.js';
 import { ProductionInputError, requireFinite, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
 import {
   eggEdibleGrams, scaleFormula, type EggClass, type EggCount, type Formula, type RouxPlan, type ScaledFormula, type StarterPlan,
@@ -30,7 +30,7 @@ import {
   DEFAULT_DOUGH_TEMPERATURE, driftingFermentationMinutes, fermentationMinutes, liquidTemperatureC,
   type DoughTemperatureSettings, type TemperatureFactor,
 } from './temperature.js';
-import { instantFormatter, parseInstant, readLocalTime, requireTimeZone } from './time.js';
+import { fiveMinuteMarkAtOrBefore, instantFormatter, parseInstant, readLocalTime, requireTimeZone } from './time.js';
 import { tempInBothScales } from './units.js';
 import { warning, type PlanWarning, type WarningCode } from './warnings.js';
 
@@ -527,15 +527,25 @@ export function planBake(input: PlanBakeInput): BakePlan {
     warn('cutter_wider_than_sheet', `The ${Math.round(eq.cutter.outerMm)} mm cutter does not fit on a sheet rolled ${Math.round(eq.rolling.widthMm)} mm wide: no ring can be cut. Roll wider or use a smaller cutter; the plan below assumes the usual ${Math.round(keep * 100)} % cut.`);
   }
   const cutShare = { ring: ringShareRaw > 0 ? Math.min(keep, ringShareRaw) : keep, hole: holeShareRaw > 0 ? Math.min(keep, holeShareRaw) : keep };
+  const firstSheet = { rolling: eq.rolling, cutterMm: eq.cutter.outerMm };
   const rollSettings = { ...mass, scrapPercent: eq.rolling.scrapPercent, rerolls: eq.rolling.rerolls, ringCutShare: Math.max(0.05, cutShare.ring), holeCutShare: Math.max(0.05, cutShare.hole) };
 
   // Dough each lot needs, and its cuts.
   const lotList = [...lots.values()];
   const lotCuts = lotList.map((lot) => {
     const need = doughForPieces({ ...rollSettings, rings: lot.rings, holes: lot.holes });
-    const rolled = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles });
-    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece'); // doughForPieces guarantees it
-    return { lot, need, rolled };
+    const cut = (doughGrams: number) => rollAndCut({ ...rollSettings, doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles, firstSheet });
+    let rolled = cut(need.doughGrams);
+    // The first sheet may fit fewer rings than the cut share gives (a short sheet loses more at its ends):
+    // then more dough goes to the re-rolls, and the dough grows a piece at a time until every piece is cut.
+    for (let more = 0; (rolled.short.rings > 0 || rolled.short.holes > 0) && more < 1000; more++) {
+      need.doughGrams += Math.max(1, Math.ceil(mass.ringGrams + mass.holeGrams));
+      rolled = cut(need.doughGrams);
+    }
+    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece');
+    // Rings the cut share alone would have planned on the first roll, to say when the sheet held some back.
+    const shareFirstRings = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles }).rolls[0]?.rings ?? 0;
+    return { lot, need, rolled, heldBack: shareFirstRings > (rolled.rolls[0]?.rings ?? 0) };
   });
   const baseCut = lotCuts[0]!;
 
@@ -617,9 +627,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const peakHoursRef = input.formula.starterFeed?.peakHours ?? 4;
   const starterPeakMinutes = scaled.starter ? fermentationMinutes(peakHoursRef * 60, refC, dt.starterC ?? roomTempC) : 0;
   if (roomTempC < YEAST_NO_GROWTH_C) {
-    warn('room_too_cold', `Room at ${tempInBothScales(roomTempC)}: yeast barely grows below about ${YEAST_NO_GROWTH_C} °C, so the bulk time cannot be trusted.`);
+    warn('room_too_cold', `Room at ${tempInBothScales(roomTempC)}: yeast barely grows below about ${tempInBothScales(YEAST_NO_GROWTH_C)}, so the bulk time cannot be trusted.`);
   } else if (roomTempC > YEAST_OPTIMUM_C) {
-    warn('room_too_warm', `Room at ${tempInBothScales(roomTempC)} is above the yeast's optimum (about ${YEAST_OPTIMUM_C} °C): the bulk time is a rough guess and the dough sours fast.`);
+    warn('room_too_warm', `Room at ${tempInBothScales(roomTempC)} is above the yeast's optimum (about ${tempInBothScales(YEAST_OPTIMUM_C)}): the bulk time is a rough guess and the dough sours fast.`);
   }
 
   // The pot.
@@ -770,8 +780,12 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const hasPieces = B.count > 0;
   const heatMinutes = Math.max(durations['heat-oil'], heatUpMinutes(fryer));
   const lineEndRel = hasPieces ? line.packUntil + packSetup : 0;
-  // The sheet reads to the minute: every line time is rounded to a whole minute.
-  const abs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
+  // The sheet reads to the minute: every line time is rounded to a whole minute. The whole line then
+  // moves earlier (by under five minutes) so that frying starts on a five-minute mark; the batches keep
+  // their exact minutes from there, and packing still runs to the first pickup.
+  const lineMs = (rel: number) => Math.round((pickupMs + (rel - lineEndRel) * MIN) / MIN) * MIN;
+  const lineShift = hasPieces ? lineMs(line.fryFrom) - fiveMinuteMarkAtOrBefore(lineMs(line.fryFrom)) : 0;
+  const abs = (rel: number) => lineMs(rel) - lineShift;
   const fmt = instantFormatter(zone);
   const at = (rel: number) => fmt(abs(rel));
 
@@ -819,14 +833,29 @@ export function planBake(input: PlanBakeInput): BakePlan {
   }
   const fryWindowOf = (mixNo: number) => windows.get(mixNo) ?? { from: line.fryFrom, until: line.fryUntil };
   // Each mix's instants, to the minute, once; the mix list and the timeline both read them.
+  // Every step starts on a five-minute mark, the way a baker plans: worked back from when each mix is first
+  // rolled, each start moves earlier to a mark (never later), so each step keeps at least its own minutes and
+  // the cut-off only moves earlier. A mix that would still be in the bowl when the next one starts moves
+  // earlier as a whole (its cold retard grows), as the unrounded plan does.
   const toMinute = (ms: number) => Math.round(ms / MIN) * MIN;
-  const mixTimes = mixPlans.map((m, k) => {
-    const start = toMinute(mixStart[k]!);
-    const bulkFrom = start + Math.round(mixMinutes) * MIN;
-    const bulkUntil = toMinute(bulkFrom + bulkMinutes * MIN);
-    const retardFrom = bulkUntil + Math.round(shapeMinutes) * MIN;
-    return { feed: toMinute(start - starterPeakMinutes * MIN), roux: start - Math.round(rouxMinutes) * MIN, start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(m.mix) };
-  });
+  const mark = fiveMinuteMarkAtOrBefore;
+  const mixTimes = new Array<{ feed: number; roux: number; start: number; bulkFrom: number; bulkUntil: number; retardFrom: number; roll: number; window: { from: number; until: number } }>(mixPlans.length);
+  for (let k = mixPlans.length - 1; k >= 0; k--) {
+    const start0 = toMinute(mixStart[k]!);
+    const bulkFrom0 = start0 + Math.round(mixMinutes) * MIN;
+    const bulkUntil0 = toMinute(bulkFrom0 + bulkMinutes * MIN);
+    let retardFrom = mark(bulkUntil0 + Math.round(shapeMinutes) * MIN);
+    let bulkUntil = mark(retardFrom - Math.round(shapeMinutes) * MIN);
+    let bulkFrom = mark(bulkUntil - (bulkUntil0 - bulkFrom0));
+    let start = mark(bulkFrom - Math.round(mixMinutes) * MIN);
+    const next = mixTimes[k + 1];
+    const overlap = next ? Math.max(0, bulkFrom - next.start) : 0; // both on marks: a whole number of marks
+    start -= overlap;
+    bulkFrom -= overlap;
+    bulkUntil -= overlap;
+    retardFrom -= overlap;
+    mixTimes[k] = { feed: mark(start - starterPeakMinutes * MIN), roux: mark(start - Math.round(rouxMinutes) * MIN), start, bulkFrom, bulkUntil, retardFrom, roll: rollAtMs[k]!, window: fryWindowOf(mixPlans[k]!.mix) };
+  }
   const mixes: MixSchedule[] = mixPlans.map((m, k) => {
     const t = mixTimes[k]!;
     // Fields copied one by one: spreading each mix into a wider object took V8's slow path, ten times the cost.
@@ -867,7 +896,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
     if (text === undefined) texts.set(key, (text = `${extra} ${lookFor[step]}`));
     return text;
   };
-  const entry = (step: ScheduleStep, fromMs: number, untilMs: number, mix?: number, extra = '') => {
+  const entry = (step: ScheduleStep, startMsRaw: number, untilMs: number, mix?: number, extra = '') => {
+    const fromMs = mark(startMsRaw);
     const minutes = Math.max(0, Math.ceil((untilMs - fromMs) / MIN - 1e-9));
     startMs.push(fromMs);
     const e: TimelineEntry = { step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: textFor(step, extra) };
@@ -889,13 +919,13 @@ export function planBake(input: PlanBakeInput): BakePlan {
     entry('cold-retard', t.retardFrom, t.roll, mixNo);
   });
   if (hasPieces) {
-    entry('heat-oil', abs(line.fryFrom - heatMinutes), abs(line.fryFrom));
+    entry('heat-oil', abs(line.fryFrom) - Math.ceil(heatMinutes - 1e-9) * MIN, abs(line.fryFrom));
     entry('roll-and-cut', abs(lineStartRel), abs(line.sheets.at(-1)!.until));
     entry('final-proof', abs(line.trays.reduce((m, t) => Math.min(m, t.proofFrom), Infinity)), abs(line.trays.reduce((m, t) => Math.max(m, t.fryAt), -Infinity)));
     entry('fry', abs(line.fryFrom), abs(line.fryUntil));
     entry('cool', abs(line.fryUntil), abs(line.fryUntil + durations.cool));
     entry('glaze', abs(line.glazeFrom), abs(line.glazeUntil));
-    entry('pack', abs(line.packFrom), abs(lineEndRel));
+    entry('pack', abs(line.packFrom), lineMs(lineEndRel));
   } else {
     entry('pack', pickupMs, pickupMs);
   }
@@ -916,12 +946,10 @@ export function planBake(input: PlanBakeInput): BakePlan {
   const cutRings = lotCuts.reduce((s, c) => s + c.rolled.rings, 0);
   const cutHoles = lotCuts.reduce((s, c) => s + c.rolled.holes, 0);
   const firstRoll = rollsSum[0];
-  const sheetLengthMm = firstRoll && firstRoll.doughGrams > 0
-    ? (firstRoll.doughGrams * 1000) / (eq.rolling.doughDensityGPerCm3 * eq.rolling.thicknessMm * eq.rolling.widthMm)
-    : 0;
-  const ringsThatFit = sheetLengthMm > 0
-    ? cutsFromSheet({ widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, cutterMm: eq.cutter.outerMm, gapMm: eq.rolling.gapMm })
-    : 0;
+  const sheetLengthMm = firstRoll ? sheetOfDough(firstRoll.doughGrams, eq.rolling, eq.cutter.outerMm).lengthMm : 0;
+  // Each dough's first sheet as rollAndCut laid it out: the same count that bounds its first-roll rings.
+  const ringsThatFit = lotCuts.reduce((s, c) => s + (c.rolled.rolls[0]?.ringsThatFit ?? 0), 0);
+  const firstRollHeldBack = lotCuts.some((c) => c.heldBack);
   const cuts: CutsPlan = {
     rolls: rollsSum,
     rings: cutRings,
@@ -933,8 +961,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
     firstRollSheet: { widthMm: eq.rolling.widthMm, lengthMm: sheetLengthMm, ringsThatFit },
     cutShare,
   };
-  if (firstRoll && ringShareRaw > 0 && firstRoll.rings > ringsThatFit && ringsThatFit > 0) {
-    warn('sheet_fits_fewer', `Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits about ${ringsThatFit} rings, not the ${firstRoll.rings} planned: cut closer together or expect more re-rolled dough.`);
+  if (firstRoll && ringShareRaw > 0 && ringsThatFit > 0 && firstRollHeldBack) {
+    warn('sheet_fits_fewer', `Rolled ${eq.rolling.widthMm} mm wide, the first sheet fits ${ringsThatFit} rings, fewer than the usual cut share would give: the first roll plans those ${ringsThatFit} and the rest come from re-rolled dough. Roll wider or cut closer together to re-roll less.`);
   }
 
   // The fry plan with the staged line's figures.
@@ -1063,7 +1091,7 @@ export function planBake(input: PlanBakeInput): BakePlan {
       glazeFrom: at(line.glazeFrom),
       glazeUntil: at(line.glazeUntil),
       packFrom: at(line.packFrom),
-      packUntil: at(lineEndRel),
+      packUntil: fmt(lineMs(lineEndRel)),
     },
     glaze,
     timeline: sortedTimeline,

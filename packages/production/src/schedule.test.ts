@@ -68,6 +68,60 @@ describe('daylight-saving changes keep real elapsed time (IANA tz database)', ()
   });
 });
 
+/** The local clock's minute of an ISO instant with its offset, "…T01:40:00-06:00" → 40 (and its seconds). */
+const clockMinute = (iso: string) => ({ minute: Number(iso.slice(14, 16)), second: Number(iso.slice(17, 19)) });
+
+describe('steps start on five-minute marks (common practice, no source: bakers plan to round times)', () => {
+  // Durations of our own with odd minutes; the pickup is 09:00 CST on the night America/Chicago repeats
+  // 01:00–02:00 (2026-11-01, IANA tz database: CDT −05:00 until 02:00, then CST −06:00).
+  const odd: StepDurations = { ...durations, pack: 23, 'roll-and-cut': 117, mix: 22 };
+  const chicago = buildSchedule(input({ timeZone: 'America/Chicago', durationsMinutes: odd }));
+
+  it('worked by hand: starts move back to the mark, and a step in the repeated hour keeps its own offset', () => {
+    const startOf = (step: string) => chicago.timeline.find((t) => t.step === step)!.startsAt;
+    expect(startOf('pack')).toBe('2026-11-01T08:35:00-06:00'); // latest start 08:37
+    expect(startOf('final-proof')).toBe('2026-11-01T03:40:00-06:00');
+    // 03:40 CST less 117 min is 01:43 CST, the second 1 am: the mark is 01:40 CST, not 01:40 CDT an hour earlier.
+    expect(startOf('roll-and-cut')).toBe('2026-11-01T01:40:00-06:00');
+    // Cold retard 600 min back from 01:40 CST (07:40 UTC) is 21:40 UTC, 16:40 CDT: 9 h on the wall clock, 10 h elapsed.
+    expect(startOf('cold-retard')).toBe('2026-10-31T16:40:00-05:00');
+    expect(startOf('mix')).toBe('2026-10-31T12:00:00-05:00'); // latest start 12:03
+    expect(chicago.firstStepAt).toBe('2026-10-31T07:45:00-05:00');
+    expect(chicago.preorderCutoffAt).toBe('2026-10-31T06:45:00-05:00');
+    // Without marks the 1567 min would start at 15:00 UTC less 26 h 7 min = 07:53 CDT: the start only moved earlier.
+    const total = Object.values(odd).reduce((a, b) => a + b, 0);
+    expect(total).toBe(1567);
+    expect(ms(chicago.firstStepAt)).toBeLessThanOrEqual(ms('2026-11-01T09:00:00-06:00') - total * 60_000);
+    expect(chicago.timeline.at(-1)!.endsAt).toBe('2026-11-01T09:00:00-06:00');
+  });
+
+  it('every step starts on a mark of the local clock, keeps at least its own minutes and never starts later than it must', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom('America/Chicago', 'Asia/Kathmandu', 'Pacific/Chatham', 'Australia/Lord_Howe', 'Europe/London'),
+        fc.integer({ min: Date.UTC(2026, 0, 1), max: Date.UTC(2027, 0, 1) }),
+        fc.array(fc.integer({ min: 0, max: 900 }), { minLength: SCHEDULE_STEPS.length, maxLength: SCHEDULE_STEPS.length }),
+        (timeZone, pickupMs, minutes) => {
+          const d = Object.fromEntries(SCHEDULE_STEPS.map((step, i) => [step, minutes[i]!])) as StepDurations;
+          const pickup = Math.floor(pickupMs / 60_000) * 60_000;
+          const s = buildSchedule(input({ timeZone, firstPickupStartsAt: new Date(pickup).toISOString(), durationsMinutes: d }));
+          let latestEnd = pickup; // the latest each step may end, worked back without marks
+          for (let i = s.timeline.length - 1; i >= 0; i--) {
+            const step = s.timeline[i]!;
+            expect(clockMinute(step.startsAt).minute % 5).toBe(0);
+            expect(clockMinute(step.startsAt).second).toBe(0);
+            expect(step.minutes).toBeGreaterThanOrEqual(d[step.step]);
+            expect(step.minutes).toBeLessThan(d[step.step] + 5 * (s.timeline.length - i));
+            expect(ms(step.startsAt)).toBeLessThanOrEqual(latestEnd - d[step.step] * 60_000);
+            latestEnd = ms(step.startsAt);
+          }
+          expect(ms(s.preorderCutoffAt)).toBeLessThanOrEqual(pickup - (Object.values(d).reduce((a, b) => a + b, 0) + 60) * 60_000);
+        },
+      ),
+    );
+  });
+});
+
 describe('schedule content', () => {
   it('lists the thirteen steps in order, each with what to look for', () => {
     const s = buildSchedule(input({}));

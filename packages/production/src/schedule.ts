@@ -6,7 +6,7 @@
  */
 import { ProductionInputError, requireFinite, requireNonNegative } from './errors.js';
 import { fermentationMinutes } from './temperature.js';
-import { formatInstant, parseInstant, requireTimeZone } from './time.js';
+import { fiveMinuteMarkAtOrBefore, formatInstant, parseInstant, requireTimeZone } from './time.js';
 import { fToC, tempInBothScales } from './units.js';
 
 export const SCHEDULE_STEPS = [
@@ -95,7 +95,7 @@ export interface TimelineStep {
   title: string;
   startsAt: string;
   endsAt: string;
-  /** Whole minutes (durations are rounded up to the minute). */
+  /** Whole minutes from start to end: the step's own (rounded up), plus up to 4 when its start moves to a mark. */
   minutes: number;
   lookFor: string;
 }
@@ -132,12 +132,13 @@ export function buildSchedule(input: ScheduleInput): Schedule {
   const minutesOf = (step: ScheduleStep) => wholeMinutesUp(step === 'bulk-fermentation' ? bulk : input.durationsMinutes[step]);
   const lookFor = { ...lookForTexts(), ...input.lookFor };
 
-  // Work backwards in absolute time from the pickup start.
+  // Work backwards in absolute time from the pickup start. Each step starts on the five-minute mark at or
+  // before its latest start and runs until the next one starts, so it keeps at least its own minutes.
   let endMs = pickupMs;
   const reversed: TimelineStep[] = [];
   for (const step of [...SCHEDULE_STEPS].reverse()) {
-    const minutes = minutesOf(step);
-    const startMs = endMs - minutes * MINUTE_MS;
+    const startMs = fiveMinuteMarkAtOrBefore(endMs - minutesOf(step) * MINUTE_MS);
+    const minutes = (endMs - startMs) / MINUTE_MS;
     reversed.push({
       step,
       title: STEP_TITLES[step],

@@ -159,3 +159,16 @@ export function readLocalTime(iso: string, timeZone: string): { reading: LocalTi
   if (fits.length > 1) return { reading: 'ambiguous', millis: fits[0]!, alternativeMillis: fits[fits.length - 1]! };
   return { reading: 'exact', millis };
 }
+
+const FIVE_MINUTES_MS = 5 * 60_000;
+
+/**
+ * The last five-minute mark at or before an instant: where a baker starts a
+ * step. Every UTC offset in use today is a whole number of quarter hours
+ * (IANA tz database: +05:45, +12:45, −03:30 and the like), so a mark counted
+ * in UTC is a mark on the local clock too, and the hour that happens twice on
+ * a clocks-back night needs no special case: the instant only moves earlier.
+ */
+export function fiveMinuteMarkAtOrBefore(millis: number): number {
+  return Math.floor(millis / FIVE_MINUTES_MS) * FIVE_MINUTES_MS;
+}

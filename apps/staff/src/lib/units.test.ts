@@ -9,6 +9,7 @@ import {
   tempFromUnit,
   tempToUnit,
   trimmed,
+  unitsInText,
 } from './units';
 import { parseUnits } from './use-units';
 
@@ -87,5 +88,24 @@ describe('the remembered choice of units', () => {
     expect(parseUnits('{"mass":"lb"}')).toEqual({ mass: 'g', temp: 'C' });
     expect(parseUnits('not json')).toEqual({ mass: 'g', temp: 'C' });
     expect(parseUnits(null)).toEqual({ mass: 'g', temp: 'C' });
+  });
+});
+
+describe('sentences from the plan in the chosen units', () => {
+  const rule = 'whole large eggs (about 50 g without the shell), rounded for each mix; or weigh 1,240 g of beaten egg';
+  it('grams become ounces in ounce mode: 50 g = 1.8 oz, 1,240 g = 2 lb 11.7 oz (1 oz = 28.349523125 g, NIST SP 811)', () => {
+    expect(unitsInText(rule, { mass: 'oz', temp: 'C' })).toBe(
+      'whole large eggs (about 1.8 oz without the shell), rounded for each mix; or weigh 2 lb 11.7 oz of beaten egg',
+    );
+    expect(unitsInText(rule, { mass: 'g', temp: 'C' })).toBe(rule);
+  });
+  it('kilograms too, and no grams are left in ounce mode; rates per g stay as written', () => {
+    const text = unitsInText('a 4.5 kg dough and a 4 kg bowl; feed 20 g starter with 100 g flour; dough 1.18 g/cm³', { mass: 'oz', temp: 'C' });
+    expect(text).toBe('a 9 lb 14.7 oz dough and a 8 lb 13.1 oz bowl; feed 0.71 oz starter with 3.5 oz flour; dough 1.18 g/cm³');
+  });
+  it('a temperature written in both scales keeps the chosen one: 65 °C (149 °F), NIST SP 811 App. B', () => {
+    const text = 'Cook to 65 °C (149 °F); within 10 °C (18 °F) of the smoke point.';
+    expect(unitsInText(text, { mass: 'g', temp: 'F' })).toBe('Cook to 149 °F; within 18 °F of the smoke point.');
+    expect(unitsInText(text, { mass: 'g', temp: 'C' })).toBe('Cook to 65 °C; within 10 °C of the smoke point.');
   });
 });

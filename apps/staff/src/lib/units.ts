@@ -90,3 +90,21 @@ export function formatMinutes(minutes: number): string {
 export function formatPercent(percent: number, digits = 1): string {
   return `${trimmed(percent, digits)} %`;
 }
+
+const TEMP_PAIR = /(-?\d+(?:\.\d+)?) °C \((-?\d+(?:\.\d+)?) °F\)/g;
+const MASS_IN_TEXT = /(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?) ?(kg|g)\b(?![/·])/g;
+
+/**
+ * A sentence from the plan (a note, a warning, what to look for) in the
+ * chosen units: every "N g" and "N kg" as `formatMass` writes it, and every
+ * "X °C (Y °F)" pair as the chosen scale alone. The plan writes temperatures
+ * as both scales (differences too, "10 °C (18 °F)"), so no temperature is
+ * converted here, only picked. Rates such as "g/cm³" are left as they are.
+ */
+export function unitsInText(text: string, units: Units): string {
+  const temps = text.replace(TEMP_PAIR, (_, c: string, f: string) => (units.temp === 'C' ? `${c} °C` : `${f} °F`));
+  if (units.mass === 'g') return temps;
+  return temps.replace(MASS_IN_TEXT, (_, figure: string, unit: string) =>
+    formatMass(Number(figure.replace(/,/g, '')) * (unit === 'kg' ? 1000 : 1), units.mass),
+  );
+}

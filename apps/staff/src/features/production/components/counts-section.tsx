@@ -3,7 +3,7 @@ import type { PlanMeta } from '@fryline/schemas';
 import { countRows } from '../model/sheet';
 import { cell, num, SheetSection, TableHead } from './sheet-section';
 
-const rowLabels = { ordered: 'Ordered', spare: 'Spare', toMake: 'To make' } as const;
+const rowLabels = { ordered: 'Ordered', spare: 'Extra for seconds', toMake: 'To make' } as const;
 
 const limitWords: Record<BakePlan['capacity']['limitedBy'], string> = {
   fry: 'the frying time',
@@ -55,6 +55,10 @@ export function CountsSection({ plan, meta }: { plan: BakePlan; meta: PlanMeta }
           })}
         </tbody>
       </table>
+      <p className="sheet-note text-sm text-muted">
+        Extra for seconds replaces misshapen, dropped or over-fried pieces; the surplus for walk-ups (under
+        Cutting) is what the dough gives beyond that.
+      </p>
       <p className="text-sm text-muted" data-print="hide">
         The equipment makes about {plan.capacity.pieces} rings a bake day (limited by{' '}
         {limitWords[plan.capacity.limitedBy]}); this bake day takes orders for up to {meta.bakeDay.capacity.rings} rings

@@ -30,11 +30,15 @@ export function CutsSection({ cuts, units }: { cuts: CutsPlan; units: Units }) {
         facts={[
           { label: 'Rings cut', value: cuts.rings },
           { label: 'Holes', value: cuts.holes, note: `${cuts.holes - cuts.extraHoles} ring centres, ${cuts.extraHoles} cut extra` },
-          { label: 'Surplus', value: formatPieces(cuts.surplus.rings, cuts.surplus.holes), hint: 'for walk-ups' },
+          {
+            label: 'Surplus for walk-ups',
+            value: formatPieces(cuts.surplus.rings, cuts.surplus.holes),
+            note: 'cut beyond the pieces to make',
+          },
           sheet.lengthMm > 0 && {
             label: 'First roll',
             value: `${Math.round(sheet.widthMm)} × ${Math.round(sheet.lengthMm)} mm`,
-            note: `about ${sheet.ringsThatFit} rings fit`,
+            note: `${sheet.ringsThatFit} rings fit on it`,
           },
         ]}
       />

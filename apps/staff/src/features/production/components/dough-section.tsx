@@ -1,5 +1,5 @@
 import type { BakePlan } from '@fryline/production';
-import { formatMass, formatPercent, formatTemp, type Units } from '../../../lib/units';
+import { formatMass, formatPercent, formatTemp, unitsInText, type Units } from '../../../lib/units';
 import { mixerLines } from '../model/sheet';
 import { cell, Facts, num, SheetSection, TableHead } from './sheet-section';
 
@@ -72,7 +72,7 @@ export function DoughSection({ plan, units }: { plan: BakePlan; units: Units }) 
       </table>
       {eggs && (
         <p className="text-sm text-muted">
-          Eggs: {eggs.count} whole, rounded to the {eggs.rule}. Whole eggs {eggs.massChangeGrams >= 0 ? 'add' : 'take off'}{' '}
+          Eggs: {eggs.count} whole, rounded to the {unitsInText(eggs.rule, units)}. Whole eggs {eggs.massChangeGrams >= 0 ? 'add' : 'take off'}{' '}
           {mass(Math.abs(eggs.massChangeGrams))}.
         </p>
       )}

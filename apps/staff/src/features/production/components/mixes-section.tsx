@@ -11,7 +11,8 @@ export function MixesSection({
   const mass = (grams: number) => formatMass(grams, units.mass);
   const doughName = new Map(variations.map((v) => [v.id, v.name]));
   return (
-    <SheetSection id="mixes" title={mixes.length === 1 ? 'The mix' : `Mixes (${mixes.length})`} wide>
+    // One mix repeats on paper what Dough and Schedule print (its grams, eggs, starter and times): screen only then.
+    <SheetSection id="mixes" title={mixes.length === 1 ? 'The mix' : `Mixes (${mixes.length})`} wide screenOnly={mixes.length === 1}>
       <table className="w-full">
         <caption className="sr-only">Mixes, one after another</caption>
         <TableHead columns={['Mix', num('Dough'), num('Eggs'), num('Starter'), 'Mix at', 'Bulk until', 'Roll at', 'Fries']} />

@@ -7,6 +7,7 @@ import { errorMessage } from '@fryline/ui/api-client';
 import { formatClock, formatDate } from '@fryline/ui/format';
 import { UnitSwitch } from '../../../lib/unit-switch';
 import { useUnits } from '../../../lib/use-units';
+import { unitsInText } from '../../../lib/units';
 import { useCan } from '../../../app/session/staff-member';
 import type { PlanResponse } from '@fryline/schemas';
 import { productionQueries } from '../../../lib/queries/production-queries';
@@ -85,7 +86,7 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
   const isOwner = useCan('owner');
   const { plan, meta } = data;
   const zone = meta.bakeDay.timeZone;
-  const warnings = warningMessages(plan, meta);
+  const warnings = warningMessages(plan, meta).map((warning) => unitsInText(warning, units));
 
   return (
     <div className="production-sheet flex flex-col gap-4">
@@ -109,18 +110,23 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
       </div>
       <div className="sheet-grid grid gap-4 lg:grid-cols-2">
         <SheetWarnings warnings={warnings} />
-        <CountsSection plan={plan} meta={meta} />
-        <DoughSection plan={plan} units={units} />
+        {/* On screen the two groups melt into the grid; on paper they are the page's two columns. */}
+        <div className="sheet-column">
+          <CountsSection plan={plan} meta={meta} />
+          <DoughSection plan={plan} units={units} />
+          {plan.roux && <RouxSection roux={plan.roux} units={units} />}
+          {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
+        </div>
+        <div className="sheet-column">
+          <CutsSection cuts={plan.cuts} units={units} />
+          <FrySection fry={plan.fry} units={units} />
+          <LineSection plan={plan} timeZone={zone} units={units} />
+          <GlazeSection glazes={plan.glaze} units={units} />
+        </div>
         <MixesSection mixes={plan.mixes} variations={plan.variations} timeZone={zone} units={units} />
-        {plan.roux && <RouxSection roux={plan.roux} units={units} />}
-        {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
-        <CutsSection cuts={plan.cuts} units={units} />
-        <FrySection fry={plan.fry} units={units} />
-        <LineSection plan={plan} timeZone={zone} units={units} />
-        <GlazeSection glazes={plan.glaze} units={units} />
         {isOwner && <CostSection cost={plan.cost} />}
-        <ScheduleSection timeline={plan.timeline} timeZone={zone} />
-        <SheetCautions cautions={plan.cautions} />
+        <ScheduleSection timeline={plan.timeline} timeZone={zone} units={units} />
+        <SheetCautions cautions={plan.cautions.map((caution) => unitsInText(caution, units))} />
       </div>
     </div>
   );
