@@ -23,7 +23,7 @@ import {
 import { buildFryer, heatUpMinutes, oilWarnings, type Burner, type Fryer, type FryPlan, type FryTimetableEntry, type PotMaterial } from './fry.js';
 import { glazeAmounts, type GlazeAmount, type GlazeNeed, type GlazeRecipe } from './glaze.js';
 import { stageLine, type LineSheetInput, type StagedLine } from './line.js';
-import { ADD_IN_STEP_WORDS, planMixes, validateVariations, type DoughShare, type DoughVariation, type MixPlan } from './mixes.js';
+import { ADD_IN_STEP_WORDS, addInRatio, planMixes, validateVariations, type DoughShare, type DoughVariation, type MixPlan } from './mixes.js';
 import { effectivePieceMass } from './pieces.js';
 import { FRIDGE_MAX_C, lookForTexts, STEP_TITLES, YEAST_NO_GROWTH_C, YEAST_OPTIMUM_C, type ScheduleStep, type StepDurations } from './schedule.js';
 import {
@@ -1015,6 +1015,19 @@ export function planBake(input: PlanBakeInput): BakePlan {
     glazes: input.glazes,
     prices: input.prices,
     boxes: input.boxes ?? [],
+    // Each flavour's own dough per kilogram of base (add-ins on top), or per kilogram of its own formula.
+    doughs: [...variations.values()].map((v) => {
+      const listMissing = lots.has(keyOf(v.id));
+      return v.formula
+        ? { dough: v.id, name: v.name, ingredients: scaleFormula(v.formula, 1000).ingredients, doughGrams: 1000, listMissing }
+        : {
+            dough: v.id,
+            name: v.name,
+            ingredients: [...perKilo.ingredients, ...(v.addIns ?? []).map((a) => ({ name: a.name, grams: a.gramsPerKg, portion: false }))],
+            doughGrams: 1000 * (1 + addInRatio(v.addIns ?? [])),
+            listMissing,
+          };
+    }),
   });
 
   // Cautions and the remaining warnings.
