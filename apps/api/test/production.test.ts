@@ -134,6 +134,32 @@ describe('equipment and capacity', () => {
     expect((await owner.getJson('/api/production/settings')).body.dough.variations).toHaveLength(1);
   });
 
+  it('saves a flavour\'s dough of its own formula version, and refuses one that cannot be mixed, changing nothing', async () => {
+    const { updatedAt: _u, ...body } = (await owner.getJson('/api/production/settings')).body;
+    const own = structuredClone((await owner.getJson('/api/production/formulas')).body.current.formula);
+    own.ingredients.find((i: any) => i.kind === 'sugar').percent += 4;
+    const changed = structuredClone(body);
+    changed.dough.variations = [{ id: 'honey-dough', name: 'Honey dough', flavours: ['Honey'], formula: own }];
+    const saved = await owner.send('PUT', '/api/production/settings', changed);
+    expect(saved.status).toBe(200);
+    expect((await owner.getJson('/api/production/settings')).body.dough.variations).toEqual(changed.dough.variations);
+
+    // Flour lines at 90 %: the contract's own check names the field.
+    const flour = structuredClone(changed);
+    flour.dough.variations[0].formula.ingredients.find((i: any) => i.kind === 'flour').percent = 90;
+    const refusedFlour = await owner.send('PUT', '/api/production/settings', flour);
+    expect(refusedFlour.status).toBe(400);
+    expect(Object.keys(refusedFlour.body.error.details.fields)).toContain('dough.variations.0.formula.ingredients');
+    // A roux-milk line with no roux flour passes the contract; the bake maths refuses it, naming the dough.
+    const roux = structuredClone(changed);
+    roux.dough.variations[0].formula.ingredients = roux.dough.variations[0].formula.ingredients.filter((i: any) => i.kind !== 'roux-flour');
+    if (!roux.dough.variations[0].formula.ingredients.some((i: any) => i.kind === 'roux-milk')) roux.dough.variations[0].formula.ingredients.push({ name: 'Roux milk', percent: 10, kind: 'roux-milk' });
+    const refusedRoux = await owner.send('PUT', '/api/production/settings', roux);
+    expect(refusedRoux.status).toBe(400);
+    expect(Object.keys(refusedRoux.body.error.details.fields)[0]).toMatch(/^doughs\[0\]\.formula\./);
+    expect((await owner.getJson('/api/production/settings')).body.dough.variations).toEqual(changed.dough.variations);
+  });
+
   it('lets only the owner change equipment; bad settings get 400 and change nothing', async () => {
     const settings = (await owner.getJson('/api/production/settings')).body;
     const { updatedAt: _u, ...body } = settings;
