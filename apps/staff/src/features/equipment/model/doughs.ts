@@ -5,8 +5,11 @@
  * menu flavours; the other way's details are dropped, since the settings
  * take one or the other, never both.
  */
+import type { Path } from 'react-hook-form';
 import type { FormulaInput, ProductionSettingsInput } from '@fryline/schemas';
-import type { SettingsPath } from './settings-fields';
+
+/** A field of the settings form (the same type settings-fields names SettingsPath; written out to keep imports one-way). */
+type SettingsPath = Path<ProductionSettingsInput>;
 
 export type DoughVariationValues = NonNullable<ProductionSettingsInput['dough']>['variations'][number];
 export type DoughFormulaValues = NonNullable<DoughVariationValues['formula']>;
