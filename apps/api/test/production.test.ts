@@ -2,6 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { BakeDay } from '../src/db/models/index.js';
 import { Browser, signIn, useStack } from './support.js';
 import { halfDozen, mixedDozen, openDay, orderAndPay } from './order-helpers.js';
+import { planForBakeDay } from '../src/services/production/production.js';
 
 const stack = useStack();
 let baker: Browser;
@@ -44,6 +45,32 @@ describe('the production sheet route', () => {
     const timeline = res.body.plan.timeline as Array<{ startsAt: string; endsAt: string }>;
     expect(new Date(timeline.at(-1)!.endsAt).getTime()).toBeLessThanOrEqual(new Date(day.pickupWindows[0]!.startsAt).getTime());
     expect(res.body.plan.cautions.join(' ')).toMatch(/water/i);
+  });
+
+  it('reuses a plan while nothing it was worked out from changes, and works it out again when an order comes or the clock passes the cut-off', async () => {
+    const day = await openDay(stack);
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'customer@fryline.test');
+    await orderAndPay(stack, customer, mixedDozen(day));
+    const first = await baker.getJson(`/api/bake-days/${day.id}/plan`);
+    const again = await baker.fetch(`/api/bake-days/${day.id}/plan`);
+    expect(again.headers.get('content-type')).toBe('application/json; charset=utf-8');
+    expect(again.headers.get('cache-control')).toBe('no-store');
+    expect(((await again.json()) as typeof first.body).plan).toEqual(first.body.plan);
+    const now = new Date();
+    const a = await planForBakeDay(day.id, now);
+    expect((await planForBakeDay(day.id, new Date(now.getTime() + 1000))).plan).toBe(a.plan);
+    const codes = (p: { warnings: Array<{ code: string }> }) => p.warnings.map((w) => w.code);
+    expect(codes(a.plan)).not.toContain('cutoff_passed');
+    const afterCutoff = (await planForBakeDay(day.id, new Date(Date.parse(a.plan.preorderCutoffAt) + 60_000))).plan;
+    expect(codes(afterCutoff)).toContain('cutoff_passed');
+    const tooLate = (await planForBakeDay(day.id, new Date(Date.parse(a.plan.firstStepAt) + 60_000))).plan;
+    expect(codes(tooLate)).toContain('schedule_cannot_be_met');
+    expect((await planForBakeDay(day.id, new Date(now.getTime() + 2000))).plan.warnings).toEqual(a.plan.warnings);
+    const other = new Browser(stack.url);
+    await signIn(other, 'second.customer@example.test');
+    await other.send('POST', '/api/orders', halfDozen(day));
+    expect((await planForBakeDay(day.id, now)).plan.pieces.rings.ordered).toBe(a.plan.pieces.rings.ordered + 6);
   });
 
   it('returns the dough temperature, the mixes, the fry timetable, the fat taken up and the warnings as data', async () => {
@@ -132,6 +159,32 @@ describe('equipment and capacity', () => {
     const refused = await owner.send('PUT', '/api/production/settings', clash);
     expect(refused.status).toBe(400);
     expect((await owner.getJson('/api/production/settings')).body.dough.variations).toHaveLength(1);
+  });
+
+  it('saves a flavour\'s dough of its own formula version, and refuses one that cannot be mixed, changing nothing', async () => {
+    const { updatedAt: _u, ...body } = (await owner.getJson('/api/production/settings')).body;
+    const own = structuredClone((await owner.getJson('/api/production/formulas')).body.current.formula);
+    own.ingredients.find((i: any) => i.kind === 'sugar').percent += 4;
+    const changed = structuredClone(body);
+    changed.dough.variations = [{ id: 'honey-dough', name: 'Honey dough', flavours: ['Honey'], formula: own }];
+    const saved = await owner.send('PUT', '/api/production/settings', changed);
+    expect(saved.status).toBe(200);
+    expect((await owner.getJson('/api/production/settings')).body.dough.variations).toEqual(changed.dough.variations);
+
+    // Flour lines at 90 %: the contract's own check names the field.
+    const flour = structuredClone(changed);
+    flour.dough.variations[0].formula.ingredients.find((i: any) => i.kind === 'flour').percent = 90;
+    const refusedFlour = await owner.send('PUT', '/api/production/settings', flour);
+    expect(refusedFlour.status).toBe(400);
+    expect(Object.keys(refusedFlour.body.error.details.fields)).toContain('dough.variations.0.formula.ingredients');
+    // A roux-milk line with no roux flour passes the contract; the bake maths refuses it, naming the dough.
+    const roux = structuredClone(changed);
+    roux.dough.variations[0].formula.ingredients = roux.dough.variations[0].formula.ingredients.filter((i: any) => i.kind !== 'roux-flour');
+    if (!roux.dough.variations[0].formula.ingredients.some((i: any) => i.kind === 'roux-milk')) roux.dough.variations[0].formula.ingredients.push({ name: 'Roux milk', percent: 10, kind: 'roux-milk' });
+    const refusedRoux = await owner.send('PUT', '/api/production/settings', roux);
+    expect(refusedRoux.status).toBe(400);
+    expect(Object.keys(refusedRoux.body.error.details.fields)[0]).toMatch(/^doughs\[0\]\.formula\./);
+    expect((await owner.getJson('/api/production/settings')).body.dough.variations).toEqual(changed.dough.variations);
   });
 
   it('lets only the owner change equipment; bad settings get 400 and change nothing', async () => {

@@ -42,4 +42,26 @@ describe('cost per piece and per box (worked by hand; rounding stated in the cod
     const c = costBake({ ...base, prices: { ...base.prices, centsPerKg: { Flour: 200 } } });
     expect(c.missingPrices).toEqual(['Sugar', 'Water']);
   });
+
+  it('counts a flavour\'s add-ins in the cost of its pieces', () => {
+    // Worked by hand. Base: 1000 g flour + 600 g water; 1000 g flour at 200 ¢/kg = 200 ¢ for 1600 g → 0.125 ¢/g.
+    // Lemon dough: per 1000 g of base, 40 g zest at 2500 ¢/kg = 100 ¢. 1040 g of lemon dough cost
+    // 125 + 100 = 225 ¢ → 0.216346… ¢/g. Ring 50 g → 10.817 ¢ → 11 ¢ (plain base ring 6.25 → 6 ¢);
+    // hole 10 g → 2.163 ¢ → 2 ¢; sugar-glazed ring adds 10 g × 0.3 ¢/g = 3 ¢ → 13.817 → 14 ¢.
+    const lemon = [...scaleFormula({ ingredients: [{ name: 'Flour', percent: 100, kind: 'flour' }, { name: 'Water', percent: 60, kind: 'water' }] }, 1000).ingredients, { name: 'Lemon zest', grams: 40, portion: false }];
+    const c = costBake({ ...base, prices: { ...base.prices, centsPerKg: { ...base.prices.centsPerKg, 'Lemon zest': 2500 } }, doughs: [{ dough: 'lemon', name: 'Lemon dough', ingredients: lemon, doughGrams: 1040 }] });
+    expect(c.perPiece[0]).toEqual({ glazeId: null, ringCents: 6, holeCents: 1 });
+    expect(c.perDough).toEqual([{
+      dough: 'lemon',
+      name: 'Lemon dough',
+      perPiece: [{ glazeId: null, ringCents: 11, holeCents: 2 }, { glazeId: 'sugar', ringCents: 14, holeCents: 3 }],
+      missingPrices: [],
+    }]);
+    // An add-in without a price is listed, like any ingredient.
+    expect(costBake({ ...base, doughs: [{ dough: 'lemon', name: 'Lemon dough', ingredients: lemon, doughGrams: 1040 }] }).missingPrices).toEqual(['Lemon zest']);
+    // A dough not made tonight keeps its list to itself.
+    const notTonight = costBake({ ...base, doughs: [{ dough: 'lemon', name: 'Lemon dough', ingredients: lemon, doughGrams: 1040, listMissing: false }] });
+    expect(notTonight.missingPrices).toEqual([]);
+    expect(notTonight.perDough[0]!.missingPrices).toEqual(['Lemon zest']);
+  });
 });

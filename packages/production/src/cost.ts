@@ -51,12 +51,34 @@ export interface CostInput {
   glazes: GlazeRecipe[];
   prices: Prices;
   boxes: BoxOffer[];
+  /**
+   * Flavoured doughs, each as the lines of some amount of it (`doughGrams`):
+   * the base dough's lines with its add-ins, or its own formula's. A piece of
+   * that flavour costs its own dough; fat, oil and glaze are as for any piece.
+   */
+  doughs?: Array<{
+    dough: string;
+    name: string;
+    ingredients: Array<Pick<ScaledIngredient, 'name' | 'grams' | 'portion'>>;
+    doughGrams: number;
+    /** Default true: its unpriced lines join `missingPrices` (false for a dough not made tonight; its own list still says). */
+    listMissing?: boolean;
+  }>;
 }
 
 export interface PieceCost {
   glazeId: string | null;
   ringCents: number;
   holeCents: number;
+}
+
+/** A flavoured dough's pieces: plain first (glazeId null), then one entry per glaze, as `perPiece`. */
+export interface DoughPieceCost {
+  dough: string;
+  name: string;
+  perPiece: PieceCost[];
+  /** Its lines without a price (counted as free). */
+  missingPrices: string[];
 }
 
 export interface BoxCost {
@@ -73,6 +95,8 @@ export interface CostPlan {
   doughCents: number;
   /** Plain pieces first (glazeId null), then one entry per glaze. */
   perPiece: PieceCost[];
+  /** The same for each flavoured dough (base dough with add-ins, or its own formula). */
+  perDough: DoughPieceCost[];
   boxes: BoxCost[];
   /** Ingredient names without a price; counted as free. */
   missingPrices: string[];
@@ -82,10 +106,10 @@ export interface CostPlan {
 export const COST_ROUNDING = 'Each figure is rounded once to the nearest cent (halves up) after unrounded sums.';
 
 function priceLookup(prices: Prices, missing: Set<string>) {
-  return (name: string): number => {
+  return (name: string, missingHere: Set<string> = missing): number => {
     const price = prices.centsPerKg[name];
     if (price === undefined) {
-      missing.add(name);
+      missingHere.add(name);
       return 0;
     }
     return requireWholeNonNegative(`prices.centsPerKg["${name}"]`, price) / 1000; // cents per gram
@@ -102,14 +126,17 @@ export function costBake(input: CostInput): CostPlan {
   const missing = new Set<string>();
   const price = priceLookup(input.prices, missing);
 
-  const doughCents = input.ingredients.filter((i) => !i.portion).reduce((s, i) => s + i.grams * price(i.name), 0);
+  const centsOf = (lines: Array<Pick<ScaledIngredient, 'name' | 'grams' | 'portion'>>, missingHere = missing) =>
+    lines.filter((i) => !i.portion).reduce((s, i) => s + i.grams * price(i.name, missingHere), 0);
+  const doughCents = centsOf(input.ingredients);
   const doughPerGram = input.doughGrams > 0 ? doughCents / input.doughGrams : 0;
   const fillPerFriedGram = input.friedGrams > 0 ? (input.oilFillGrams * oilPerGram) / bakesPerFill / input.friedGrams : 0;
-  const pieceCents = (grams: number) =>
-    (grams / cutYield) * doughPerGram
+  const pieceCents = (grams: number, perGramOfDough: number) =>
+    (grams / cutYield) * perGramOfDough
     + (input.fatAbsorbedGramsPerRing * grams / input.ringGrams) * oilPerGram
     + grams * fillPerFriedGram;
-  const plain = { ring: pieceCents(input.ringGrams), hole: pieceCents(input.holeGrams) };
+  const plainOf = (perGramOfDough: number) => ({ ring: pieceCents(input.ringGrams, perGramOfDough), hole: pieceCents(input.holeGrams, perGramOfDough) });
+  const plain = plainOf(doughPerGram);
 
   const glazeCost = new Map<string, { ring: number; hole: number }>();
   input.glazes.forEach((g) => {
@@ -118,16 +145,24 @@ export function costBake(input: CostInput): CostPlan {
     const factor = 1 + (g.extraPercent ?? 0) / 100;
     glazeCost.set(g.id, { ring: g.gramsPerRing * factor * perGram, hole: g.gramsPerHole * factor * perGram });
   });
-  const unrounded = (glazeId: string | null, field: string) => {
-    if (glazeId === null) return plain;
+  const glazedOf = (base: { ring: number; hole: number }) => (glazeId: string | null, field: string) => {
+    if (glazeId === null) return base;
     const glaze = glazeCost.get(glazeId);
     if (!glaze) throw new ProductionInputError(field, `unknown glaze "${glazeId}"`);
-    return { ring: plain.ring + glaze.ring, hole: plain.hole + glaze.hole };
+    return { ring: base.ring + glaze.ring, hole: base.hole + glaze.hole };
   };
-
-  const perPiece: PieceCost[] = [null, ...input.glazes.map((g) => g.id)].map((glazeId) => {
-    const c = unrounded(glazeId, 'glazes');
+  const unrounded = glazedOf(plain);
+  const perPieceOf = (costOf: typeof unrounded): PieceCost[] => [null, ...input.glazes.map((g) => g.id)].map((glazeId) => {
+    const c = costOf(glazeId, 'glazes');
     return { glazeId, ringCents: roundHalfUp(c.ring), holeCents: roundHalfUp(c.hole) };
+  });
+  const perPiece = perPieceOf(unrounded);
+  const perDough: DoughPieceCost[] = (input.doughs ?? []).map((d, i) => {
+    const grams = requirePositive(`doughs[${i}].doughGrams`, d.doughGrams);
+    const missingHere = new Set<string>();
+    const perPieceHere = perPieceOf(glazedOf(plainOf(centsOf(d.ingredients, missingHere) / grams)));
+    if (d.listMissing !== false) missingHere.forEach((name) => missing.add(name));
+    return { dough: d.dough, name: d.name, perPiece: perPieceHere, missingPrices: [...missingHere].sort() };
   });
   const boxes = input.boxes.map((box, i): BoxCost => {
     const field = `boxes[${i}]`;
@@ -141,5 +176,5 @@ export function costBake(input: CostInput): CostPlan {
     return { id: box.id, name: box.name, priceCents, costCents, marginCents, marginPercent: priceCents > 0 ? (marginCents / priceCents) * 100 : null };
   });
   const mixed = input.mixedDoughGrams !== undefined ? requireNonNegative('mixedDoughGrams', input.mixedDoughGrams) : input.doughGrams;
-  return { doughCents: roundHalfUp(doughPerGram * mixed), perPiece, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
+  return { doughCents: roundHalfUp(doughPerGram * mixed), perPiece, perDough, boxes, missingPrices: [...missing].sort(), rounding: COST_ROUNDING };
 }

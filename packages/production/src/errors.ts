@@ -5,11 +5,14 @@
  */
 export class ProductionInputError extends Error {
   readonly field: string;
+  /** The message without the field's name in front. */
+  readonly reason: string;
 
   constructor(field: string, message: string) {
     super(`${field}: ${message}`);
     this.name = 'ProductionInputError';
     this.field = field;
+    this.reason = message;
   }
 }
 

@@ -254,7 +254,10 @@ export function stageLine(sheetsIn: LineSheetInput[], settings: LineSettings, fr
   const packUntil = packFrom + (settings.boxes * settings.packSecondsPerBox) / 60;
 
   // Most trays proofing at the same time (a check on the slot rule above).
-  const starts = Float64Array.from(trays, (t) => t.proofFrom).sort();
+  // Filled in a loop: Float64Array.from with a map function goes through the iterator protocol, element by element.
+  const starts = new Float64Array(trays.length);
+  for (let j = 0; j < trays.length; j++) starts[j] = trays[j]!.proofFrom;
+  starts.sort();
   const ends = emptiedAt.slice().sort();
   let traysInUse = 0;
   for (let i = 0, e = 0; i < starts.length; i++) {

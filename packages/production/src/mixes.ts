@@ -84,6 +84,15 @@ export function validateVariations(list: DoughVariation[] | undefined): Map<stri
       if (typeof a.name !== 'string' || a.name.trim() === '') throw new ProductionInputError(`${field}.addIns[${j}].name`, 'is required');
       requireNonNegative(`${field}.addIns[${j}].gramsPerKg`, a.gramsPerKg);
     });
+    if (v.formula) {
+      // Checked here, ordered or not, so a formula that cannot be mixed is refused when it is saved.
+      try {
+        scaleFormula(v.formula, 1000);
+      } catch (err) {
+        if (err instanceof ProductionInputError) throw new ProductionInputError(`${field}.${err.field}`, err.reason);
+        throw err;
+      }
+    }
     byId.set(v.id, v);
   });
   return byId;

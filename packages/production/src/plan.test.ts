@@ -529,6 +529,29 @@ describe('dough variations', () => {
     expect(glazedBy('lemon-zest', 'cinnamon-sugar')).toBe(0);
     for (const b of v.fry.timetable) expect(v.line.trays[b.tray - 1]!.dough).toBe(b.dough);
   });
+
+  it('costs each flavour\'s pieces with its own dough, whatever is ordered (worked example in cost.test.ts)', () => {
+    const priced = (orders: OrderLine[], zestCentsPerKg: number) => {
+      const input = baseInput(orders);
+      return planBake({ ...input, prices: { ...input.prices, centsPerKg: { ...input.prices.centsPerKg, 'Lemon zest': zestCentsPerKg, 'Browned butter': 1100, 'Roux flour': 190 } } });
+    };
+    const cheap = priced(FLAVOURS, 0).cost.perDough.find((d) => d.dough === 'lemon-zest')!;
+    const dear = priced(FLAVOURS, 40_000).cost.perDough.find((d) => d.dough === 'lemon-zest')!;
+    // 10 g of zest per kg at $400/kg is 4 ¢ per kg of base dough: a ring of about 55 g dough gets dearer.
+    expect(dear.perPiece[0]!.ringCents).toBeGreaterThan(cheap.perPiece[0]!.ringCents);
+    expect(priced([], 40_000).cost.perDough).toEqual(priced(FLAVOURS, 40_000).cost.perDough);
+    // The brown-butter dough costs as its own formula would as the base dough.
+    const brown = DEFAULT_PLAN_SETTINGS.doughs!.find((d) => d.id === 'brown-butter')!;
+    const none = priced([], 0);
+    const asBase = planBake({ ...baseInput([]), formula: brown.formula!, prices: { ...baseInput([]).prices, centsPerKg: { ...baseInput([]).prices.centsPerKg, 'Browned butter': 1100, 'Roux flour': 190 } } });
+    expect(none.cost.perDough.find((d) => d.dough === 'brown-butter')!.perPiece).toEqual(asBase.cost.perPiece);
+  });
+
+  it('refuses a flavour\'s own formula that cannot be mixed, ordered or not, naming the dough', () => {
+    const input = baseInput([]);
+    const bad = { id: 'bad', name: 'Bad dough', formula: { ingredients: [{ name: 'Bread flour', percent: 90, kind: 'flour' as const }, { name: 'Water', percent: 60, kind: 'water' as const }] } };
+    expect(() => planBake({ ...input, doughs: [...input.doughs!, bad] })).toThrow(/doughs\[2\]\.formula\.ingredients: the flour lines must add up to 100 %/);
+  });
 });
 
 describe('the liquid temperature warning', () => {

@@ -23,7 +23,7 @@ import {
 import { buildFryer, heatUpMinutes, oilWarnings, type Burner, type Fryer, type FryPlan, type FryTimetableEntry, type PotMaterial } from './fry.js';
 import { glazeAmounts, type GlazeAmount, type GlazeNeed, type GlazeRecipe } from './glaze.js';
 import { stageLine, type LineSheetInput, type StagedLine } from './line.js';
-import { ADD_IN_STEP_WORDS, planMixes, validateVariations, type DoughShare, type DoughVariation, type MixPlan } from './mixes.js';
+import { ADD_IN_STEP_WORDS, addInRatio, planMixes, validateVariations, type DoughShare, type DoughVariation, type MixPlan } from './mixes.js';
 import { effectivePieceMass } from './pieces.js';
 import { FRIDGE_MAX_C, lookForTexts, STEP_TITLES, YEAST_NO_GROWTH_C, YEAST_OPTIMUM_C, type ScheduleStep, type StepDurations } from './schedule.js';
 import {
@@ -353,6 +353,11 @@ export interface BakePlan {
   warnings: PlanWarning[];
 }
 
+// Order lines often arrive with a shape of their own each (built by spreading a menu item, say): plain
+// property reads then miss V8's inline caches on every line, and a missing `dough` is the slowest read of
+// all. Reflect.get looks each field up directly, several times faster on such lines; each field is read once.
+const field = Reflect.get as (o: object, key: string) => unknown;
+
 function summariseOrders(orders: OrderLine[]): OrderLine[] {
   if (!Array.isArray(orders)) throw new ProductionInputError('orders', 'must be a list');
   const byId = new Map<string, OrderLine>();
@@ -360,18 +365,22 @@ function summariseOrders(orders: OrderLine[]): OrderLine[] {
     const o = orders[i]!;
     // Field names are built only on failure: this loop runs once per order line.
     if (!o || typeof o !== 'object') throw new ProductionInputError(`orders[${i}]`, 'must be an order line');
-    if (typeof o.menuItemId !== 'string' || o.menuItemId === '') throw new ProductionInputError(`orders[${i}].menuItemId`, 'is required');
-    if (o.kind !== 'ring' && o.kind !== 'hole') throw new ProductionInputError(`orders[${i}].kind`, 'must be ring or hole');
-    if (o.glaze !== null && typeof o.glaze !== 'string') throw new ProductionInputError(`orders[${i}].glaze`, 'must be a glaze id or null');
-    if (!Number.isInteger(o.quantity) || o.quantity < 0) requireWholeNonNegative(`orders[${i}].quantity`, o.quantity);
-    const dough = o.dough ?? null;
-    const seen = byId.get(o.menuItemId);
+    const menuItemId = field(o, 'menuItemId') as OrderLine['menuItemId'];
+    const kind = field(o, 'kind') as OrderLine['kind'];
+    const glaze = field(o, 'glaze') as OrderLine['glaze'];
+    const quantity = field(o, 'quantity') as OrderLine['quantity'];
+    const dough = (field(o, 'dough') as OrderLine['dough']) ?? null;
+    if (typeof menuItemId !== 'string' || menuItemId === '') throw new ProductionInputError(`orders[${i}].menuItemId`, 'is required');
+    if (kind !== 'ring' && kind !== 'hole') throw new ProductionInputError(`orders[${i}].kind`, 'must be ring or hole');
+    if (glaze !== null && typeof glaze !== 'string') throw new ProductionInputError(`orders[${i}].glaze`, 'must be a glaze id or null');
+    if (!Number.isInteger(quantity) || quantity < 0) requireWholeNonNegative(`orders[${i}].quantity`, quantity);
+    const seen = byId.get(menuItemId);
     if (!seen) {
-      byId.set(o.menuItemId, { menuItemId: o.menuItemId, name: o.name, kind: o.kind, glaze: o.glaze, quantity: o.quantity, dough });
-    } else if (seen.kind !== o.kind || seen.glaze !== o.glaze || (seen.dough ?? null) !== dough) {
-      throw new ProductionInputError(`orders[${i}]`, `menu item ${o.menuItemId} appears with a different kind, glaze or dough`);
+      byId.set(menuItemId, { menuItemId, name: field(o, 'name') as OrderLine['name'], kind, glaze, quantity, dough });
+    } else if (seen.kind !== kind || seen.glaze !== glaze || seen.dough !== dough) {
+      throw new ProductionInputError(`orders[${i}]`, `menu item ${menuItemId} appears with a different kind, glaze or dough`);
     } else {
-      seen.quantity += o.quantity;
+      seen.quantity += quantity;
     }
   }
   return [...byId.values()];
@@ -420,6 +429,12 @@ export const DEFAULT_BENCH_LENGTH_MM = 600;
 export const EGG_SHIFT_WARN_PERCENT = 2;
 /** Hottest liquid the sheet asks for without a warning. */
 export const LIQUID_MAX_C = 45;
+
+/** Order of the steps that start at the same minute. */
+const STEP_ORDER: Record<ScheduleStep, number> = {
+  'build-starter': 0, 'cook-cool-roux': 1, mix: 2, 'bulk-fermentation': 3, 'shape-and-chill': 4, 'cold-retard': 5,
+  'heat-oil': 6, 'roll-and-cut': 7, 'final-proof': 8, fry: 9, cool: 10, glaze: 11, pack: 12,
+};
 
 interface Lot {
   dough: string | null;
@@ -888,6 +903,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   lookFor.glaze = `Each batch once cooled, while the next ones fry. ${lookFor.glaze}`;
   const timeline: TimelineEntry[] = [];
   const startMs: number[] = [];
+  // Sort keys kept beside the entries, so the sort compares plain numbers (no map lookup, no optional field).
+  const mixKey: number[] = [];
+  const stepKey: number[] = [];
   const texts = new Map<string, string>();
   const textFor = (step: ScheduleStep, extra: string) => {
     if (!extra) return lookFor[step];
@@ -900,6 +918,8 @@ export function planBake(input: PlanBakeInput): BakePlan {
     const fromMs = mark(startMsRaw);
     const minutes = Math.max(0, Math.ceil((untilMs - fromMs) / MIN - 1e-9));
     startMs.push(fromMs);
+    mixKey.push(mix ?? 0);
+    stepKey.push(STEP_ORDER[step]);
     const e: TimelineEntry = { step, title: STEP_TITLES[step], startsAt: fmt(fromMs), endsAt: fmt(untilMs), minutes, lookFor: textFor(step, extra) };
     if (mix !== undefined) e.mix = mix;
     timeline.push(e);
@@ -929,8 +949,7 @@ export function planBake(input: PlanBakeInput): BakePlan {
   } else {
     entry('pack', pickupMs, pickupMs);
   }
-  const stepOrder = new Map(['build-starter', 'cook-cool-roux', 'mix', 'bulk-fermentation', 'shape-and-chill', 'cold-retard', 'heat-oil', 'roll-and-cut', 'final-proof', 'fry', 'cool', 'glaze', 'pack'].map((s, i) => [s, i]));
-  const order = timeline.map((_, i) => i).sort((a, b) => startMs[a]! - startMs[b]! || (timeline[a]!.mix ?? 0) - (timeline[b]!.mix ?? 0) || stepOrder.get(timeline[a]!.step)! - stepOrder.get(timeline[b]!.step)!);
+  const order = timeline.map((_, i) => i).sort((a, b) => startMs[a]! - startMs[b]! || mixKey[a]! - mixKey[b]! || stepKey[a]! - stepKey[b]!);
   const sortedTimeline = order.map((i) => timeline[i]!);
   const firstStepMs = startMs.length > 0 ? startMs.reduce((m, x) => Math.min(m, x), Infinity) : pickupMs;
   const cutoffMs = firstStepMs - Math.ceil(requireNonNegative('schedule.cutoffMarginMinutes', input.schedule.cutoffMarginMinutes) - 1e-9) * MIN;
@@ -1024,6 +1043,19 @@ export function planBake(input: PlanBakeInput): BakePlan {
     glazes: input.glazes,
     prices: input.prices,
     boxes: input.boxes ?? [],
+    // Each flavour's own dough per kilogram of base (add-ins on top), or per kilogram of its own formula.
+    doughs: [...variations.values()].map((v) => {
+      const listMissing = lots.has(keyOf(v.id));
+      return v.formula
+        ? { dough: v.id, name: v.name, ingredients: scaleFormula(v.formula, 1000).ingredients, doughGrams: 1000, listMissing }
+        : {
+            dough: v.id,
+            name: v.name,
+            ingredients: [...perKilo.ingredients, ...(v.addIns ?? []).map((a) => ({ name: a.name, grams: a.gramsPerKg, portion: false }))],
+            doughGrams: 1000 * (1 + addInRatio(v.addIns ?? [])),
+            listMissing,
+          };
+    }),
   });
 
   // Cautions and the remaining warnings.

@@ -37,8 +37,7 @@ function offsetText(minutes: number): string {
 }
 
 const DAY_MS = 24 * HOUR_MS;
-/** Minutes a formatter keeps in its own array: four days either side of the first instant it prints. */
-const NEAR_MINUTES = 2 * 4 * 24 * 60;
+const DAY_MINUTES = 24 * 60;
 const TWO_DIGITS = Array.from({ length: 60 }, (_, i) => (i < 10 ? `0${i}` : String(i)));
 
 interface ZoneCache {
@@ -50,16 +49,16 @@ interface ZoneCache {
   /** "YYYY-MM-DDTHH:" by local hour. */
   prefixes: Map<number, string>;
   offsetTexts: Map<number, string>;
-  /** Whole-minute instants already printed. */
-  minutes: Map<number, string>;
+  /** Whole-minute instants already printed: one array of a day's minutes per UTC day. */
+  minuteTexts: Map<number, Array<string | undefined>>;
 }
 
 const zoneCaches = new Map<string, ZoneCache>();
 
 function zoneCache(timeZone: string): ZoneCache {
   let cache = zoneCaches.get(timeZone);
-  if (!cache || cache.prefixes.size > 200_000 || cache.minutes.size > 500_000) {
-    cache = { zone: IANAZone.create(timeZone), days: new Map(), hours: new Map(), prefixes: new Map(), offsetTexts: new Map(), minutes: new Map() };
+  if (!cache || cache.prefixes.size > 200_000 || cache.minuteTexts.size > 400) {
+    cache = { zone: IANAZone.create(timeZone), days: new Map(), hours: new Map(), prefixes: new Map(), offsetTexts: new Map(), minuteTexts: new Map() };
     zoneCaches.set(timeZone, cache);
   }
   return cache;
@@ -88,36 +87,17 @@ function cachedOffset(c: ZoneCache, millis: number): number | null {
  * on a day when it changes (a zone changes its offset at most once in a day),
  * and kept between calls; the hour when it changes is formatted exactly.
  * Whole seconds, printed as formatInstant prints them; whole minutes are
- * remembered, since a bake day's sheet repeats them: each formatter keeps
- * the minutes it has printed in a plain array indexed from the first one (a
- * map lookup with a number key cost more than the rest of the formatting
- * put together), in front of the zone's map shared between formatters.
+ * remembered, since a bake day's sheet repeats them, in one plain array per
+ * UTC day shared by the zone's formatters (a map keyed by the minute cost more
+ * than the rest of the formatting put together: a big bake's line spans weeks
+ * and the map grew to hundreds of thousands of entries). Each formatter holds
+ * on to the day it printed last, as the sheet prints its instants in order.
  */
 export function instantFormatter(timeZone: string): (millis: number) => string {
   const c = zoneCache(requireTimeZone('timeZone', timeZone));
-  let near: Array<string | undefined> = [];
-  let nearFrom = Number.NaN;
-  return (millis: number) => {
-    const minute = millis / 60_000;
-    const wholeMinute = Number.isInteger(minute);
-    let slot = -1;
-    if (wholeMinute) {
-      if (nearFrom !== nearFrom) {
-        nearFrom = minute - NEAR_MINUTES / 2;
-        near = new Array<string | undefined>(NEAR_MINUTES); // sized up front, so it keeps fast elements
-      }
-      const k = minute - nearFrom;
-      if (k >= 0 && k < NEAR_MINUTES) {
-        const hit = near[k];
-        if (hit !== undefined) return hit;
-        slot = k;
-      }
-      const seen = c.minutes.get(minute);
-      if (seen !== undefined) {
-        if (slot >= 0) near[slot] = seen;
-        return seen;
-      }
-    }
+  let lastDay = Number.NaN;
+  let lastTexts: Array<string | undefined> = [];
+  const print = (millis: number): string => {
     const offset = cachedOffset(c, millis);
     if (offset === null || millis % 1000 !== 0) return formatInstant(millis, timeZone);
     const local = millis + offset * 60_000;
@@ -133,9 +113,26 @@ export function instantFormatter(timeZone: string): (millis: number) => string {
       c.offsetTexts.set(offset, suffix);
     }
     const inHour = local - localHour * HOUR_MS;
-    const text = prefix + TWO_DIGITS[Math.floor(inHour / 60_000)]! + ':' + TWO_DIGITS[Math.floor((inHour % 60_000) / 1000)]! + suffix;
-    if (wholeMinute) c.minutes.set(minute, text);
-    if (slot >= 0) near[slot] = text;
+    return prefix + TWO_DIGITS[Math.floor(inHour / 60_000)]! + ':' + TWO_DIGITS[Math.floor((inHour % 60_000) / 1000)]! + suffix;
+  };
+  return (millis: number) => {
+    const minute = millis / 60_000;
+    if (!Number.isInteger(minute)) return print(millis);
+    const day = Math.floor(minute / DAY_MINUTES);
+    if (day !== lastDay) {
+      let texts = c.minuteTexts.get(day);
+      if (texts === undefined) {
+        texts = new Array<string | undefined>(DAY_MINUTES); // sized up front, so it keeps fast elements
+        c.minuteTexts.set(day, texts);
+      }
+      lastDay = day;
+      lastTexts = texts;
+    }
+    const k = minute - day * DAY_MINUTES;
+    const hit = lastTexts[k];
+    if (hit !== undefined) return hit;
+    const text = print(millis);
+    lastTexts[k] = text;
     return text;
   };
 }

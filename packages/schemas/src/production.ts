@@ -24,6 +24,12 @@ export const formulaIngredientSchema = z.strictObject({
   salted: z.boolean().optional(),
 });
 
+/** Baker's percentages: the flour lines make 100 %. */
+function flourAddsUp(f: { ingredients: Array<{ kind: string; percent: number }> }): boolean {
+  return Math.abs(f.ingredients.filter((i) => i.kind === 'flour').reduce((s, i) => s + i.percent, 0) - 100) < 1e-9;
+}
+const FLOUR_ADDS_UP = { message: 'The flour lines must add up to 100 %', path: ['ingredients'] };
+
 export const formulaSchema = z
   .strictObject({
     ingredients: z.array(formulaIngredientSchema).min(1, 'A formula needs ingredients').max(30),
@@ -37,10 +43,7 @@ export const formulaSchema = z
       })
       .optional(),
   })
-  .refine((f) => Math.abs(f.ingredients.filter((i) => i.kind === 'flour').reduce((s, i) => s + i.percent, 0) - 100) < 1e-9, {
-    message: 'The flour lines must add up to 100 %',
-    path: ['ingredients'],
-  });
+  .refine(flourAddsUp, FLOUR_ADDS_UP);
 export type FormulaInput = z.infer<typeof formulaSchema>;
 
 export const saveFormulaSchema = z.strictObject({
@@ -167,7 +170,7 @@ export const doughVariationSchema = z.strictObject({
     starterHydrationPercent: positive('Starter hydration', 300).optional(),
     rouxLiquidPerFlour: positive('Roux liquid per flour', 20).optional(),
     starterFeed: z.strictObject({ flourPerSeed: positive('Flour per part of seed starter', 20), extraPercent: nonNegative('Extra starter', 100), peakHours: positive('Hours to peak', 24) }).optional(),
-  }).optional(),
+  }).refine(flourAddsUp, FLOUR_ADDS_UP).optional(),
 }).refine((v) => !(v.formula && v.addIns && v.addIns.length > 0), { message: 'Give add-ins or a formula of its own, not both', path: ['addIns'] });
 export type DoughVariationInput = z.infer<typeof doughVariationSchema>;
 

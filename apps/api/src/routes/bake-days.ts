@@ -3,7 +3,7 @@ import { api } from '@fryline/schemas';
 import { currentUser, requireRole, requireUser } from '../middleware/auth.js';
 import { route } from '../lib/route.js';
 import { getBakeDay, listUpcoming } from '../services/bake-days/bake-days.js';
-import { planForBakeDay, pinFormula, setBakeDayCapacity } from '../services/production/production.js';
+import { planForBakeDay, planResponseParts, pinFormula, setBakeDayCapacity } from '../services/production/production.js';
 import { joinWaitlist } from '../services/waitlist/waitlist.js';
 import { listPickups } from '../services/counter/pickups.js';
 import { getSurplus } from '../services/counter/surplus.js';
@@ -21,7 +21,17 @@ route(bakeDaysRouter, api.getBakeDay, [], ({ params, now }) => getBakeDay(params
 
 route(bakeDaysRouter, api.joinWaitlist, [requireUser], ({ req, params, body, now }) => joinWaitlist(currentUser(req), params.id, body.rings, body.holes, now));
 
-route(bakeDaysRouter, api.getPlan, [requireRole('baker')], ({ params, now }) => planForBakeDay(params.id, now), { noStore: true });
+route(bakeDaysRouter, api.getPlan, [requireRole('baker')], ({ params, now }) => planForBakeDay(params.id, now), {
+  noStore: true,
+  // Written as it stands (no ETag, which would hash megabytes for an answer that is never stored).
+  send: (res, result) => {
+    const parts = planResponseParts(result);
+    res.set('Content-Type', 'application/json; charset=utf-8');
+    res.set('Content-Length', String(parts.reduce((n, b) => n + b.length, 0)));
+    for (const part of parts.slice(0, -1)) res.write(part);
+    res.end(parts.at(-1));
+  },
+});
 
 route(bakeDaysRouter, api.pinFormula, [requireRole('baker')], async ({ req, params, body, now }) => {
   await pinFormula(currentUser(req).id, params.id, body.formulaVersionId);

@@ -131,6 +131,51 @@ function planInput(
 }
 
 /**
+ * The last few plans, by everything they were worked out from except the
+ * clock: the sheet is asked for every 30 s by each open screen and rarely
+ * changes between two asks. The clock only decides whether the cut-off or
+ * the first step has passed, so a plan is reused while that stays the same.
+ * Each keeps its JSON text, written once (a big day's sheet is megabytes).
+ */
+const planCache = new Map<string, { plan: BakePlan; phase: number }>();
+const planTexts = new WeakMap<BakePlan, Buffer>();
+const PLAN_CACHE_SIZE = 4;
+
+function clockPhase(plan: BakePlan, nowIso: string): number {
+  const nowMs = Date.parse(nowIso);
+  if (nowMs >= Date.parse(plan.firstStepAt)) return 2;
+  return nowMs >= Date.parse(plan.preorderCutoffAt) ? 1 : 0;
+}
+
+function cachedPlan(input: PlanBakeInput): BakePlan {
+  const key = JSON.stringify({ ...input, now: undefined });
+  const hit = planCache.get(key);
+  if (hit && clockPhase(hit.plan, input.now) === hit.phase) {
+    planCache.delete(key); // most recently used last
+    planCache.set(key, hit);
+    return hit.plan;
+  }
+  const plan = planBake(input);
+  planCache.delete(key);
+  planCache.set(key, { plan, phase: clockPhase(plan, input.now) });
+  if (planCache.size > PLAN_CACHE_SIZE) planCache.delete(planCache.keys().next().value!);
+  return plan;
+}
+
+/**
+ * The sheet route's answer as the bytes res.json would write, in three
+ * parts: a cached plan's UTF-8 text is reused, only the meta is written anew.
+ */
+export function planResponseParts(response: PlanResponse): Buffer[] {
+  let plan = planTexts.get(response.plan);
+  if (plan === undefined) {
+    plan = Buffer.from(JSON.stringify(response.plan));
+    planTexts.set(response.plan, plan);
+  }
+  return [Buffer.from('{"plan":'), plan, Buffer.from(`,"meta":${JSON.stringify(response.meta)}}`)];
+}
+
+/**
  * The production sheet for a bake day: every paid and held order counted
  * (held ones may still lapse, so the sheet errs on the side of enough dough).
  * The first time a day is planned it is pinned to the current formula version.
@@ -175,7 +220,7 @@ export async function planForBakeDay(bakeDayId: string, now: Date): Promise<Plan
   const byMenuItem = Object.fromEntries((day.menuItems ?? []).map((m) => [m.id, m.allergens]));
   let plan: BakePlan;
   try {
-    plan = planBake(
+    plan = cachedPlan(
       planInput(settings, formula.formula as Formula, orders, { firstPickupStartsAt: windows[0].startsAt.toISOString(), timeZone: day.timeZone, now: now.toISOString() }, boxes, byMenuItem, boxCount),
     );
   } catch (err) {

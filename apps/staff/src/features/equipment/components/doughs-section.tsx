@@ -1,6 +1,10 @@
 import { useFieldArray, useWatch } from 'react-hook-form';
+import { useQuery } from '@tanstack/react-query';
 import { FieldShell, fieldAria } from '@fryline/ui';
+import { productionQueries } from '../../../lib/queries/production-queries';
+import { madeFrom, withAddIns, withOwnFormula, type DoughMadeFrom } from '../model/doughs';
 import { glazeIdFrom } from '../model/glazes';
+import { DoughFormulaFields } from './dough-formula-fields';
 import { fieldError, fieldId, type SettingsForm } from './settings-field';
 
 /** Flavours typed as a list, "Lemon zest, Orange": each trimmed, blanks dropped. */
@@ -8,15 +12,27 @@ export function flavourList(text: string): string[] {
   return text.split(',').map((f) => f.trim()).filter((f) => f !== '');
 }
 
+const MADE_FROM: Array<{ value: DoughMadeFrom; label: string }> = [
+  { value: 'add-ins', label: 'The base dough with add-ins' },
+  { value: 'own-formula', label: 'A formula of its own' },
+];
+
 /**
- * The flavoured doughs: a share of the base dough with add-ins folded in, for
- * the menu flavours named here. (A dough of its own formula is kept as saved
- * and shown for what it is.)
+ * The flavoured doughs, for the menu flavours named here: a share of the
+ * base dough with add-ins folded in, or a dough of its own formula, started
+ * from a saved formula version and edited here.
  */
 export function DoughsSection({ form }: { form: SettingsForm }) {
   const list = useFieldArray({ control: form.control, name: 'dough.variations', keyName: 'key' });
   const doughs = useWatch({ control: form.control, name: 'dough.variations' }) ?? [];
   const listError = fieldError(form, 'dough.variations');
+  const formulas = useQuery(productionQueries.formulas()).data;
+  const choose = (index: number, value: DoughMadeFrom) => {
+    const dough = form.getValues(`dough.variations.${index}`);
+    if (!dough || madeFrom(dough) === value) return;
+    if (value === 'own-formula' && !formulas) return;
+    list.update(index, value === 'own-formula' ? withOwnFormula(dough, formulas!.current.formula) : withAddIns(dough));
+  };
   return (
     <fieldset className="card flex flex-col gap-3" aria-describedby="doughs-intro">
       <legend className="float-left w-full text-xl font-extrabold">Flavoured doughs</legend>
@@ -59,10 +75,29 @@ export function DoughsSection({ form }: { form: SettingsForm }) {
                     onChange={(event) => form.setValue(`${base}.flavours`, flavourList(event.target.value), { shouldDirty: true })}
                   />
                 </FieldShell>
+                <fieldset className="sm:col-span-2">
+                  <legend className="field-label">Made from</legend>
+                  <div className="flex flex-wrap gap-x-5 gap-y-1">
+                    {MADE_FROM.map((option) => (
+                      <label key={option.value} className="flex items-center gap-2">
+                        <input
+                          type="radio"
+                          name={`${base}.madeFrom`}
+                          value={option.value}
+                          checked={madeFrom(dough) === option.value}
+                          disabled={option.value === 'own-formula' && !formulas && madeFrom(dough) !== 'own-formula'}
+                          onChange={() => choose(index, option.value)}
+                        />
+                        {option.label}
+                      </label>
+                    ))}
+                  </div>
+                  {madeFrom(dough) === 'add-ins' && (
+                    <p className="text-sm text-muted">A formula of its own starts as a copy of the current formula version; change its lines below.</p>
+                  )}
+                </fieldset>
                 {dough?.formula ? (
-                  <p className="text-sm text-muted sm:col-span-2">
-                    Its own formula ({dough.formula.ingredients.length} lines), mixed on its own; kept as saved.
-                  </p>
+                  <DoughFormulaFields form={form} index={index} formulas={formulas} />
                 ) : (
                   <>
                     {(dough?.addIns ?? []).map((_addIn, j) => (

@@ -7,6 +7,7 @@ import type { Path } from 'react-hook-form';
 import { scheduleStepIds, type ProductionSettingsInput, type ProductionSettingsView } from '@fryline/schemas';
 import { DEFAULT_BENCH_LENGTH_MM, DEFAULT_BURNER, DEFAULT_PLAN_SETTINGS, DEFAULT_POT_BODY, DEFAULT_RATES, DEFAULT_TRAY, type CapacityLimit } from '@fryline/production';
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
+import { doughFieldNames, doughFormPath } from './doughs';
 
 export type SettingsPath = Path<ProductionSettingsInput>;
 
@@ -237,7 +238,7 @@ export function formFieldNames(values: ProductionSettingsInput): SettingsPath[] 
   const priceFields = Object.keys(values.prices.centsPerKg)
     .filter((name) => plainKey.test(name))
     .map((name): SettingsPath => `prices.centsPerKg.${name}`);
-  return [...settingsFieldNames, 'glazes', ...glazeFields, 'prices.fryingOilCentsPerKg', 'prices.oilBakesPerFill', ...priceFields];
+  return [...settingsFieldNames, 'glazes', ...glazeFields, 'prices.fryingOilCentsPerKg', 'prices.oilBakesPerFill', ...priceFields, 'dough.variations', ...doughFieldNames(values)];
 }
 
 /**
@@ -250,8 +251,9 @@ export function placeServerErrors(
   setError: (name: SettingsPath, error: { type: string; message: string }) => void,
 ): string[] {
   const known = new Set<string>(formFieldNames(values));
-  const keys = isApiError(error) ? Object.keys(error.fieldErrors).filter((key) => known.has(dottedPath(key))) : [];
-  return putFieldErrors(error, (key, fieldError) => setError(dottedPath(key) as SettingsPath, fieldError), keys);
+  const formPath = (key: string) => doughFormPath(dottedPath(key));
+  const keys = isApiError(error) ? Object.keys(error.fieldErrors).filter((key) => known.has(formPath(key))) : [];
+  return putFieldErrors(error, (key, fieldError) => setError(formPath(key) as SettingsPath, fieldError), keys);
 }
 
 export const limitNames: Record<CapacityLimit, string> = {

@@ -1,9 +1,10 @@
 import { useFieldArray, useWatch, type UseFormReturn } from 'react-hook-form';
 import type { z } from 'zod';
 import { ingredientKinds, type saveFormulaSchema } from '@fryline/schemas';
-import { formatMass, formatPercent } from '../../../lib/units';
+import { formatMass } from '../../../lib/units';
 import { blankIngredient, flourTotal, kindLabels, type FormulaFormValues, type Preview } from '../model/formula-form';
 import { ListError, RemoveRowButton } from '../../../components/row-controls';
+import { FormulaLinesFooter } from '../../../components/formula-lines-footer';
 
 type FormulaForm = UseFormReturn<FormulaFormValues, unknown, z.output<typeof saveFormulaSchema>>;
 
@@ -149,20 +150,7 @@ export function IngredientTable({
         </tbody>
       </table>
       <ListError message={listError} />
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <button
-          type="button"
-          className="btn btn-quiet btn-small"
-          onClick={() => lines.append(blankIngredient())}
-          disabled={lines.fields.length >= MAX_LINES}
-        >
-          Add an ingredient
-        </button>
-        <p className={`font-semibold ${Math.abs(flour - 100) < 1e-9 ? 'text-sage-700' : 'text-brick-700'}`}>
-          Flour lines: {formatPercent(flour, 2)}
-          {Math.abs(flour - 100) < 1e-9 ? '' : ' (they must add up to 100 %)'}
-        </p>
-      </div>
+      <FormulaLinesFooter flour={flour} canAdd={lines.fields.length < MAX_LINES} onAdd={() => lines.append(blankIngredient())} />
       <div className="grid gap-3 sm:grid-cols-2">
         <NumberField
           id="starter-hydration"

@@ -5,27 +5,13 @@
 import type { z } from 'zod';
 import type { Path } from 'react-hook-form';
 import { ProductionInputError, scaleFormula, type ScaledFormula } from '@fryline/production';
-import type { FormulaInput, ingredientKinds, saveFormulaSchema } from '@fryline/schemas';
+import type { FormulaInput, saveFormulaSchema } from '@fryline/schemas';
+import { flourPercent } from '../../../lib/ingredient-kinds';
 
 export type FormulaFormValues = z.input<typeof saveFormulaSchema>;
 export type FormulaFormIngredient = FormulaFormValues['formula']['ingredients'][number];
-export type IngredientKindValue = (typeof ingredientKinds)[number];
 
-/** Plain names for the kinds of line; the last three are shares of other lines, not additions. */
-export const kindLabels: Record<IngredientKindValue, string> = {
-  flour: 'Flour',
-  water: 'Water',
-  milk: 'Milk',
-  egg: 'Egg',
-  butter: 'Butter',
-  sugar: 'Sugar',
-  salt: 'Salt',
-  starter: 'Starter (share of flour and water)',
-  'roux-flour': 'Roux flour (share of flour)',
-  'roux-milk': 'Roux milk (share of milk)',
-  flavouring: 'Flavouring',
-  other: 'Other',
-};
+export { kindLabels, type IngredientKindValue } from '../../../lib/ingredient-kinds';
 
 export const SAMPLE_DOUGH_GRAMS = 2000;
 
@@ -47,7 +33,7 @@ export function formulaFieldNames(lineCount: number): Path<FormulaFormValues>[] 
 }
 
 export function flourTotal(ingredients: readonly FormulaFormIngredient[]): number {
-  return ingredients.filter((line) => line.kind === 'flour').reduce((sum, line) => sum + (Number(line.percent) || 0), 0);
+  return flourPercent(ingredients);
 }
 
 export type Preview = { ok: true; scaled: ScaledFormula } | { ok: false; problem: string };
