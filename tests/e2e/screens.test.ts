@@ -116,6 +116,37 @@ async function tabTo(page: Page, target: ReturnType<Page['getByRole']>, maxTabs 
   throw new Error(`Tab never reached ${target.toString()}`);
 }
 
+/**
+ * The page as printed fits one sheet of US Letter (8.5 × 11 in = 612 × 792 pt, ANSI/ASME Y14.1) and one of
+ * A4 (210 × 297 mm, ISO 216), counted by pdf-lib, which reads the file's page tree; and no printed text is
+ * under 9 pt (12 CSS px; CSS Values 4: 1 pt = 4/3 px), so it reads at arm's length. Call it in print media.
+ */
+async function expectOnePrintedPage(page: Page, name: string) {
+  for (const [format, size] of [['Letter', [612, 792]], ['A4', [595.28, 841.89]]] as const) {
+    const file = await page.pdf({ path: path.join(shotsDir, `${name}-${format.toLowerCase()}.pdf`), format, printBackground: true });
+    const doc = await PDFDocument.load(file);
+    expect(doc.getPageCount(), `${name}, ${format}: the sheet fits one page`).toBe(1);
+    // Chromium sizes pages in whole CSS pixels (0.75 pt each), so allow a pixel and a half.
+    const { width, height } = doc.getPage(0).getSize();
+    expect(Math.abs(width - size[0]), `${format}: page width ${width} pt`).toBeLessThanOrEqual(1.2);
+    expect(Math.abs(height - size[1]), `${format}: page height ${height} pt`).toBeLessThanOrEqual(1.2);
+  }
+  const small = await page.locator('main').evaluate((main) => {
+    const tooSmall: string[] = [];
+    const walker = document.createTreeWalker(main, NodeFilter.SHOW_TEXT);
+    for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+      const el = node.parentElement;
+      if (!el || !node.textContent?.trim() || el.closest('.sr-only')) continue;
+      const box = el.getBoundingClientRect();
+      if (box.width === 0 || box.height === 0 || getComputedStyle(el).visibility === 'hidden') continue;
+      const px = parseFloat(getComputedStyle(el).fontSize);
+      if (px < 12 - 0.01) tooSmall.push(`${px * 0.75} pt: ${node.textContent.trim().slice(0, 40)}`);
+    }
+    return tooSmall;
+  });
+  expect(small, `${name}: printed text of at least 9 pt`).toEqual([]);
+}
+
 let browser: Awaited<ReturnType<typeof openBrowser>>;
 const pages = new Map<Who, Page>();
 let fixture: Fixture;
@@ -125,15 +156,21 @@ let restoreHoles: number | null = null;
 async function signedIn(who: Who): Promise<Page> {
   const known = pages.get(who);
   if (known) return known;
-  const { page } = await browser.fresh();
-  await page.goto(who === 'customer' ? `${appUrl}/` : `${appUrl}/staff/`);
-  const signIn = who === 'customer' ? /^sign in$/i : /sign in/i;
-  await page.getByRole('link', { name: signIn }).or(page.getByRole('button', { name: signIn })).first().click();
-  await chooseAccount(page, who === 'customer' ? 'screens.customer@example.test' : `${who}@fryline.test`);
-  // the sign-in redirects can outlast a quiet network: wait until the staff app shows who is signed in
-  if (who !== 'customer') await page.getByRole('button', { name: /sign out/i }).waitFor();
-  await page.waitForLoadState('networkidle');
+  const page = await signInFresh(who === 'customer' ? 'screens.customer@example.test' : `${who}@fryline.test`, who !== 'customer');
   pages.set(who, page);
+  return page;
+}
+
+/** A new browser context signed in with this account, in the shop or in the staff app. */
+async function signInFresh(email: string, staff: boolean): Promise<Page> {
+  const { page } = await browser.fresh();
+  await page.goto(staff ? `${appUrl}/staff/` : `${appUrl}/`);
+  const signIn = staff ? /sign in/i : /^sign in$/i;
+  await page.getByRole('link', { name: signIn }).or(page.getByRole('button', { name: signIn })).first().click();
+  await chooseAccount(page, email);
+  // the sign-in redirects can outlast a quiet network: wait until the staff app shows who is signed in
+  if (staff) await page.getByRole('button', { name: /sign out/i }).waitFor();
+  await page.waitForLoadState('networkidle');
   return page;
 }
 
@@ -218,32 +255,7 @@ describe('printed production sheet', () => {
       // The printed layout as a picture too, at US Letter's printable width (8.5 in less the sheet's 2 × 6 mm margins, 96 px an inch).
       await page.setViewportSize({ width: Math.floor(8.5 * 96 - (2 * 6 * 96) / 25.4), height: 900 });
       await page.screenshot({ path: path.join(shotsDir, 'production-sheet-print.png'), fullPage: true });
-      // One page on US Letter (8.5 × 11 in = 612 × 792 pt, ANSI/ASME Y14.1) and on A4 (210 × 297 mm, ISO 216),
-      // counted by pdf-lib, which reads the file's page tree.
-      for (const [format, size] of [['Letter', [612, 792]], ['A4', [595.28, 841.89]]] as const) {
-        const file = await page.pdf({ path: path.join(shotsDir, `production-sheet-${format.toLowerCase()}.pdf`), format, printBackground: true });
-        const doc = await PDFDocument.load(file);
-        expect(doc.getPageCount(), `${format}: the sheet fits one page`).toBe(1);
-        // Chromium sizes pages in whole CSS pixels (0.75 pt each), so allow a pixel and a half.
-        const { width, height } = doc.getPage(0).getSize();
-        expect(Math.abs(width - size[0]), `${format}: page width ${width} pt`).toBeLessThanOrEqual(1.2);
-        expect(Math.abs(height - size[1]), `${format}: page height ${height} pt`).toBeLessThanOrEqual(1.2);
-      }
-      // Readable at arm's length: no printed text under 9 pt (12 CSS px; CSS Values 4: 1 pt = 4/3 px).
-      const small = await page.locator('main').evaluate((main) => {
-        const tooSmall: string[] = [];
-        const walker = document.createTreeWalker(main, NodeFilter.SHOW_TEXT);
-        for (let node = walker.nextNode(); node; node = walker.nextNode()) {
-          const el = node.parentElement;
-          if (!el || !node.textContent?.trim() || el.closest('.sr-only')) continue;
-          const box = el.getBoundingClientRect();
-          if (box.width === 0 || box.height === 0 || getComputedStyle(el).visibility === 'hidden') continue;
-          const px = parseFloat(getComputedStyle(el).fontSize);
-          if (px < 12 - 0.01) tooSmall.push(`${px * 0.75} pt: ${node.textContent.trim().slice(0, 40)}`);
-        }
-        return tooSmall;
-      });
-      expect(small, 'printed text of at least 9 pt').toEqual([]);
+      await expectOnePrintedPage(page, 'production-sheet');
       // The parts a baker works from are on paper: the schedule, the mixer list, the fry plan and its batches.
       for (const name of [/^schedule$/i, /^dough$/i, /^frying$/i, /^cutting$/i, /^proof and fry, batch by batch$/i]) {
         await expect.poll(() => page.getByRole('heading', { name }).first().isVisible(), { message: `${name} printed` }).toBe(true);
