@@ -27,7 +27,7 @@ export function LineSection({ plan, timeZone, units }: { plan: BakePlan; timeZon
         Wait for the thermometer to read the temperature in the table before each batch goes in, lower pieces in gently and away from you,
         and never leave the pot. Add top-up oil slowly, between batches only.
       </Caution>
-      <table className="w-full">
+      <table className="sheet-timetable w-full">
         <caption className="pb-1 text-left font-extrabold">Fry timetable</caption>
         <TableHead columns={[num('Batch'), 'In at', 'Pieces', num('Wait for'), 'Glaze after']} />
         <tbody>

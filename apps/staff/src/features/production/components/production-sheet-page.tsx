@@ -110,19 +110,18 @@ function Sheet({ data, staleError }: { data: PlanResponse; staleError: unknown }
       </div>
       <div className="sheet-grid grid gap-4 lg:grid-cols-2">
         <SheetWarnings warnings={warnings} />
-        {/* On screen the two groups melt into the grid; on paper they are the page's two columns. */}
-        <div className="sheet-column">
+        {/* On screen the group melts into the grid; on paper its sections flow down two balanced columns. */}
+        <div className="sheet-columns">
           <CountsSection plan={plan} meta={meta} />
           <DoughSection plan={plan} units={units} />
           {plan.roux && <RouxSection roux={plan.roux} units={units} />}
           {plan.starter && <StarterSection starter={plan.starter} timeZone={zone} units={units} />}
-        </div>
-        <div className="sheet-column">
           <CutsSection cuts={plan.cuts} units={units} />
           <FrySection fry={plan.fry} units={units} />
-          <LineSection plan={plan} timeZone={zone} units={units} />
           <GlazeSection glazes={plan.glaze} units={units} />
         </div>
+        {/* Full width on paper: the fry timetable flows in columns, one line a batch. */}
+        <LineSection plan={plan} timeZone={zone} units={units} />
         <MixesSection mixes={plan.mixes} variations={plan.variations} timeZone={zone} units={units} />
         {isOwner && <CostSection cost={plan.cost} />}
         <ScheduleSection timeline={plan.timeline} timeZone={zone} units={units} />

@@ -15,6 +15,9 @@ export function ScheduleSection({ timeline, timeZone, units }: { timeline: reado
             // A step repeated for each mix checks the same things: on paper, say so instead of printing them again.
             const first = rows.find((r) => r.lookFor === row.lookFor)!;
             const repeat = first !== row;
+            // "Build the starter — mix 2" after "Build the starter — mix 1": "as for mix 1" says it all.
+            const [step, firstMix] = first.title.split(' — ');
+            const sameStep = firstMix !== undefined && row.title.startsWith(`${step} — `);
             return (
               <tr key={row.key}>
                 <td className={`${cell.text} tabular-nums`}>
@@ -25,7 +28,9 @@ export function ScheduleSection({ timeline, timeZone, units }: { timeline: reado
                 <th scope="row" className={`${cell.text} text-left font-normal`}>
                   <span className="sheet-step block font-extrabold">{row.title}</span>
                   <span className={`sheet-look block text-sm${repeat ? ' sheet-hint' : ''}`}>{unitsInText(row.lookFor, units)}</span>
-                  {repeat && <span className="sheet-print-only">the same checks as {first.title.toLowerCase()}.</span>}
+                  {repeat && (
+                    <span className="sheet-print-only">{sameStep ? `the same checks as for ${firstMix}.` : `the same checks as ${first.title.toLowerCase()}.`}</span>
+                  )}
                 </th>
               </tr>
             );
