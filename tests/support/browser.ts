@@ -51,18 +51,34 @@ export async function openBrowser(viewport = { width: 390, height: 844 }, extraA
   };
 }
 
-/** Signs in on the sign-in page by choosing a listed account (or typing a new address). */
-export async function chooseAccount(page: Page, email: string) {
+/**
+ * Signs in on the sign-in page by choosing a listed account (or typing a new
+ * address). Coming back to the staff app, it waits until the app says who is
+ * signed in. KNOWN OPEN BUG: on a heavily loaded machine a staff sign-in now
+ * and then comes back to the staff sign-in screen (seen three times in about
+ * 300 sign-ins, cause not found yet); then it says so in the log and signs in
+ * once more, as a person would, so that one journey does not fail for it.
+ */
+export async function chooseAccount(page: Page, email: string, again = true): Promise<void> {
   const listed = page.getByRole('button', { name: new RegExp(email.replace(/[.@]/g, '\\$&'), 'i') });
   // wait for the sign-in page itself: counting on the page being left would find nothing
   await listed.or(page.getByLabel(/e-?mail/i)).first().waitFor();
+  const signInPage = new URL(page.url()).origin;
   if (await listed.count()) await listed.first().click();
   else {
     await page.getByLabel(/e-?mail/i).fill(email);
     await page.getByRole('button', { name: /continue|sign in/i }).click();
   }
+  await page.waitForURL((url) => url.origin !== signInPage);
+  if (!new URL(page.url()).pathname.startsWith('/staff')) return;
+  const staffSignIn = page.getByRole('link', { name: /^sign in with google$/i });
+  await page.getByRole('button', { name: /sign out/i }).or(staffSignIn).first().waitFor();
+  if (again && (await staffSignIn.isVisible())) {
+    console.warn(`sign-in as ${email} came back to the staff sign-in screen; signing in once more`);
+    await staffSignIn.click();
+    await chooseAccount(page, email, false);
+  }
 }
-
 
 /** Pays a checkout on the payments stand-in's page with the test card that succeeds (4242 4242 4242 4242, Stripe's testing docs) and waits for the order page. */
 export async function payWithTestCard(page: Page, checkoutUrl: string) {
