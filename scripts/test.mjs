@@ -36,16 +36,15 @@ async function main() {
       TEST_SETUP_DATABASE_URL: pgE2e.createDatabase('fryline_setup'),
     };
     buildApps(pnpm);
-    log('running the tests: the browser journeys beside the rest (their report follows the others)');
+    // Two runs one after the other: side by side they took longer on two cores
+    // (the browser journeys and the API tests each want both).
+    log('running the tests: unit and API first, then the browser journeys');
     const lanes = [
-      { name: 'main', projects: ['!e2e'], results: path.join(dataDir, 'results.json'), output: null },
-      { name: 'e2e', projects: ['e2e'], results: path.join(dataDir, 'results-e2e.json'), output: path.join(dataDir, 'e2e-output.log') },
+      { name: 'main', projects: ['!e2e'], results: path.join(dataDir, 'results.json') },
+      { name: 'e2e', projects: ['e2e'], results: path.join(dataDir, 'results-e2e.json') },
     ];
-    const statuses = await Promise.all(lanes.map((lane) => runLane(lane, env)));
-    for (const lane of lanes.filter((l) => l.output)) {
-      console.log(`\n--- the ${lane.name} lane ---`);
-      if (fs.existsSync(lane.output)) process.stdout.write(fs.readFileSync(lane.output, 'utf8'));
-    }
+    const statuses = [];
+    for (const lane of lanes) statuses.push(await runLane(lane, env));
     code = statuses.every((status) => status === 0) ? 0 : 1;
     let passed = 0;
     let failed = 0;
@@ -72,18 +71,16 @@ async function main() {
   process.exit(code);
 }
 
-/** One vitest run over some projects; its output goes to the console, or to a file printed afterwards. */
+/** One vitest run over some projects, printing to the console. */
 function runLane(lane, env) {
   const args = ['run', ...lane.projects.map((p) => `--project=${p}`), '--reporter=default', '--reporter=json', `--outputFile.json=${lane.results}`];
   return new Promise((resolve) => {
-    const out = lane.output ? fs.openSync(lane.output, 'w') : 'inherit';
-    const child = spawn(path.join(root, 'node_modules/.bin/vitest'), args, { cwd: root, env, stdio: ['ignore', out, out] });
+    const child = spawn(path.join(root, 'node_modules/.bin/vitest'), args, { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] });
     child.on('error', (err) => {
       console.error(`the ${lane.name} lane could not start: ${err.message}`);
       resolve(1);
     });
     child.on('exit', (status, signal) => {
-      if (typeof out === 'number') fs.closeSync(out);
       resolve(signal ? 1 : status ?? 1);
     });
   });
