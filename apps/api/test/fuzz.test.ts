@@ -32,6 +32,13 @@ const oddText = fc.oneof(
   fc.array(fc.constantFrom(...odd), { minLength: 1, maxLength: 8 }).map((parts) => parts.join('x')),
 );
 const hugeText = fc.integer({ min: 1_000, max: 60_000 }).map((n) => 'é'.repeat(n));
+// In a URL, 'é' is six bytes once percent-encoded and Node refuses a request head over 16 KB (431)
+// before any of our code runs: long path and query text stays mostly under that, so it reaches
+// routing and validation, and now and then goes over it.
+const longUrlText = fc.oneof(
+  { arbitrary: fc.integer({ min: 300, max: 2_500 }).map((n) => 'é'.repeat(n)), weight: 9 },
+  { arbitrary: fc.constant('é'.repeat(20_000)), weight: 1 },
+);
 const numberText = fc.oneof(
   fc.integer().map(String),
   fc.double({ noNaN: true, noDefaultInfinity: true }).map((d) => JSON.stringify(d)),
@@ -78,7 +85,7 @@ function encodeLoose(text: string): string {
 }
 
 const queryPart = fc.oneof(
-  fc.tuple(fc.oneof(specialKey, oddText, fc.constantFrom('a[b][c][d][e][f][g]', '__proto__[x]', 'constructor[prototype][x]', 'a[]', 'a[0]', 'a[999999]')), fc.oneof(oddText, hugeText, numberText)).map(
+  fc.tuple(fc.oneof(specialKey, oddText, fc.constantFrom('a[b][c][d][e][f][g]', '__proto__[x]', 'constructor[prototype][x]', 'a[]', 'a[0]', 'a[999999]')), fc.oneof(oddText, longUrlText, numberText)).map(
     ([k, v]) => `${encodeLoose(k)}=${encodeLoose(v)}`,
   ),
   fc.constantFrom('a', '=', '&&', 'a=1&a=2&a=3', '%', '%zz', '%E0%A4%A', 'a=%00', '__proto__=1', 'constructor[prototype][admin]=true'),
@@ -86,7 +93,7 @@ const queryPart = fc.oneof(
 const queryString = fc.array(queryPart, { minLength: 1, maxLength: 6 }).map((parts) => parts.join('&'));
 
 /** A path parameter that names nothing: an unknown UUID, or not an id at all. */
-const paramValue = fc.oneof(fc.uuid(), fc.uuid(), oddText, hugeText, fc.constantFrom('0', '-1', 'null', 'undefined', '..', '%2e%2e', 'true'));
+const paramValue = fc.oneof(fc.uuid(), fc.uuid(), oddText, longUrlText, fc.constantFrom('0', '-1', 'null', 'undefined', '..', '%2e%2e', 'true'));
 
 function keysOf(schema: unknown): string[] {
   let s = schema as { shape?: Record<string, unknown>; def?: { innerType?: unknown; in?: unknown; schema?: unknown } } | undefined;
