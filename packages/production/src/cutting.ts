@@ -302,3 +302,38 @@ export function doughForPieces(settings: RollSettings & { rings: number; holes: 
   const bestYield = piecesGrams === 0 ? ringYield : piecesGrams / ((settings.rings * disc) / ringYield + (extraHoles * settings.holeGrams) / holeYield);
   return { doughGrams, piecesGrams, extraHoles, bestYield };
 }
+
+/** The step (grams) of the one grid every planned dough weight sits on: a sixteenth of a ring or less. */
+export const DOUGH_GRID_GRAMS = 5;
+
+/**
+ * The least dough, on one fixed grid of `DOUGH_GRID_GRAMS`, that `rollAndCut`
+ * (with the first sheet's real fit) turns into every piece. The search starts
+ * below any dough that could work (the pieces' mass over the best yield of
+ * either cutter) and walks up the grid. Because the grid and the start do
+ * not depend on how the estimate of `doughForPieces` lands, one more piece
+ * never plans less dough: a ring in place of an extra hole is never easier
+ * to cut, and the search for it starts no lower. (Stepping up from the
+ * estimate instead could, by up to a piece's dough, where an extra hole's
+ * allowance is larger than a ring's.)
+ */
+export function leastDoughThatCuts(
+  settings: RollSettings & { rings: number; holes: number; firstSheet?: RollInput['firstSheet'] },
+): { need: DoughNeed; rolled: RollResult } {
+  const { firstSheet, rings, holes, ...roll } = settings;
+  const need = doughForPieces({ ...roll, rings, holes });
+  const cut = (doughGrams: number) => rollAndCut({ ...roll, doughGrams, ringsWanted: rings, extraHolesWanted: need.extraHoles, ...(firstSheet ? { firstSheet } : {}) });
+  if (need.piecesGrams === 0) return { need: { ...need, doughGrams: 0 }, rolled: cut(0) };
+  const share = cutShares(roll);
+  const bestYield = 1 - (1 - Math.max(share.ring, share.hole)) ** (roll.rerolls + 1);
+  const disc = roll.ringGrams + roll.holeGrams;
+  const most = need.doughGrams + 1000 * Math.max(1, Math.ceil(disc));
+  let doughGrams = Math.max(DOUGH_GRID_GRAMS, Math.floor(need.piecesGrams / bestYield / DOUGH_GRID_GRAMS) * DOUGH_GRID_GRAMS);
+  let rolled = cut(doughGrams);
+  while ((rolled.short.rings > 0 || rolled.short.holes > 0) && doughGrams < most) {
+    doughGrams += DOUGH_GRID_GRAMS;
+    rolled = cut(doughGrams);
+  }
+  if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: no dough on the grid cut every piece');
+  return { need: { ...need, doughGrams }, rolled };
+}

@@ -183,15 +183,30 @@ describe('properties (fast-check)', () => {
         expect(after.cuts.rings).toBeGreaterThanOrEqual(after.pieces.rings.toMake);
         expect(after.cuts.holes).toBeGreaterThanOrEqual(after.pieces.holes.toMake);
       }),
-      // KNOWN OPEN BUG: about 1 in 400 random order sets gets one piece's dough (~80 g) less after one
-      // more ring is ordered: the rolls' cut is not monotone near a roll's edge (the first sheet's fit
-      // and the extra holes), so the dough searched for the smaller order can overshoot. Until that is
-      // fixed the run in CI uses a fixed seed that passes; FC_SEED=random (and FC_RUNS=3000) shows it.
+      // A fixed seed keeps CI reproducible; FC_SEED=random (with FC_RUNS=3000) explores further.
       process.env.FC_SEED === 'random'
         ? { numRuns: Number(process.env.FC_RUNS ?? 100) }
         : { numRuns: Number(process.env.FC_RUNS ?? 100), seed: 20261202 },
     );
   }, 60_000);
+
+  it('one more ring in place of an extra hole never plans less dough (order sets random runs once found)', () => {
+    // Each pair: an order set, then the same with one more vanilla ring. Both once planned about 80 g
+    // less dough for the larger order, when the dough was stepped up from an estimate that allowed more
+    // for one extra hole than for a ring.
+    const sets = [
+      [[3, 49], [0, 48]],
+      [[3, 49], [0, 16], [0, 32]],
+      [[0, 42], [3, 45], [0, 59], [3, 57]],
+    ];
+    for (const set of sets) {
+      const orders = set.map(([i, q]) => order(i!, q!));
+      const before = planBake(baseInput(orders));
+      const after = planBake(baseInput([...orders, order(0, 1)]));
+      expect(after.dough.doughGrams, JSON.stringify(set)).toBeGreaterThanOrEqual(before.dough.doughGrams);
+      expect(after.cuts.short).toEqual({ rings: 0, holes: 0 });
+    }
+  });
 });
 
 const plan = planBake(baseInput(saturday));

@@ -15,7 +15,7 @@
 import { allergenCaution, distinctAllergens, HOME_FOOD_RULES_CAUTION, hotOilCautions } from './cautions.js';
 import { capacityFromEquipment, type Capacity } from './capacity.js';
 import { costBake, type BoxOffer, type CostPlan, type Prices } from './cost.js';
-import { cutsFromSheet, doughForPieces, rollAndCut, sheetCutShare, sheetOfDough, type RollResult, type RollStep } from './cutting.js';
+import { cutsFromSheet, leastDoughThatCuts, rollAndCut, sheetCutShare, sheetOfDough, type RollResult, type RollStep } from './cutting.js';
 import { ProductionInputError, requireFinite, requireNonNegative, requirePositive, requireWholeNonNegative } from './errors.js';
 import {
   eggEdibleGrams, scaleFormula, type EggClass, type EggCount, type Formula, type RouxPlan, type ScaledFormula, type StarterPlan,
@@ -548,16 +548,9 @@ export function planBake(input: PlanBakeInput): BakePlan {
   // Dough each lot needs, and its cuts.
   const lotList = [...lots.values()];
   const lotCuts = lotList.map((lot) => {
-    const need = doughForPieces({ ...rollSettings, rings: lot.rings, holes: lot.holes });
-    const cut = (doughGrams: number) => rollAndCut({ ...rollSettings, doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles, firstSheet });
-    let rolled = cut(need.doughGrams);
     // The first sheet may fit fewer rings than the cut share gives (a short sheet loses more at its ends):
-    // then more dough goes to the re-rolls, and the dough grows a piece at a time until every piece is cut.
-    for (let more = 0; (rolled.short.rings > 0 || rolled.short.holes > 0) && more < 1000; more++) {
-      need.doughGrams += Math.max(1, Math.ceil(mass.ringGrams + mass.holeGrams));
-      rolled = cut(need.doughGrams);
-    }
-    if (rolled.short.rings > 0 || rolled.short.holes > 0) throw new Error('internal: the planned dough did not cut every piece');
+    // then more dough goes to the re-rolls. The least dough on a fixed grid that cuts every piece.
+    const { need, rolled } = leastDoughThatCuts({ ...rollSettings, rings: lot.rings, holes: lot.holes, firstSheet });
     // Rings the cut share alone would have planned on the first roll, to say when the sheet held some back.
     const shareFirstRings = rollAndCut({ ...rollSettings, doughGrams: need.doughGrams, ringsWanted: lot.rings, extraHolesWanted: need.extraHoles }).rolls[0]?.rings ?? 0;
     return { lot, need, rolled, heldBack: shareFirstRings > (rolled.rolls[0]?.rings ?? 0) };
