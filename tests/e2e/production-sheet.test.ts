@@ -38,6 +38,7 @@ describe("the baker's night-before sheet", () => {
     await page.getByRole('link', { name: /^production sheet$/i }).first().click();
     await page.getByRole('heading', { name: /^Production sheet — / }).waitFor();
     await page.getByText(/Counts 1 order \(0 paid, 1 on hold\)/).waitFor();
+    expect(await page.getByRole('heading', { name: /^cost and margin$/i }).count(), 'costs are for the owner').toBe(0);
     for (const section of ['Counts', 'Dough', 'Milk roux', 'Starter build', 'Cutting', 'Frying', 'Glaze', 'Schedule']) {
       await page.getByRole('heading', { name: section, exact: true }).waitFor();
     }
@@ -71,6 +72,25 @@ describe("the baker's night-before sheet", () => {
 
     await page.getByRole('link', { name: /^production sheet$/i }).first().click();
     await page.getByRole('button', { name: /switch this bake day to version 2/i }).waitFor();
+  });
+
+  it("the owner sees what a piece costs in each dough, and the baker does not", async () => {
+    const { page } = await browser.fresh();
+    await page.goto(`${appUrl}/staff/`);
+    await page.getByRole('link', { name: /sign in/i }).or(page.getByRole('button', { name: /sign in/i })).first().click();
+    await chooseAccount(page, 'owner@fryline.test');
+    await page.goto(`${appUrl}/staff/production`);
+    await page.getByRole('heading', { name: /^Production sheet — / }).waitFor();
+    await page.getByRole('heading', { name: /^cost and margin$/i }).waitFor();
+    // the demo's flavoured doughs (lemon zest added to the base dough; a brown-butter formula of its own) each get a table
+    for (const name of [/^base dough, cost per piece$/i, /^lemon zest dough, cost per piece$/i, /^brown butter dough, cost per piece$/i]) {
+      const table = page.getByRole('table', { name });
+      await table.waitFor();
+      const plainRing = await table.getByRole('row', { name: /^plain/i }).getByRole('cell').first().innerText();
+      expect(plainRing).toMatch(/^\$\d+\.\d\d$/);
+      expect(Number(plainRing.slice(1))).toBeGreaterThan(0);
+    }
+    await page.close();
   });
 
   it('the counter cannot open the sheet', async () => {
