@@ -2,12 +2,14 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { JSDOM } from 'jsdom';
 import { formatCents } from '@fryline/schemas';
-import { AuditEntry, ShopSettings } from '../src/db/models/index.js';
+import { QueryTypes } from 'sequelize';
+import { AuditEntry, Order, ShopSettings } from '../src/db/models/index.js';
+import { database } from '../src/db/sequelize.js';
 import { countPhotoRows } from '../src/db/queries/menu-photos.js';
 import { context } from '../src/integrations/context.js';
 import { Browser, signIn, useStack } from './support.js';
 import { signedInAgent, type Agent } from './owner-helpers.js';
-import { deliverMail, halfDozen, openDay, orderAndPay } from './order-helpers.js';
+import { CARD_OK, deliverMail, halfDozen, openDay, orderAndPay, sessionIdOf } from './order-helpers.js';
 
 const stack = useStack();
 const SHOP = 'Lantern Lane Doughnuts'; // our own fictional business
@@ -118,5 +120,36 @@ describe('the shop’s currency', () => {
     expect(doc.querySelector('[data-mail="bill-total"]')!.textContent).toContain(euros);
     expect(mail.text).toContain(euros);
     expect(mail.text).not.toContain(formatCents(total, 'usd'));
+  });
+
+  it('an order keeps the currency it was priced in: paid in dollars after the shop switches to euros, it is paid (not flagged), and says dollars; the next order is charged in euros', async () => {
+    const customer = new Browser(stack.url);
+    await signIn(customer, 'customer@fryline.test');
+    const day = await openDay(stack);
+    const created = await customer.send('POST', '/api/orders', halfDozen(day));
+    expect(created.status).toBe(201);
+    expect(created.body.status).toBe('held');
+    const sessionId = sessionIdOf(created.body.checkoutUrl);
+    expect((await context().payments.checkout.sessions.retrieve(sessionId)).currency).toBe('usd');
+
+    await ShopSettings.update({ currency: 'eur' }, { where: { id: 1 } });
+    stack.payments.paySession(sessionId, CARD_OK);
+    await stack.payments.webhooksIdle();
+    const order = (await customer.getJson(`/api/orders/${created.body.id}`)).body;
+    expect(order.status).toBe('paid');
+    expect(order.currency).toBe('usd');
+    const flags = await database().query('SELECT 1 FROM payment_flags WHERE order_id = :id', { replacements: { id: created.body.id }, type: QueryTypes.SELECT });
+    expect(flags).toEqual([]);
+    const owner = new Browser(stack.url);
+    await signIn(owner, 'owner@fryline.test');
+    const listed = (await owner.getJson(`/api/staff/bake-days/${day.id}/orders`)).body as Array<{ id: string; currency: string }>;
+    expect(listed.find((o) => o.id === created.body.id)?.currency).toBe('usd');
+
+    const next = new Browser(stack.url);
+    await signIn(next, 'another.customer@fryline.test');
+    const second = await next.send('POST', '/api/orders', halfDozen(day));
+    expect(second.status).toBe(201);
+    expect((await Order.findByPk(second.body.id))!.currency).toBe('eur');
+    expect((await context().payments.checkout.sessions.retrieve(sessionIdOf(second.body.checkoutUrl))).currency).toBe('eur');
   });
 });

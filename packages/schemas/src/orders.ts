@@ -56,6 +56,8 @@ export const orderViewSchema = z.object({
   taxCents: z.number().int(),
   totalCents: z.number().int(),
   refundedCents: z.number().int(),
+  /** ISO 4217 (lower case): the currency the order was priced and paid in. */
+  currency: z.string(),
   pickupCode: z.string().nullable(),
   holdExpiresAt: z.string().nullable(),
   checkoutUrl: z.string().nullable(),
@@ -132,6 +134,8 @@ export const staffOrderViewSchema = z.object({
   pickupWindow: windowRefSchema,
   totalCents: z.number().int(),
   refundedCents: z.number().int(),
+  /** ISO 4217 (lower case): the currency the order was priced and paid in. */
+  currency: z.string(),
   paidAt: z.string().nullable(),
   rings: z.number().int(),
   holes: z.number().int(),

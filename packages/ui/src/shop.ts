@@ -20,9 +20,13 @@ export function useCurrency(): string {
   return useShop()?.currency ?? SHOP_CURRENCY;
 }
 
-/** Integer cents as text in the shop's currency, through the one formatter (formatCents in @fryline/schemas). */
-export function useMoney(): (cents: number) => string {
-  const currency = useCurrency();
+/**
+ * Integer cents as text through the one formatter (formatCents in @fryline/schemas): in
+ * `currency` when given (an order's own, which it was paid in), else in the shop's.
+ */
+export function useMoney(currency?: string): (cents: number) => string {
+  const shopCurrency = useCurrency();
+  currency ??= shopCurrency;
   return useCallback((cents: number) => formatCents(cents, currency), [currency]);
 }
 

@@ -13,6 +13,7 @@ const migrations = {
   '0030-hardening': () => import('./migrations/0030-hardening.js'),
   '0040-production-line': () => import('./migrations/0040-production-line.js'),
   '0050-shop-logo': () => import('./migrations/0050-shop-logo.js'),
+  '0060-order-currency': () => import('./migrations/0060-order-currency.js'),
 } as const;
 
 export function createMigrator(sequelize: Sequelize) {

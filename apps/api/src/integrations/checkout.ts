@@ -3,18 +3,17 @@ import { boxLabel, type BakeDayView, type Me } from '@fryline/schemas';
 import type { Order } from '../db/models/index.js';
 import { context } from './context.js';
 import type { CheckedOrder } from '../services/orders/order-rules.js';
-import { shopSettings } from '../services/shop/settings.js';
 
 /**
  * Opens hosted checkout for a held order. The idempotency key ties the
  * session to this order and this hold, so a retried request can't open a
- * second session. The session itself must live at least 30 minutes (the
+ * second session. It charges in the order's own currency. The session itself must live at least 30 minutes (the
  * payments service's minimum); the shorter hold is enforced by expiring the
  * session when the hold lapses.
  */
-export async function openCheckout(order: Pick<Order, 'id' | 'bakeDayId' | 'holdExpiresAt'>, user: Me, checked: CheckedOrder, day: BakeDayView, now: Date): Promise<Stripe.Checkout.Session> {
+export async function openCheckout(order: Pick<Order, 'id' | 'bakeDayId' | 'holdExpiresAt' | 'currency'>, user: Me, checked: CheckedOrder, day: BakeDayView, now: Date): Promise<Stripe.Checkout.Session> {
   const { config, payments } = context();
-  const { currency } = await shopSettings();
+  const { currency } = order;
   const lineItems: Stripe.Checkout.SessionCreateParams.LineItem[] = checked.boxes.map((box, i) => ({
     quantity: 1,
     price_data: {

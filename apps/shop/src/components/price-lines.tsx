@@ -6,11 +6,13 @@ interface PriceLinesProps {
   refundedCents?: number;
   /** The total's words: "Total" on a paid order, "To pay" before payment. */
   totalLabel?: string;
+  /** The order's own currency; the shop's when not given (a bill being built). */
+  currency?: string;
 }
 
 /** An order's bill, line by line (from orderBill, so the lines add up to the total). */
-export function PriceLines({ bill, refundedCents = 0, totalLabel = 'Total' }: PriceLinesProps) {
-  const money = useMoney();
+export function PriceLines({ bill, refundedCents = 0, totalLabel = 'Total', currency }: PriceLinesProps) {
+  const money = useMoney(currency);
   return (
     <dl className="grid grid-cols-[1fr_auto] gap-y-1 [&>div>dd]:pl-4" data-testid="price-lines">
       {bill.lines.map((line, index) => (

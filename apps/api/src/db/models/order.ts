@@ -21,6 +21,8 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare subtotalCents: number;
   declare taxCents: number;
   declare totalCents: number;
+  /** ISO 4217, lower case: the shop's currency when the order was written (filled in by the database). */
+  declare currency: CreationOptional<string>;
   declare refundedCents: CreationOptional<number>;
   declare feeCents: CreationOptional<number>;
   declare pickupCode: CreationOptional<string | null>;
@@ -58,6 +60,8 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         subtotalCents: { type: DataTypes.INTEGER, allowNull: false },
         taxCents: { type: DataTypes.INTEGER, allowNull: false },
         totalCents: { type: DataTypes.INTEGER, allowNull: false },
+        // NOT NULL in the database, whose trigger fills it in on insert
+        currency: { type: DataTypes.TEXT, allowNull: true },
         refundedCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         feeCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         pickupCode: { type: DataTypes.TEXT, allowNull: true },

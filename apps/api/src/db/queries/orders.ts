@@ -38,7 +38,7 @@ export async function piecesOrderedBy(userId: string, bakeDayId: string): Promis
 
 /** Why a hold was refused without an error: the customer's share, a window that is not (or no longer) the day's, or the pieces (sold out or closed at `now`). */
 export type HoldResult =
-  | { id: string; alreadyPieces: number }
+  | { id: string; currency: string; alreadyPieces: number }
   | { id: null; refused: 'limit' | 'window' | 'pieces'; alreadyPieces: number; remaining: { rings: number; holes: number } };
 
 /** The window's CHECK (orders_remaining >= 0) is the guard on its slots: a full window fails the statement with this constraint. */
@@ -61,7 +61,7 @@ export async function holdOrder(o: NewOrderRow & { now: Date }, transaction?: Tr
   const lines = o.boxes.flatMap((b, position) =>
     b.lines.map((l) => ({ position, menu_item_id: l.menuItemId, name: l.name, kind: l.kind, quantity: l.quantity, surcharge_cents: l.surchargeCents, allergens: l.allergens })),
   );
-  const [row] = await database().query<{ id: string | null; already: number; within_share: boolean; window_open: boolean; rings_remaining: number; holes_remaining: number }>(
+  const [row] = await database().query<{ id: string | null; currency: string | null; already: number; within_share: boolean; window_open: boolean; rings_remaining: number; holes_remaining: number }>(
     `WITH mine AS (
        SELECT COALESCE(SUM(rings + holes), 0)::int AS pieces FROM orders
         WHERE user_id = :userId AND bake_day_id = :bakeDayId AND status IN ${COUNTED}
@@ -81,7 +81,7 @@ export async function holdOrder(o: NewOrderRow & { now: Date }, transaction?: Tr
        INSERT INTO orders (user_id, bake_day_id, pickup_window_id, status, rings, holes, subtotal_cents, tax_cents, total_cents, hold_expires_at)
        SELECT :userId, cap.id, :pickupWindowId, 'held', :rings, :holes, :subtotalCents, :taxCents, :totalCents, :holdExpiresAt
          FROM cap
-       RETURNING id
+       RETURNING id, currency
      ), b AS (
        INSERT INTO order_boxes (order_id, position, size, pieces, price_cents)
        SELECT o.id, x.position, x.size, x.pieces, x.price_cents
@@ -96,7 +96,7 @@ export async function holdOrder(o: NewOrderRow & { now: Date }, transaction?: Tr
        INSERT INTO audit_log (actor_id, action, subject_type, subject_id, details)
        SELECT :userId, 'order.held', 'order', o.id::text, jsonb_build_object('rings', :rings, 'holes', :holes) FROM o
      )
-     SELECT (SELECT id FROM o) AS id, mine.pieces AS already, mine.pieces + :rings + :holes <= :maxPieces AS within_share,
+     SELECT (SELECT id FROM o) AS id, (SELECT currency FROM o) AS currency, mine.pieces AS already, mine.pieces + :rings + :holes <= :maxPieces AS within_share,
             EXISTS (SELECT 1 FROM pickup_windows w WHERE w.id = :pickupWindowId AND w.bake_day_id = :bakeDayId AND w.removed_at IS NULL) AS window_open,
             d.rings_remaining, d.holes_remaining
        FROM mine LEFT JOIN bake_days d ON d.id = :bakeDayId`,
@@ -107,7 +107,7 @@ export async function holdOrder(o: NewOrderRow & { now: Date }, transaction?: Tr
     },
   );
   const already = row?.already ?? 0;
-  if (row?.id) return { id: row.id, alreadyPieces: already };
+  if (row?.id) return { id: row.id, currency: row.currency!, alreadyPieces: already };
   const refused = row?.within_share === false ? 'limit' : row?.window_open === false ? 'window' : 'pieces';
   return { id: null, refused, alreadyPieces: already, remaining: { rings: row?.rings_remaining ?? 0, holes: row?.holes_remaining ?? 0 } };
 }

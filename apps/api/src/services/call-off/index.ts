@@ -123,8 +123,8 @@ async function tellPerson(job: JobRow, userId: string, transaction: Transaction)
     shopSettings(transaction),
   ]);
   if (!user || !day) return;
-  const [money] = await database().query<{ orders: number; refunded: number }>(
-    `SELECT count(DISTINCT o.id)::int AS orders, COALESCE(sum(r.amount_cents), 0)::int AS refunded
+  const [money] = await database().query<{ orders: number; refunded: number; currency: string | null }>(
+    `SELECT count(DISTINCT o.id)::int AS orders, COALESCE(sum(r.amount_cents), 0)::int AS refunded, min(o.currency) AS currency
        FROM orders o LEFT JOIN refunds r ON r.order_id = o.id AND r.reason = :note
       WHERE o.bake_day_id = :dayId AND o.user_id = :userId AND o.paid_at IS NOT NULL`,
     { replacements: { dayId: day.id, userId, note: CALL_OFF_NOTE }, type: QueryTypes.SELECT, transaction },
@@ -133,7 +133,7 @@ async function tellPerson(job: JobRow, userId: string, transaction: Transaction)
   const reason = String((job.payload as { reason?: string }).reason ?? '');
   const what =
     money && money.refunded > 0
-      ? `We have refunded ${formatCents(money.refunded, settings.currency)} to your card in full. Refunds usually take a few days to show.`
+      ? `We have refunded ${formatCents(money.refunded, money.currency ?? settings.currency)} to your card in full. Refunds usually take a few days to show.`
       : money && money.orders > 0
         ? 'Your order was already settled, so nothing more is due.'
         : 'You were on the waitlist or had a box on hold: nothing was charged, and there is nothing you need to do.';

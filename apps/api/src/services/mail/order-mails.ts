@@ -39,7 +39,8 @@ async function load(orderId: string, transaction: Transaction): Promise<Loaded> 
     day: order.bakeDay!,
     window: order.pickupWindow!,
     boxes,
-    shop: mailShopOf(settings),
+    // the order's amounts in the currency it was paid in, whatever the shop charges in now
+    shop: { ...mailShopOf(settings), currency: order.currency },
     url: `${context().config.publicUrl}/orders/${order.id}`,
   };
 }

@@ -42,6 +42,7 @@ export async function toOrderView(order: Order, now: Date): Promise<OrderDetail>
     taxCents: order.taxCents,
     totalCents: order.totalCents,
     refundedCents: order.refundedCents,
+    currency: order.currency,
     pickupCode: order.status === 'held' || order.status === 'expired' ? null : order.pickupCode ?? null,
     holdExpiresAt: order.status === 'held' ? order.holdExpiresAt?.toISOString() ?? null : null,
     checkoutUrl: null,
@@ -109,10 +110,10 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     maxPieces: maxPiecesPerCustomer,
     now,
   };
-  let orderId: string;
+  let held: { id: string; currency: string };
   try {
     // the usual order is one statement; a claimed waitlist offer first gives its set-aside pieces back, in the same transaction
-    orderId = input.claimToken
+    held = input.claimToken
       ? await database().transaction(async (transaction) => {
           await claimOffer(user, day.id, input.claimToken!, transaction, now);
           return heldOrRefused(await holdOrder(hold, transaction), maxPiecesPerCustomer);
@@ -128,9 +129,10 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
     }
     throw err;
   }
+  const orderId = held.id;
 
   try {
-    const session = await openCheckout({ id: orderId, bakeDayId: day.id, holdExpiresAt }, user, checked, day, now);
+    const session = await openCheckout({ id: orderId, bakeDayId: day.id, holdExpiresAt, currency: held.currency }, user, checked, day, now);
     await saveCheckoutSession(orderId, session.id);
     return { id: orderId, status: 'held', totalCents: checked.price.totalCents, holdExpiresAt: holdExpiresAt.toISOString(), checkoutUrl: session.url! };
   } catch (err) {
@@ -142,9 +144,9 @@ export async function createOrder(user: Me, input: CreateOrderInput & { claimTok
   }
 }
 
-/** The new order's id, or the refusal as the customer should hear it (nothing was written). */
-function heldOrRefused(result: HoldResult, maxPieces: number): string {
-  if (result.id !== null) return result.id;
+/** The new order's id and currency, or the refusal as the customer should hear it (nothing was written). */
+function heldOrRefused(result: HoldResult, maxPieces: number): { id: string; currency: string } {
+  if (result.id !== null) return { id: result.id, currency: result.currency };
   if (result.refused === 'limit') throw overLimit(maxPieces, result.alreadyPieces);
   if (result.refused === 'window') {
     throw new AppError('invalid', 'pickupWindowId: This pickup window is not on this bake day', 400, { fields: { pickupWindowId: 'This pickup window is not on this bake day' } });

@@ -2,7 +2,6 @@ import { Op } from 'sequelize';
 import { orderBill, type PricedOrder, type StaffOrderView } from '@fryline/schemas';
 import { BakeDay, Order, OrderBox, OrderLine, PickupWindow, User } from '../../db/models/index.js';
 import { notFound } from '../../lib/app-error.js';
-import { shopSettings } from '../shop/settings.js';
 
 /** An order row with its boxes and lines, as orderBill reads it. */
 export function billOf(order: Order): PricedOrder {
@@ -27,7 +26,6 @@ export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderVi
       { model: OrderBox, as: 'boxes', include: [{ model: OrderLine, as: 'lines' }] },
     ],
   });
-  const { currency } = await shopSettings();
   return orders
     .map((o) => ({
       id: o.id,
@@ -37,13 +35,14 @@ export async function listBakeDayOrders(bakeDayId: string): Promise<StaffOrderVi
       pickupWindow: { id: o.pickupWindow!.id, startsAt: o.pickupWindow!.startsAt.toISOString(), endsAt: o.pickupWindow!.endsAt.toISOString() },
       totalCents: o.totalCents,
       refundedCents: o.refundedCents,
+      currency: o.currency,
       paidAt: o.paidAt?.toISOString() ?? null,
       rings: o.rings,
       holes: o.holes,
       boxes: [...(o.boxes ?? [])]
         .sort((a, b) => a.position - b.position)
         .map((b) => ({ size: b.size, items: (b.lines ?? []).map((l) => ({ name: l.name, quantity: l.quantity })) })),
-      priceLines: orderBill(billOf(o), currency).lines,
+      priceLines: orderBill(billOf(o), o.currency).lines,
     }))
     .sort((a, b) => a.pickupWindow.startsAt.localeCompare(b.pickupWindow.startsAt) || a.customer.name.localeCompare(b.customer.name));
 }

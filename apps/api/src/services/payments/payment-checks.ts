@@ -29,7 +29,8 @@ export function retrieveSession(id: string): Promise<Stripe.Checkout.Session> {
  * saving its id) is accepted only when the session names the order as its
  * client reference as well as in its metadata.
  */
-export function sessionProblem(session: Stripe.Checkout.Session, order: Order, currency: string): string | null {
+export function sessionProblem(session: Stripe.Checkout.Session, order: Order): string | null {
+  const { currency } = order;
   if (session.payment_status !== 'paid') return null; // not a payment (yet); nothing to accept or refund
   if (order.checkoutSessionId ? session.id !== order.checkoutSessionId : session.client_reference_id !== order.id) {
     return `session ${session.id} is not the order's checkout session (${order.checkoutSessionId ?? 'none recorded'})`;
@@ -37,7 +38,7 @@ export function sessionProblem(session: Stripe.Checkout.Session, order: Order, c
   if (session.amount_total !== order.totalCents) {
     return `paid ${formatCents(session.amount_total ?? 0, session.currency ?? currency)} but the order's total is ${formatCents(order.totalCents, currency)}`;
   }
-  if ((session.currency ?? '').toLowerCase() !== currency.toLowerCase()) return `paid in ${session.currency} but the shop charges in ${currency}`;
+  if ((session.currency ?? '').toLowerCase() !== currency.toLowerCase()) return `paid in ${session.currency} but the order is priced in ${currency}`;
   return null;
 }
 

@@ -10,7 +10,6 @@ import { newPickupCode } from '../orders/pickup-codes.js';
 import { queueConfirmation, queueLateRefundApology } from '../mail/order-mails.js';
 import { afterCommitting, recordRefundIntent, refundableCents, runAfterCommit, sendAfterCommit } from './refund-intents.js';
 import { flagMismatch, intentIdOf, orderIdOfSession, refundFlagged, retrieveSession, sessionProblem } from './payment-checks.js';
-import { shopSettings } from '../shop/settings.js';
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { audit } from '../audit/audit.js';
 import { logger } from '../../lib/logger.js';
@@ -98,8 +97,7 @@ async function markPaid(order: Order, paymentIntentId: string | null, holdsCapac
 async function sessionPaid(session: Stripe.Checkout.Session, transaction: Transaction, now: Date) {
   const order = await lockOrder(orderIdOfSession(session), transaction);
   if (session.payment_status !== 'paid') return { orderId: order?.id ?? null, outcome: 'not paid yet' };
-  const { currency } = await shopSettings(transaction);
-  const problem = order ? sessionProblem(session, order, currency) : `session ${session.id} names no order of ours`;
+  const problem = order ? sessionProblem(session, order) : `session ${session.id} names no order of ours`;
   if (problem) {
     // never marks the order paid: flagged for the owner, the money refunded in full
     const flagId = await flagMismatch(session, order, problem, transaction);

@@ -10,7 +10,6 @@ import { describePaymentsError, isDefinitiveRefusal, paymentsError } from './err
 import { offerFreedCapacity } from '../waitlist/waitlist.js';
 import { queueRefundNotice } from '../mail/order-mails.js';
 import { audit } from '../audit/audit.js';
-import { shopSettings } from '../shop/settings.js';
 
 // Refunds exactly once: a refund is first written as an intent ('pending',
 // with the amount, the reason and the key the payments service will see),
@@ -48,7 +47,7 @@ export async function recordRefundIntent(
 ): Promise<Refund> {
   const left = await refundableCents(order, transaction);
   if (amountCents > left) {
-    const most = formatCents(Math.max(0, left), (await shopSettings(transaction)).currency);
+    const most = formatCents(Math.max(0, left), order.currency);
     throw new AppError('over_refund', `At most ${most} can still be refunded on this order`, 400, {
       fields: { amountCents: `At most ${most} can still be refunded` },
     });

@@ -8,7 +8,7 @@ import { formatMoment } from '@fryline/ui/format';
 
 /** "Cancel order" with a confirmation; for a paid order that means a refund. */
 export function CancelOrder({ order, onCancelled }: { order: OrderView; onCancelled?: () => void }) {
-  const money = useMoney();
+  const money = useMoney(order.currency);
   const [open, setOpen] = useState(false);
   const cancel = useCancelOrder();
   const toast = useToast();

@@ -13,8 +13,8 @@ interface ExistingHoldProps {
 
 /** Shown when a new order is refused because an unpaid one is still on hold. */
 export function ExistingHold({ orderId, onResolved }: ExistingHoldProps) {
-  const money = useMoney();
   const order = useQuery(orderQueries.detail(orderId));
+  const money = useMoney(order.data?.currency);
   const summary = order.data
     ? ` (${formatDate(order.data.bakeDay.date, order.data.bakeDay.timeZone)}, ${money(order.data.totalCents)})`
     : '';

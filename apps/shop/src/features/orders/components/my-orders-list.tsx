@@ -2,15 +2,14 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { orderQueries } from '../api/order-queries';
 import { isApiError } from '@fryline/ui/api-client';
-import { boxLabel } from '@fryline/schemas';
+import { boxLabel, formatCents } from '@fryline/schemas';
 import { formatClockRange, formatDate } from '@fryline/ui/format';
 import { signInUrl } from '../../../lib/sign-in';
-import { ErrorState, LoadingState, Notice, useMoney } from '@fryline/ui';
+import { ErrorState, LoadingState, Notice } from '@fryline/ui';
 import { OrderStatusBadge } from './order-status';
 
 /** The signed-in customer's orders, newest first. */
 export function MyOrdersList() {
-  const money = useMoney();
   const orders = useQuery(orderQueries.list());
 
   if (orders.isPending) return <LoadingState label="Loading your orders…" />;
@@ -57,7 +56,7 @@ export function MyOrdersList() {
                 {order.bakeDay.place} · {formatClockRange(order.pickupWindow.startsAt, order.pickupWindow.endsAt, tz)}
               </span>
               <span className="text-sm text-muted">
-                {boxes} · {money(order.totalCents)}
+                {boxes} · {formatCents(order.totalCents, order.currency)}
                 {order.pickupCode && order.status === 'paid' && <> · code {order.pickupCode}</>}
               </span>
             </Link>

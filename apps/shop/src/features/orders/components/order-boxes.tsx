@@ -1,14 +1,12 @@
 import { boxLabel, orderBill, type OrderView } from '@fryline/schemas';
 import { PriceLines } from '../../../components/price-lines';
 import { listWords } from '@fryline/ui/format';
-import { useCurrency } from '@fryline/ui';
 import { allergensOf, AllergenList } from '../../../components/allergen-list';
 
 /** What is in the order, what it cost, and its allergens. */
 export function OrderBoxes({ order }: { order: OrderView }) {
   const allergens = allergensOf(order.boxes.flatMap((box) => box.items));
-  const currency = useCurrency();
-  const bill = orderBill(order, currency);
+  const bill = orderBill(order, order.currency);
   return (
     <section className="card" aria-labelledby="boxes-heading">
       <h2 id="boxes-heading" className="text-lg">
@@ -31,7 +29,7 @@ export function OrderBoxes({ order }: { order: OrderView }) {
         ))}
       </ul>
       <h3 className="mt-2 border-t border-line pt-3 text-base">What you pay</h3>
-      <PriceLines bill={bill} refundedCents={order.refundedCents} />
+      <PriceLines bill={bill} refundedCents={order.refundedCents} currency={order.currency} />
       {allergens.length > 0 && (
         <div className="mt-3 border-t border-line pt-3">
           <AllergenList allergens={allergens} label="This order contains" />

@@ -27,7 +27,6 @@ interface OrderDetailProps {
  * the redirect alone proves nothing.
  */
 export function OrderDetail({ id, renderMove }: OrderDetailProps) {
-  const money = useMoney();
   const [params, setParams] = useSearchParams();
   const returnedFromPayment = params.get('paid') === '1';
   const paymentCancelled = params.get('payment') === 'cancelled';
@@ -40,6 +39,7 @@ export function OrderDetail({ id, renderMove }: OrderDetailProps) {
       returnedFromPayment && !timedOut && query.state.data?.status === 'held' ? site.paymentPollMs : false,
   });
   const status = order.data?.status;
+  const money = useMoney(order.data?.currency);
 
   useEffect(() => {
     if (!returnedFromPayment || timedOut) return;

@@ -13,7 +13,7 @@ interface OrderCardProps {
 
 /** One order: who, pickup code, status, what is in the boxes, and the money. */
 export function OrderCard({ order, onRefund }: OrderCardProps) {
-  const money = useMoney();
+  const money = useMoney(order.currency);
   const headingId = `order-${order.id}`;
   const left = refundableCents(order);
   return (

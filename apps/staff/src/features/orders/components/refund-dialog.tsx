@@ -5,7 +5,7 @@ import { centsToInput, currencyName, currencySymbol, parseCents, type RefundRequ
 import { isApiError, putFieldErrors } from '@fryline/ui/api-client';
 import { useRefundOrder } from '../api/use-refund-order';
 import { refundableCents, refundFormDefaults, refundFormSchema, type RefundFormValues } from '../model/refund-form';
-import { ModalDialog, useCurrency, useMoney } from '@fryline/ui';
+import { ModalDialog, useMoney } from '@fryline/ui';
 
 interface RefundDialogProps {
   /** The order as it was when the dialog opened. */
@@ -24,8 +24,9 @@ function FieldError({ id, message }: { id: string; message: string | undefined }
 
 /** Refund all or part of what is left on a paid order, with a reason. */
 export function RefundDialog({ order, onClose, onRefunded }: RefundDialogProps) {
-  const money = useMoney();
-  const currency = useCurrency();
+  // the order's own currency: what it was paid in, and so what it is refunded in
+  const money = useMoney(order.currency);
+  const currency = order.currency;
   const left = refundableCents(order);
   // One key for everything sent from this dialog: a double click or a retry refunds once.
   const [requestKey] = useState(() => crypto.randomUUID());

@@ -14,6 +14,7 @@ function order(id: string, over: Partial<StaffOrderView> = {}): StaffOrderView {
     pickupWindow: early,
     totalCents: 2400,
     refundedCents: 0,
+    currency: 'usd',
     paidAt: '2026-06-10T15:00:00Z',
     rings: 12,
     holes: 0,
