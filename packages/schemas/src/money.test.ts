@@ -48,6 +48,27 @@ describe('parseMoney: typed amounts into integer cents (ISO 4217: USD has 2 deci
     expect(parseMoney('99999999999999999')).toEqual({ ok: false, message: 'That amount is too large' });
   });
 
+  it.each(['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'])(
+    'reads back what formatCents writes in %s, with its sign or its ISO 4217 code (Intl.NumberFormat, en-US, ECMA-402)',
+    (currency) => {
+      expect(parseMoney(formatCents(123456, currency), currency)).toEqual({ ok: true, cents: 123456 });
+      expect(parseMoney(`${currency.toUpperCase()} 12.50`, currency)).toEqual({ ok: true, cents: 1250 });
+      expect(parseMoney('12.50', currency)).toEqual({ ok: true, cents: 1250 });
+    },
+  );
+
+  it("refuses another currency's sign when the currency is known, rather than reading €12 as $12", () => {
+    expect(parseMoney('€12', 'usd')).toEqual({ ok: false, message: 'Amounts here are in dollars: write it as 12.50 or $12.50' });
+    expect(parseMoney('CA$5', 'usd').ok).toBe(false);
+    expect(parseMoney('£3', 'eur').ok).toBe(false);
+    // a bare "$" is every dollar's sign (common practice, no source)
+    expect(parseMoney('$5', 'cad')).toEqual({ ok: true, cents: 500 });
+    expect(parseMoney('$5', 'nzd')).toEqual({ ok: true, cents: 500 });
+    // not knowing the currency, any sign a shop may charge in is read
+    expect(parseMoney('£3')).toEqual({ ok: true, cents: 300 });
+    expect(parseMoney('¥3').ok).toBe(false);
+  });
+
   it('drives a form field: a string in, cents out, the refusal as the field message', () => {
     expect(moneyTextSchema.parse('$1,234.56')).toBe(123456);
     const bad = moneyTextSchema.safeParse('12.345');

@@ -13,31 +13,49 @@ export const SHOP_CURRENCY = 'USD';
 export { roundHalfUp } from '@fryline/production';
 
 /**
- * What an amount may look like when typed: an optional currency sign, whole
- * units either plain ("1234") or with correct thousands commas ("1,234"),
- * then at most two decimals ("1,234.56", "12.5", ".75", "12."). Nothing else:
- * no minus sign, no third decimal, no misplaced comma, no letters.
+ * What an amount may look like when typed: an optional currency sign (as
+ * formatCents writes it, "$", "€", "£", "CA$", or the ISO code, "EUR 12"),
+ * whole units either plain ("1234") or with correct thousands commas
+ * ("1,234"), then at most two decimals ("1,234.56", "12.5", ".75", "12.").
+ * Nothing else: no minus sign, no third decimal, no misplaced comma, no letters.
  */
-const TYPED_AMOUNT = /^\$?\s*(\d{1,3}(?:,\d{3})+|\d+)?(?:\.(\d{0,2}))?$/;
+const TYPED_AMOUNT = /^(?:([A-Za-z]{0,3}\$|[€£]|[A-Za-z]{3}(?=\s|\d))\s*)?(\d{1,3}(?:,\d{3})+|\d+)?(?:\.(\d{0,2}))?$/;
+
+/** The currencies a shop may take (ISO 4217, lower case); shopCurrencies in shop-settings.ts lists the same. */
+const SIGNED_CURRENCIES = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'];
 
 /** The message for anything that is not an amount. */
 export const MONEY_FORMAT_MESSAGE = 'Enter an amount like 12.50 or $1,234.56 (at most two decimals)';
 
 export type MoneyParseResult = { ok: true; cents: number } | { ok: false; message: string };
 
+/** Whether `sign` (as typed) is `currency`'s: its symbol or its code, either case; a bare "$" for any dollar. */
+function signOf(sign: string, currency: string): boolean {
+  const typed = sign.toUpperCase();
+  const symbol = currencySymbol(currency).toUpperCase();
+  return typed === currency.toUpperCase() || typed === symbol || (typed === '$' && symbol.endsWith('$'));
+}
+
 /**
  * Reads a typed amount into integer cents, working on the digits (never a
  * float), so "19.99" is exactly 1999. Refuses rather than guesses: a refusal
- * carries a message a person can act on, and the result is never NaN.
+ * carries a message a person can act on, and the result is never NaN. With
+ * `currency` (the shop's, or the order's), a sign must be that currency's:
+ * "€12" in a shop that charges dollars is refused, not read as $12; without
+ * it, the sign of any currency a shop may take is accepted.
  */
-export function parseMoney(text: string): MoneyParseResult {
+export function parseMoney(text: string, currency?: string): MoneyParseResult {
   const match = TYPED_AMOUNT.exec(text.trim());
-  const whole = match?.[1];
-  const fraction = match?.[2] ?? '';
+  const sign = match?.[1];
+  const whole = match?.[2];
+  const fraction = match?.[3] ?? '';
   if (!match || (whole === undefined && fraction === '')) {
     if (/\.\d{3,}\s*$/.test(text)) return { ok: false, message: 'At most two decimals (whole cents)' };
     if (/^\s*[-−]/.test(text)) return { ok: false, message: 'The amount can’t be negative' };
-    return { ok: false, message: MONEY_FORMAT_MESSAGE };
+    return { ok: false, message: currency ? `Enter an amount like 12.50 or ${formatCents(123456, currency)} (at most two decimals)` : MONEY_FORMAT_MESSAGE };
+  }
+  if (sign !== undefined && !(currency ? signOf(sign, currency) : SIGNED_CURRENCIES.some((c) => signOf(sign, c)))) {
+    return { ok: false, message: currency ? `Amounts here are in ${currencyName(currency)}: write it as 12.50 or ${formatCents(1250, currency)}` : MONEY_FORMAT_MESSAGE };
   }
   const cents = Number((whole ?? '0').replace(/,/g, '')) * 100 + Number(fraction.padEnd(2, '0'));
   if (!Number.isSafeInteger(cents)) return { ok: false, message: 'That amount is too large' };
@@ -45,8 +63,8 @@ export function parseMoney(text: string): MoneyParseResult {
 }
 
 /** The cents in a typed amount, or null when it is not one (see parseMoney for the reason). */
-export function parseCents(text: string): number | null {
-  const result = parseMoney(text);
+export function parseCents(text: string, currency?: string): number | null {
+  const result = parseMoney(text, currency);
   return result.ok ? result.cents : null;
 }
 

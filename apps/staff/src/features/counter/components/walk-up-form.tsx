@@ -29,7 +29,7 @@ export function WalkUpForm({ bakeDayId, surplus }: { bakeDayId: string; surplus:
       onSubmit={(e) => {
         e.preventDefault();
         setMessage(null);
-        const typed = parseMoney(amount);
+        const typed = parseMoney(amount, currency);
         if (chosen.length === 0) return setProblem('Add at least one doughnut.');
         if (!typed.ok) return setProblem(typed.message);
         const cents = typed.cents;

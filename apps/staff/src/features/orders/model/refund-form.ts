@@ -34,7 +34,7 @@ export function refundFormSchema(leftCents: number, currency?: string) {
     .object({
       mode: z.enum(['full', 'part']),
       amount: z.string().transform((text, ctx) => {
-        const cents = parseCents(text);
+        const cents = parseCents(text, currency);
         const message =
           cents === null
             ? 'Write the amount as a number, like 4.50'

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { boxLabel, centsToInput, parseMoney, type BakeDayEditView, type BoxSize } from '@fryline/schemas';
-import { FieldShell, LoadingState, useCurrencySign } from '@fryline/ui';
+import { FieldShell, LoadingState, useCurrency, useCurrencySign } from '@fryline/ui';
 import { menuItemQueries } from '../../api/menu-item-queries';
 import { SectionForm, useServerReset } from './section-form';
 
@@ -9,6 +9,7 @@ import { SectionForm, useServerReset } from './section-form';
 /** What this day sells and the box prices. Orders already paid keep what they paid. */
 export function MenuForm({ day }: { day: BakeDayEditView }) {
   const sign = useCurrencySign();
+  const currency = useCurrency();
   const menu = useQuery(menuItemQueries.all());
   const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
   const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToInput(b.priceCents)])) as Partial<Record<BoxSize, string>>;
@@ -22,7 +23,7 @@ export function MenuForm({ day }: { day: BakeDayEditView }) {
     if (chosen.size === 0) return 'Keep at least one item on the menu.';
     const boxes = [];
     for (const box of day.boxes) {
-      const price = parseMoney(prices[box.size] ?? '');
+      const price = parseMoney(prices[box.size] ?? '', currency);
       if (!price.ok) return `${boxLabel(box.size)}: ${price.message}.`;
       boxes.push({ size: box.size, pieces: box.pieces, priceCents: price.cents });
     }
