@@ -114,7 +114,14 @@ export function createApp(config: Config) {
   );
 
   const sessionPool = createPool(config.DATABASE_URL, 5, 'session store', { asyncCommit: true });
+  // Sessions only where they are used: the API and sign-in. The apps' files and pages
+  // never read one, and must not re-send a session cookie (rolling): a file fetched
+  // with the cookie from before a sign-in (the staff app's service worker fetches
+  // its files in the background) would otherwise answer with that old cookie after
+  // the sign-in had set the new one, and sign the person out again.
+  const SESSION_PATHS = ['/api', '/auth'];
   app.use(
+    SESSION_PATHS,
     session({
       name: SESSION_COOKIE,
       secret: config.SESSION_SECRET,
@@ -138,8 +145,8 @@ export function createApp(config: Config) {
     }),
   );
   const passport = configurePassport(config);
-  app.use(passport.session());
-  app.use(csrfProtection(config.SESSION_SECRET));
+  app.use(SESSION_PATHS, passport.session());
+  app.use(SESSION_PATHS, csrfProtection(config.SESSION_SECRET));
 
   // counted in PostgreSQL, so every API process shares the counts
   const limits = rateLimits(config, sessionPool);

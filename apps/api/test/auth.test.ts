@@ -45,6 +45,28 @@ describe('sign-in through the provider (OAuth 2.0 authorization code + PKCE, RFC
     expect(browser.cookieHeader()).not.toBe(before);
   });
 
+  it("pages and files answer without a session cookie, so one answered late can't undo a sign-in", async () => {
+    // The staff app's service worker fetches its files in the background while the person signs in.
+    // A file asked for with the sign-in's starting cookie and answered after the sign-in had set the
+    // new one would, if it re-sent the old cookie (sessions roll), sign the person out again.
+    const browser = new Browser(stack.url);
+    await browser.fetch('/auth/google?returnTo=%2Fstaff%2F');
+    const startCookie = browser.cookieHeader();
+    expect(startCookie).toMatch(/^fryline\.sid=/);
+    for (const path of ['/staff/', '/staff/pickups', '/staff/index.html', '/', '/orders']) {
+      const res = await fetch(`${stack.url}${path}`, { headers: { cookie: startCookie, accept: 'text/html' }, redirect: 'manual' });
+      expect(res.headers.getSetCookie(), path).toEqual([]);
+    }
+    await signIn(browser, 'counter@fryline.test', { returnTo: '/staff/' });
+    expect(browser.cookieHeader()).not.toBe(startCookie);
+    const page = await fetch(`${stack.url}/staff/`, { headers: { cookie: browser.cookieHeader(), accept: 'text/html' } });
+    expect(page.headers.getSetCookie()).toEqual([]);
+    // the API still rolls the signed-in session forward
+    const me = await browser.fetch('/api/me');
+    expect(me.status).toBe(200);
+    expect(me.headers.getSetCookie().some((c) => c.startsWith('fryline.sid='))).toBe(true);
+  });
+
   it('makes an unknown address a new customer, keyed by sub, and queues a welcome e-mail', async () => {
     const browser = new Browser(stack.url);
     await signIn(browser, 'newcomer@example.test');
