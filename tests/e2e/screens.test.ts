@@ -122,6 +122,10 @@ async function tabTo(page: Page, target: ReturnType<Page['getByRole']>, maxTabs 
  * under 9 pt (12 CSS px; CSS Values 4: 1 pt = 4/3 px), so it reads at arm's length. Call it in print media.
  */
 async function expectOnePrintedPage(page: Page, name: string, atMost = 1) {
+  // print with the sheet's own fonts: a fallback font, while one is still loading on a busy machine, sets wider
+  await page.evaluate(async () => {
+    await document.fonts.ready;
+  });
   for (const [format, size] of [['Letter', [612, 792]], ['A4', [595.28, 841.89]]] as const) {
     const file = await page.pdf({ path: path.join(shotsDir, `${name}-${format.toLowerCase()}.pdf`), format, printBackground: true });
     const doc = await PDFDocument.load(file);
