@@ -21,8 +21,8 @@ export { roundHalfUp } from '@fryline/production';
  */
 const TYPED_AMOUNT = /^(?:([A-Za-z]{0,3}\$|[€£]|[A-Za-z]{3}(?=\s|\d))\s*)?(\d{1,3}(?:,\d{3})+|\d+)?(?:\.(\d{0,2}))?$/;
 
-/** The currencies a shop may take (ISO 4217, lower case); shopCurrencies in shop-settings.ts lists the same. */
-const SIGNED_CURRENCIES = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'];
+/** Currencies the shop can take payment in (ISO 4217, lower case as the payment provider writes them). */
+export const shopCurrencies = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'] as const;
 
 /** The message for anything that is not an amount. */
 export const MONEY_FORMAT_MESSAGE = 'Enter an amount like 12.50 or $1,234.56 (at most two decimals)';
@@ -54,7 +54,7 @@ export function parseMoney(text: string, currency?: string): MoneyParseResult {
     if (/^\s*[-−]/.test(text)) return { ok: false, message: 'The amount can’t be negative' };
     return { ok: false, message: currency ? `Enter an amount like 12.50 or ${formatCents(123456, currency)} (at most two decimals)` : MONEY_FORMAT_MESSAGE };
   }
-  if (sign !== undefined && !(currency ? signOf(sign, currency) : SIGNED_CURRENCIES.some((c) => signOf(sign, c)))) {
+  if (sign !== undefined && !(currency ? signOf(sign, currency) : shopCurrencies.some((c) => signOf(sign, c)))) {
     return { ok: false, message: currency ? `Amounts here are in ${currencyName(currency)}: write it as 12.50 or ${formatCents(1250, currency)}` : MONEY_FORMAT_MESSAGE };
   }
   const cents = Number((whole ?? '0').replace(/,/g, '')) * 100 + Number(fraction.padEnd(2, '0'));

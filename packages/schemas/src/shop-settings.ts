@@ -1,12 +1,11 @@
 import { z } from 'zod';
 import { taxSettingSchema } from './bake-days.js';
 import { menuPhotoViewSchema } from './menu-photos.js';
+import { shopCurrencies } from './money.js';
 import { shopInfoSchema } from './shop.js';
 
 // What the owner sets for the whole shop.
 
-/** Currencies the shop can take payment in (ISO 4217, lower case as the payment provider writes them). */
-export const shopCurrencies = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'] as const;
 
 /** True when the runtime knows this IANA time zone name. */
 export function isTimeZone(name: string): boolean {

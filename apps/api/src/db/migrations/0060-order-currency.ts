@@ -8,14 +8,15 @@ import type { QueryInterface } from 'sequelize';
 // it is written (a trigger, so every way of writing an order does).
 export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.sequelize.query(`
+    CREATE FUNCTION shop_currency() RETURNS text LANGUAGE sql STABLE AS $$
+      SELECT COALESCE((SELECT lower(currency) FROM shop_settings ORDER BY id LIMIT 1), 'usd')
+    $$;
     ALTER TABLE orders ADD COLUMN currency text CHECK (currency ~ '^[a-z]{3}$');
-    UPDATE orders SET currency = COALESCE((SELECT lower(currency) FROM shop_settings ORDER BY id LIMIT 1), 'usd');
+    UPDATE orders SET currency = shop_currency();
     ALTER TABLE orders ALTER COLUMN currency SET NOT NULL;
     CREATE FUNCTION orders_take_shop_currency() RETURNS trigger LANGUAGE plpgsql AS $$
     BEGIN
-      IF NEW.currency IS NULL THEN
-        NEW.currency := COALESCE((SELECT lower(currency) FROM shop_settings ORDER BY id LIMIT 1), 'usd');
-      END IF;
+      IF NEW.currency IS NULL THEN NEW.currency := shop_currency(); END IF;
       RETURN NEW;
     END $$;
     CREATE TRIGGER orders_currency BEFORE INSERT ON orders FOR EACH ROW EXECUTE FUNCTION orders_take_shop_currency();
@@ -26,6 +27,7 @@ export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.sequelize.query(`
     DROP TRIGGER IF EXISTS orders_currency ON orders;
     DROP FUNCTION IF EXISTS orders_take_shop_currency();
+    DROP FUNCTION IF EXISTS shop_currency();
     ALTER TABLE orders DROP COLUMN IF EXISTS currency;
   `);
 };

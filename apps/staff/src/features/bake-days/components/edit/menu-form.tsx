@@ -1,15 +1,15 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { boxLabel, centsToInput, parseMoney, type BakeDayEditView, type BoxSize } from '@fryline/schemas';
-import { FieldShell, LoadingState, useCurrency, useCurrencySign } from '@fryline/ui';
+import { boxLabel, centsToInput, currencySymbol, parseMoney, type BakeDayEditView, type BoxSize } from '@fryline/schemas';
+import { FieldShell, LoadingState, useCurrency } from '@fryline/ui';
 import { menuItemQueries } from '../../api/menu-item-queries';
 import { SectionForm, useServerReset } from './section-form';
 
 
 /** What this day sells and the box prices. Orders already paid keep what they paid. */
 export function MenuForm({ day }: { day: BakeDayEditView }) {
-  const sign = useCurrencySign();
   const currency = useCurrency();
+  const sign = currencySymbol(currency);
   const menu = useQuery(menuItemQueries.all());
   const [chosen, setChosen] = useState(() => new Set(day.menuItemIds));
   const pricesOf = () => Object.fromEntries(day.boxes.map((b) => [b.size, centsToInput(b.priceCents)])) as Partial<Record<BoxSize, string>>;
